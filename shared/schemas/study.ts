@@ -1,0 +1,224 @@
+/**
+ * The study document `stillspan.study/1`: one deck section model (2 DOF) with its structure, its
+ * aerodynamics and the wind-speed sweep. Units are SI throughout; each numeric field's `.describe()` names
+ * its unit. Conventions (domain guide §1): Scanlan's self-excited forces normalised with the full deck width
+ * B, K = Bω/U, Ur = U/(fB) = 2π/K, h and L positive downward, α and M nose-up.
+ *
+ * Messages are plain rule text ("must be greater than 0"); `formatStudyIssues` pairs each with the JSON path
+ * of the offending value ("$.structure.modes[1].frequency").
+ */
+import { z } from "zod";
+
+export const STUDY_FORMAT = "stillspan.study/1";
+/** Largest number of sweep intervals ((to − from) / step) a study may ask for. */
+export const MAX_SWEEP_STEPS = 20_000;
+
+const typeError = (expected: string) => (issue: { input?: unknown }) =>
+  issue.input === undefined ? "is required" : `must be ${expected}`;
+
+/** A finite number (zod 4 rejects NaN and ±Infinity by default) with its unit in the description. */
+const number = (description: string) => z.number({ error: typeError("a number") }).describe(description);
+const positive = (description: string) => number(description).positive({ error: "must be greater than 0" });
+
+const object = <T extends z.ZodRawShape>(shape: T) =>
+  z.strictObject(shape, {
+    error: (issue) =>
+      issue.code === "unrecognized_keys" ? "is not a field of this format" : typeError("an object")(issue),
+  });
+
+const modeSchema = object({
+  id: z
+    .string({ error: typeError("a string") })
+    .min(1, { error: "must have 1 to 16 characters" })
+    .max(16, { error: "must have 1 to 16 characters" })
+    .describe("Mode identifier, unique in the study (1–16 characters)"),
+  dof: z.enum(["heave", "torsion"], { error: 'must be "heave" or "torsion"' }).describe("Degree of freedom"),
+  frequency: positive("Natural frequency in still air, Hz"),
+  damping: number("Structural damping ratio of critical, dimensionless (0.005 = 0.5 %)")
+    .min(0, { error: "must be at least 0" })
+    .lt(1, { error: "must be less than 1" }),
+});
+
+const modesSchema = z
+  .array(modeSchema, { error: typeError("an array") })
+  .superRefine((modes, ctx) => {
+    for (const dof of ["heave", "torsion"] as const) {
+      const count = modes.filter((mode) => mode.dof === dof).length;
+      if (count !== 1) {
+        ctx.addIssue({ code: "custom", message: `must contain exactly one ${dof} mode (found ${count})` });
+      }
+    }
+    const seen = new Set<string>();
+    modes.forEach((mode, index) => {
+      if (seen.has(mode.id)) {
+        ctx.addIssue({ code: "custom", path: [index, "id"], message: `must be unique ("${mode.id}" is repeated)` });
+      }
+      seen.add(mode.id);
+    });
+  });
+
+const structureSchema = object({
+  mass: positive("Mass per unit length of deck, kg/m"),
+  inertia: positive("Mass moment of inertia per unit length about the deck centre (shear centre), kg·m²/m"),
+  modes: modesSchema,
+});
+
+const derivativeArray = (name: string) =>
+  z
+    .array(number(`${name}, dimensionless`), { error: typeError("an array of numbers") })
+    .optional()
+    .describe(`${name} at each reduced velocity, dimensionless, normalised with the full width B; missing = zeros`);
+
+const DERIVATIVE_NAMES = ["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const;
+
+const tabulatedSchema = object({
+  model: z.literal("tabulated"),
+  interpolation: z
+    .enum(["linear", "monotone-cubic"], { error: 'must be "linear" or "monotone-cubic"' })
+    .describe("Interpolation in reduced velocity: piecewise linear or Fritsch–Carlson monotone cubic"),
+  reducedVelocity: z
+    .array(positive("Reduced velocity Ur = U/(fB), dimensionless"), { error: typeError("an array of numbers") })
+    .min(2, { error: "must have at least 2 points" })
+    .describe("Reduced velocities Ur = U/(fB) of the table rows, dimensionless, strictly increasing"),
+  H1: derivativeArray("H1*"),
+  H2: derivativeArray("H2*"),
+  H3: derivativeArray("H3*"),
+  H4: derivativeArray("H4*"),
+  A1: derivativeArray("A1*"),
+  A2: derivativeArray("A2*"),
+  A3: derivativeArray("A3*"),
+  A4: derivativeArray("A4*"),
+  staticMomentSlope: number(
+    "Static moment slope dC_M/dα, per radian, moment coefficient on ½ρU²B²; default K²A3* at the largest Ur",
+  ).optional(),
+}).superRefine((table, ctx) => {
+  const ur = table.reducedVelocity;
+  for (let i = 1; i < ur.length; i++) {
+    if (!(ur[i] > ur[i - 1])) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["reducedVelocity", i],
+        message: `must be greater than the previous value ${ur[i - 1]} (reduced velocities must increase strictly)`,
+      });
+    }
+  }
+  for (const name of DERIVATIVE_NAMES) {
+    const values = table[name];
+    if (values !== undefined && values.length !== ur.length) {
+      ctx.addIssue({
+        code: "custom",
+        path: [name],
+        message: `must have as many values as reducedVelocity (${ur.length}), has ${values.length}`,
+      });
+    }
+  }
+});
+
+const flatPlateSchema = object({ model: z.literal("flat-plate") });
+
+const quasiSteadySchema = object({
+  model: z.literal("quasi-steady"),
+  liftSlope: number("Lift coefficient slope dC_L/dα, per radian, lift positive up, coefficient on ½ρU²B"),
+  dragCoefficient: number("Drag coefficient C_D on ½ρU²B, dimensionless").min(0, { error: "must be at least 0" }),
+  momentSlope: number("Moment coefficient slope dC_M/dα, per radian, nose-up, coefficient on ½ρU²B²"),
+});
+
+export const studyAerodynamicsSchema = z.discriminatedUnion(
+  "model",
+  [tabulatedSchema, flatPlateSchema, quasiSteadySchema],
+  {
+    error: (issue) =>
+      issue.input === undefined || typeof issue.input !== "object" || issue.input === null
+        ? typeError("an object")(issue)
+        : 'must have "model" set to "tabulated", "flat-plate" or "quasi-steady"',
+  },
+);
+
+const sweepSchema = object({
+  from: number("First mean wind speed at deck level, m/s").min(0, { error: "must be at least 0" }),
+  to: positive("Last mean wind speed at deck level, m/s"),
+  step: positive("Wind-speed step, m/s"),
+}).superRefine((sweep, ctx) => {
+  if (!(sweep.from < sweep.to)) {
+    ctx.addIssue({ code: "custom", path: ["to"], message: `must be greater than from (${sweep.from})` });
+    return;
+  }
+  const span = sweep.to - sweep.from;
+  if (sweep.step > span) {
+    ctx.addIssue({ code: "custom", path: ["step"], message: `must be at most to − from (${span})` });
+  } else if (sweepStepCount(sweep) > MAX_SWEEP_STEPS) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["step"],
+      message: `must give at most ${MAX_SWEEP_STEPS} steps between from and to (gives ${sweepStepCount(sweep)})`,
+    });
+  }
+});
+
+/** Number of sweep intervals, ceil((to − from)/step), with a relative tolerance for decimal steps. */
+export function sweepStepCount(sweep: { from: number; to: number; step: number }): number {
+  return Math.ceil((sweep.to - sweep.from) / sweep.step - 1e-9);
+}
+
+export const studyDocumentSchema = object({
+  format: z.literal(STUDY_FORMAT, { error: `must be "${STUDY_FORMAT}"` }),
+  name: z
+    .string({ error: typeError("a string") })
+    .max(200, { error: "must have at most 200 characters" })
+    .refine((name) => name.trim().length > 0, { error: "must not be blank" })
+    .describe("Name of the study, e.g. the deck alternative and revision"),
+  air: object({ density: number("Air density, kg/m³ (0 = still-air check)").min(0, { error: "must be at least 0" }) }),
+  deck: object({
+    width: positive("Deck width B (the reference length of the derivatives), m"),
+    depth: positive("Deck depth, m"),
+  }),
+  structure: structureSchema,
+  aerodynamics: studyAerodynamicsSchema,
+  sweep: sweepSchema,
+});
+
+export type StudyDocument = z.infer<typeof studyDocumentSchema>;
+export type StudyAerodynamics = z.infer<typeof studyAerodynamicsSchema>;
+export type StudyMode = StudyDocument["structure"]["modes"][number];
+export type StudySweep = StudyDocument["sweep"];
+export type DerivativeName = (typeof DERIVATIVE_NAMES)[number];
+export { DERIVATIVE_NAMES };
+
+/** One problem in a study document: the JSON path of the value and the rule it broke. */
+export interface StudyIssue {
+  path: string;
+  message: string;
+}
+
+const IDENTIFIER = /^[A-Za-z_$][A-Za-z0-9_$]*$/;
+
+function jsonPath(path: readonly PropertyKey[]): string {
+  let out = "$";
+  for (const key of path) {
+    if (typeof key === "number") out += `[${key}]`;
+    else if (typeof key === "string" && IDENTIFIER.test(key)) out += `.${key}`;
+    else out += `[${JSON.stringify(String(key))}]`;
+  }
+  return out;
+}
+
+/** Turns a zod error of `studyDocumentSchema` into JSON-path issues, one per bad value (unknown keys listed one by one). */
+export function formatStudyIssues(error: z.ZodError): StudyIssue[] {
+  const issues: StudyIssue[] = [];
+  for (const issue of error.issues) {
+    if (issue.code === "unrecognized_keys") {
+      for (const key of issue.keys) issues.push({ path: jsonPath([...issue.path, key]), message: issue.message });
+    } else {
+      issues.push({ path: jsonPath(issue.path), message: issue.message });
+    }
+  }
+  return issues;
+}
+
+export type ParseStudyResult = { ok: true; study: StudyDocument } | { ok: false; issues: StudyIssue[] };
+
+/** Validates an already JSON-decoded value as a `stillspan.study/1` document. */
+export function parseStudy(json: unknown): ParseStudyResult {
+  const result = studyDocumentSchema.safeParse(json);
+  return result.success ? { ok: true, study: result.data } : { ok: false, issues: formatStudyIssues(result.error) };
+}
