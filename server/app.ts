@@ -1,0 +1,65 @@
+import { existsSync } from "node:fs";
+import path from "node:path";
+import cookieParser from "cookie-parser";
+import express, { type Express } from "express";
+import helmet from "helmet";
+import type { Config } from "./config.js";
+import { projectRoot } from "./config.js";
+import type { Db } from "./db/client.js";
+import { logger as defaultLogger, type Logger } from "./logger.js";
+import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
+import { apiRouter } from "./routes/index.js";
+
+/** What every route factory and service receives. */
+export interface AppContext {
+  db: Db;
+  config: Config;
+  logger: Logger;
+}
+
+export interface CreateAppOptions {
+  db: Db;
+  config: Config;
+  logger?: Logger;
+  /** Built client to serve (default dist/client); skipped when the folder does not exist. */
+  clientDir?: string;
+}
+
+/** Builds the Express app: security headers, JSON API under /api, the built client with its SPA fallback. */
+export function createApp(options: CreateAppOptions): Express {
+  const ctx: AppContext = { db: options.db, config: options.config, logger: options.logger ?? defaultLogger };
+  const app = express();
+  app.disable("x-powered-by");
+  if (ctx.config.trustProxy) app.set("trust proxy", 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Plotly injects inline styles; scripts stay same-origin only.
+          "style-src": ["'self'", "'unsafe-inline'"],
+          "img-src": ["'self'", "data:", "blob:"],
+          "upgrade-insecure-requests": null,
+        },
+      },
+      // Served over plain HTTP on loopback by default: HSTS only makes sense behind an HTTPS proxy.
+      strictTransportSecurity: ctx.config.trustProxy,
+    }),
+  );
+  app.use(express.json({ limit: "1mb" }));
+  app.use(cookieParser());
+
+  app.use("/api", apiRouter(ctx), apiNotFound);
+
+  const clientDir = options.clientDir ?? path.join(projectRoot, "dist", "client");
+  if (existsSync(path.join(clientDir, "index.html"))) {
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => {
+      res.setHeader("Cache-Control", "no-cache");
+      res.sendFile(path.join(clientDir, "index.html"));
+    });
+  }
+
+  app.use(errorHandler(ctx.logger));
+  return app;
+}

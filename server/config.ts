@@ -1,0 +1,115 @@
+import { randomBytes } from "node:crypto";
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { z } from "zod";
+
+/** Absolute path of the project root (the folder holding package.json). */
+export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
+
+const port = (fallback: number) => z.coerce.number().int().min(0).max(65535).default(fallback);
+const optionalText = z.string().trim().min(1).optional();
+const flag = z
+  .enum(["0", "1", "true", "false", ""])
+  .optional()
+  .transform((v) => v === "1" || v === "true");
+
+/** Every environment variable the server reads, validated once at start. */
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  HOST: z.string().default("127.0.0.1"),
+  PORT: port(3000),
+  PGPORT: port(54329),
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).optional(),
+  STILLSPAN_DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/, "lower-case letters, digits and _ only").default("stillspan"),
+  STILLSPAN_DATA_DIR: optionalText,
+  STILLSPAN_SEED: z.enum(["demo", "none"]).default("demo"),
+  STILLSPAN_SESSION_SECRET: z.string().min(32, "at least 32 characters").optional(),
+  STILLSPAN_ADMIN_EMAIL: z.email().optional(),
+  STILLSPAN_ADMIN_PASSWORD: z.string().min(12, "at least 12 characters").optional(),
+  STILLSPAN_SIGNIN_LIMIT: z.coerce.number().int().positive().default(10),
+  STILLSPAN_SIGNIN_WINDOW_MS: z.coerce.number().int().positive().default(15 * 60 * 1000),
+  TRUST_PROXY: flag,
+  SMTP_HOST: optionalText,
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  SMTP_USER: optionalText,
+  SMTP_PASSWORD: optionalText,
+  SMTP_FROM: z.email().optional(),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export interface Config {
+  nodeEnv: Env["NODE_ENV"];
+  host: string;
+  port: number;
+  pgPort: number;
+  databaseUrl?: string;
+  databaseName: string;
+  dataDir: string;
+  seed: Env["STILLSPAN_SEED"];
+  sessionSecret: Uint8Array;
+  admin?: { email: string; password: string };
+  signInRateLimit: { limit: number; windowMs: number };
+  trustProxy: boolean;
+  smtp: { host?: string; port?: number; user?: string; password?: string; from?: string };
+}
+
+export class ConfigError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Invalid configuration:\n${problems.map((p) => `  - ${p}`).join("\n")}`);
+    this.name = "ConfigError";
+  }
+}
+
+/** Parses the environment; throws a ConfigError listing every missing or bad variable at once. */
+export function parseEnv(env: NodeJS.ProcessEnv = process.env): Env {
+  const result = envSchema.safeParse(env);
+  const problems = result.success ? [] : result.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`);
+  if (result.success) {
+    const e = result.data;
+    if (Boolean(e.STILLSPAN_ADMIN_EMAIL) !== Boolean(e.STILLSPAN_ADMIN_PASSWORD)) {
+      problems.push("STILLSPAN_ADMIN_EMAIL and STILLSPAN_ADMIN_PASSWORD: set both or neither");
+    }
+  }
+  if (problems.length > 0 || !result.success) throw new ConfigError(problems);
+  return result.data;
+}
+
+/**
+ * The session signing secret: STILLSPAN_SESSION_SECRET when set, otherwise a random 256-bit secret generated on
+ * first start and kept in <dataDir>/session-secret (mode 0600) so sessions survive restarts.
+ */
+export function loadSessionSecret(dataDir: string, fromEnv?: string): Uint8Array {
+  if (fromEnv) return new TextEncoder().encode(fromEnv);
+  const file = path.join(dataDir, "session-secret");
+  if (!existsSync(file)) {
+    mkdirSync(dataDir, { recursive: true });
+    writeFileSync(file, randomBytes(32).toString("base64url") + "\n", { mode: 0o600, flag: "wx" });
+  }
+  chmodSync(file, 0o600);
+  return new TextEncoder().encode(readFileSync(file, "utf8").trim());
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const e = parseEnv(env);
+  const dataDir = path.resolve(projectRoot, e.STILLSPAN_DATA_DIR ?? ".data");
+  return {
+    nodeEnv: e.NODE_ENV,
+    host: e.HOST,
+    port: e.PORT,
+    pgPort: e.PGPORT,
+    databaseUrl: e.DATABASE_URL,
+    databaseName: e.STILLSPAN_DB_NAME,
+    dataDir,
+    seed: e.STILLSPAN_SEED,
+    sessionSecret: loadSessionSecret(dataDir, e.STILLSPAN_SESSION_SECRET),
+    admin:
+      e.STILLSPAN_ADMIN_EMAIL && e.STILLSPAN_ADMIN_PASSWORD
+        ? { email: e.STILLSPAN_ADMIN_EMAIL.toLowerCase(), password: e.STILLSPAN_ADMIN_PASSWORD }
+        : undefined,
+    signInRateLimit: { limit: e.STILLSPAN_SIGNIN_LIMIT, windowMs: e.STILLSPAN_SIGNIN_WINDOW_MS },
+    trustProxy: e.TRUST_PROXY,
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, password: e.SMTP_PASSWORD, from: e.SMTP_FROM },
+  };
+}

@@ -1,0 +1,5 @@
+// Every table and enum of the database, one file per concern. drizzle.config.ts points here: a table must be
+// exported from this file (directly or by re-export) or drizzle-kit silently leaves it out of the migration.
+export * from "./users.js";
+export * from "./projects.js";
+export * from "./audit-events.js";

@@ -1,0 +1,9 @@
+import { demoAccounts } from "./accounts.js";
+import { demoProject } from "./projects.js";
+import type { SeedStep } from "./types.js";
+
+/**
+ * The demo seed, in order. Later features append their own step files here (studies, revisions, signed
+ * summaries); each step reads earlier ids through `ref(ctx, key)`.
+ */
+export const DEMO_SEED_STEPS: SeedStep[] = [demoAccounts, demoProject];

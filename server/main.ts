@@ -1,0 +1,74 @@
+/**
+ * Production entry (`npm start`): config → PostgreSQL (our own cluster unless DATABASE_URL) → migrations →
+ * demo seed on an empty database (unless STILLSPAN_SEED=none) → HTTP on HOST:PORT (127.0.0.1:3000).
+ */
+import type { Server } from "node:http";
+import { createApp } from "./app.js";
+import { ConfigError, loadConfig, projectRoot, type Config } from "./config.js";
+import { createDb, type Db } from "./db/client.js";
+import { runMigrations } from "./db/migrate.js";
+import { createDatabase, ensureLocalPostgres } from "./db/pg-local.js";
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "./db/seed/accounts.js";
+import { prepareDatabaseContent } from "./db/seed.js";
+import { logger } from "./logger.js";
+
+async function resolveDatabaseUrl(config: Config): Promise<string> {
+  if (config.databaseUrl) return config.databaseUrl;
+  const cluster = await ensureLocalPostgres({ projectRoot, port: config.pgPort, logger });
+  await createDatabase(cluster.url, config.databaseName);
+  return cluster.urlFor(config.databaseName);
+}
+
+async function main(): Promise<void> {
+  let config: Config;
+  try {
+    config = loadConfig();
+  } catch (err) {
+    if (err instanceof ConfigError) {
+      console.error(err.message);
+      process.exit(2);
+    }
+    throw err;
+  }
+
+  const db: Db = createDb(await resolveDatabaseUrl(config));
+  await runMigrations(db);
+  const seeded = await prepareDatabaseContent(db, config, logger);
+
+  const app = createApp({ db, config, logger });
+  const server: Server = app.listen(config.port, config.host);
+  await new Promise<void>((resolve, reject) => {
+    server.once("listening", resolve);
+    server.once("error", reject);
+  });
+  const address = server.address();
+  const port = typeof address === "object" && address ? address.port : config.port;
+  const url = `http://${config.host}:${port}`;
+  logger.info({ url }, "Stillspan is listening");
+  console.log(`\nStillspan runs at ${url}`);
+  if (seeded === "demo" || config.seed === "demo") {
+    console.log(`Demo accounts (password "${DEMO_PASSWORD}"; demo data is invented):`);
+    for (const a of DEMO_ACCOUNTS) console.log(`  ${a.email.padEnd(26)} ${a.label}`);
+  }
+  console.log("");
+
+  const shutdown = (signal: string) => {
+    logger.info({ signal }, "shutting down");
+    server.close(() => void db.$client.end().finally(() => process.exit(0)));
+    server.closeAllConnections();
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.once("SIGINT", () => shutdown("SIGINT"));
+  process.once("SIGTERM", () => shutdown("SIGTERM"));
+}
+
+process.on("unhandledRejection", (err) => {
+  logger.fatal({ err }, "unhandled promise rejection");
+  process.exit(1);
+});
+
+main().catch((err: unknown) => {
+  logger.fatal({ err }, "Stillspan failed to start");
+  console.error(`Stillspan failed to start: ${err instanceof Error ? err.message : String(err)}`);
+  process.exit(1);
+});
