@@ -1,0 +1,133 @@
+/**
+ * The signed stability summary `stillspan.summary/1`: what a reviewer signs for one study revision and what the
+ * owner's representative reads. The server signs the RFC 8785 canonical JSON of this object (compact JWS, EdDSA);
+ * anyone holding the JWKS can check that the numbers below are exactly what was computed and signed.
+ *
+ * Units are SI (m/s, Hz); each numeric field's `.describe()` names its unit. A critical speed of `null` means
+ * "not reached within the swept range": read it together with `sweep.toMps` (the summary says "> toMps").
+ */
+import { z } from "zod";
+
+export const SUMMARY_FORMAT = "stillspan.summary/1";
+
+const text = (max: number) =>
+  z.string().trim().min(1, "must not be blank").max(max, `must have at most ${max} characters`);
+const id = z.string().min(1).max(64).describe("Database identifier of the object");
+const sha256 = z.string().regex(/^[0-9a-f]{64}$/, "must be 64 lower-case hex digits (SHA-256)");
+const speedMps = (what: string) => z.number().nonnegative().describe(`${what}, m/s (mean wind at deck level)`);
+const frequencyHz = (what: string) => z.number().nonnegative().describe(`${what}, Hz`);
+
+export const summaryModelSchema = z.strictObject({
+  kind: z.enum(["section-model", "multimode"]).describe("Structural model of the study"),
+  degreesOfFreedom: z
+    .number()
+    .int()
+    .positive()
+    .describe("Number of structural degrees of freedom (2 for a section model)"),
+  aerodynamics: z
+    .enum(["tabulated", "flat-plate", "quasi-steady"])
+    .describe("Self-excited force model: measured derivatives, thin-plate theory or quasi-steady theory"),
+});
+
+export const summaryAeroDataSchema = z.strictObject({
+  name: text(200).describe("Name of the aerodynamic data set, or of the theory used"),
+  origin: z.enum(["measured", "theoretical"]).describe("Wind-tunnel measurement or theory"),
+  sha256: sha256.nullable().describe("SHA-256 of the uploaded file as received; null for theory"),
+  deliveredConvention: z
+    .strictObject({
+      abscissa: text(40).describe("Abscissa as delivered, e.g. U/(fB), U/(fb), K = Bω/U, k = bω/U"),
+      normalisation: text(40).describe("Force normalisation as delivered, e.g. ½ρU²B or 2B"),
+      signConvention: text(40).describe("Sign convention as delivered, e.g. h and L downward"),
+    })
+    .nullable()
+    .describe("How the measured derivatives were delivered (converted to the study's convention); null for theory"),
+  testedReducedVelocity: z
+    .tuple([z.number(), z.number()])
+    .nullable()
+    .describe("Tested range of reduced velocity U/(fB), dimensionless [min, max]; null for theory"),
+  facility: text(500).nullable().describe("Test facility and conditions, as recorded with the data set"),
+});
+
+export const summaryFlutterSchema = z.strictObject({
+  speedMps: speedMps("Flutter speed: lowest speed where an oscillatory pole's damping ratio crosses zero"),
+  frequencyHz: frequencyHz("Frequency of the unstable pole at the flutter speed"),
+  branch: text(40).describe("Identifier of the branch (pole path) that goes unstable"),
+  character: text(80).describe("Character of the branch at flutter, e.g. torsion-dominated coupled"),
+});
+
+export const summaryDivergenceSchema = z.strictObject({
+  speedMps: speedMps("Torsional divergence speed"),
+  frequencyHz: frequencyHz("Frequency at divergence (static instability: 0)"),
+});
+
+export const summaryRequirementSchema = z.strictObject({
+  phenomenon: z.enum(["flutter", "divergence", "vortex-shedding", "galloping"]).describe("What is checked"),
+  requiredSpeedMps: speedMps("Speed the critical speed must exceed"),
+  criticalSpeedMps: speedMps("Critical speed found; null when not reached in the sweep").nullable(),
+  margin: z
+    .number()
+    .nullable()
+    .describe("Critical speed ÷ required speed, dimensionless; null when not reached (then > sweep end ÷ required)"),
+  pass: z
+    .boolean()
+    .describe("Critical speed > required; if not reached, pass only when the sweep end exceeds the required"),
+  criterion: text(80).describe("Identifier of the criterion in `criteria` that sets the required speed"),
+});
+
+export const summaryCriterionSchema = z.strictObject({
+  id: text(80).describe("Identifier of the criterion"),
+  label: text(200).describe("What the criterion requires, in words"),
+  factor: z.number().positive().nullable().describe("Factor applied to the reference speed, dimensionless"),
+  referenceSpeedMps: speedMps("Reference speed the factor applies to, e.g. design mean wind at deck level").nullable(),
+  basis: text(500).describe("Source of the criterion: standard and clause, project specification, or common practice"),
+});
+
+export const summaryWarningSchema = z.strictObject({
+  code: text(80).describe("Stable machine-readable code of the warning"),
+  message: text(1000).describe("The warning as shown to the reader"),
+});
+
+export const summaryPayloadSchema = z.strictObject({
+  format: z.literal(SUMMARY_FORMAT),
+  project: z.strictObject({ id, name: text(200) }),
+  alternative: z.strictObject({ id, name: text(200) }),
+  study: z.strictObject({ id, name: text(200) }),
+  revision: z.strictObject({
+    id,
+    number: z.number().int().positive().describe("Revision number within the study (1, 2, …)"),
+    contentHash: sha256.describe("SHA-256 over the RFC 8785 canonical JSON of the study document"),
+    createdAt: z.iso.datetime({ offset: true }).describe("When the revision was computed and stored (ISO 8601)"),
+  }),
+  engineVersion: text(40).describe("Version of the engine that computed the result"),
+  model: summaryModelSchema,
+  aerodynamicData: summaryAeroDataSchema,
+  sweep: z.strictObject({
+    fromMps: speedMps("First speed of the sweep"),
+    toMps: speedMps("Last speed of the sweep"),
+    airDensityKgM3: z.number().nonnegative().describe("Air density, kg/m³"),
+  }),
+  flutter: summaryFlutterSchema.nullable().describe("null: no flutter up to sweep.toMps"),
+  divergence: summaryDivergenceSchema
+    .nullable()
+    .describe("null: no divergence (static moment slope ≤ 0) or above sweep.toMps"),
+  requirements: z.array(summaryRequirementSchema).describe("Required speeds and margins, one row per check"),
+  criteria: z.array(summaryCriterionSchema).describe("Criteria that set the required speeds, with their basis"),
+  warnings: z.array(summaryWarningSchema).describe("Warnings of the computation (extrapolation, model limits, …)"),
+  signer: z.strictObject({ name: text(200), email: z.email() }),
+  signedAt: z.iso.datetime({ offset: true }).describe("Signing time (ISO 8601, UTC)"),
+  statement: text(4000).describe("The reviewer's statement, in the reviewer's words"),
+});
+
+export type SummaryPayload = z.infer<typeof summaryPayloadSchema>;
+export type SummaryRequirement = z.infer<typeof summaryRequirementSchema>;
+export type SummaryCriterion = z.infer<typeof summaryCriterionSchema>;
+export type SummaryWarning = z.infer<typeof summaryWarningSchema>;
+
+/** The cautions every rendering of a summary carries (page, PDF, e-mail that mentions results). */
+export const SUMMARY_CAUTIONS = [
+  "Results are indicative.",
+  "Flutter derivatives must come from tests on the actual deck section; thin-plate and quasi-steady theory can " +
+    "be unconservative for bluff decks, and extrapolation beyond the tested reduced velocities is unreliable.",
+  "Critical designs need wind-tunnel verification and review by a licensed engineer under the governing local " +
+    "codes and standards.",
+] as const;
