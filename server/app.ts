@@ -3,6 +3,7 @@ import path from "node:path";
 import cookieParser from "cookie-parser";
 import express, { type Express } from "express";
 import helmet from "helmet";
+import { APP_CONTEXT_KEY, type AppContext } from "./app-context.js";
 import type { Config } from "./config.js";
 import { projectRoot } from "./config.js";
 import type { Db } from "./db/client.js";
@@ -10,12 +11,7 @@ import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
 
-/** What every route factory and service receives. */
-export interface AppContext {
-  db: Db;
-  config: Config;
-  logger: Logger;
-}
+export type { AppContext } from "./app-context.js";
 
 export interface CreateAppOptions {
   db: Db;
@@ -29,6 +25,7 @@ export interface CreateAppOptions {
 export function createApp(options: CreateAppOptions): Express {
   const ctx: AppContext = { db: options.db, config: options.config, logger: options.logger ?? defaultLogger };
   const app = express();
+  app.locals[APP_CONTEXT_KEY] = ctx;
   app.disable("x-powered-by");
   if (ctx.config.trustProxy) app.set("trust proxy", 1);
 

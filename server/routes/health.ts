@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import { Router } from "express";
-import type { AppContext } from "../app.js";
+import type { AppContext } from "../app-context.js";
 
 /** GET /api/health → 200 {status:"ok",db:"ok"}, or 503 {status:"error",db:"down"} when PostgreSQL does not answer. */
 export function healthRoutes({ db, logger }: AppContext): Router {

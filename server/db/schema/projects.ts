@@ -1,4 +1,5 @@
 import { index, integer, pgEnum, pgTable, serial, text, timestamp, unique } from "drizzle-orm/pg-core";
+import { PROJECT_ROLES as ROLES } from "../../../shared/schemas/auth.js";
 import { users } from "./users.js";
 
 /** A crossing (or any deck design job): the unit of access control. */
@@ -13,7 +14,7 @@ export const projects = pgTable("projects", {
 });
 
 /** Project roles: analyst (runs sweeps, edits studies), reviewer (compares, returns or signs), viewer (reads). */
-export const projectRole = pgEnum("project_role", ["analyst", "reviewer", "viewer"]);
+export const projectRole = pgEnum("project_role", ROLES);
 export const PROJECT_ROLES = projectRole.enumValues;
 export type ProjectRole = (typeof PROJECT_ROLES)[number];
 

@@ -1,0 +1,71 @@
+import { and, asc, eq, sql } from "drizzle-orm";
+import type { DbOrTx } from "../client.js";
+import { memberships, projects, users, type Project, type ProjectRole } from "../schema/index.js";
+
+export type ProjectWithRole = Project & { role: ProjectRole | null };
+
+const withRoleColumns = (userId: number) => ({
+  id: projects.id,
+  name: projects.name,
+  description: projects.description,
+  siteNotes: projects.siteNotes,
+  createdBy: projects.createdBy,
+  createdAt: projects.createdAt,
+  updatedAt: projects.updatedAt,
+  role: sql<ProjectRole | null>`(select m.role from ${memberships} m where m.project_id = ${projects.id} and m.user_id = ${userId})`,
+});
+
+/** Projects the user is a member of, with their role, by name. */
+export async function listProjectsOfMember(db: DbOrTx, userId: number): Promise<ProjectWithRole[]> {
+  return db
+    .select({ ...withRoleColumns(userId), role: memberships.role })
+    .from(projects)
+    .innerJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, userId)))
+    .orderBy(asc(projects.name), asc(projects.id));
+}
+
+/** Every project, with the user's role where they are a member (administrators). */
+export async function listAllProjects(db: DbOrTx, userId: number): Promise<ProjectWithRole[]> {
+  return db.select(withRoleColumns(userId)).from(projects).orderBy(asc(projects.name), asc(projects.id));
+}
+
+export async function findProjectById(db: DbOrTx, projectId: number, userId: number): Promise<ProjectWithRole | undefined> {
+  const [row] = await db.select(withRoleColumns(userId)).from(projects).where(eq(projects.id, projectId)).limit(1);
+  return row;
+}
+
+export async function projectExists(db: DbOrTx, projectId: number): Promise<boolean> {
+  const [row] = await db.select({ id: projects.id }).from(projects).where(eq(projects.id, projectId)).limit(1);
+  return row !== undefined;
+}
+
+export async function findMembershipRole(db: DbOrTx, userId: number, projectId: number): Promise<ProjectRole | undefined> {
+  const [row] = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.userId, userId), eq(memberships.projectId, projectId)))
+    .limit(1);
+  return row?.role;
+}
+
+export async function updateProjectTexts(
+  db: DbOrTx,
+  projectId: number,
+  patch: Partial<Pick<Project, "name" | "description" | "siteNotes">>,
+): Promise<Project | undefined> {
+  const [row] = await db
+    .update(projects)
+    .set({ ...patch, updatedAt: new Date() })
+    .where(eq(projects.id, projectId))
+    .returning();
+  return row;
+}
+
+export async function listProjectMembers(db: DbOrTx, projectId: number) {
+  return db
+    .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.projectId, projectId))
+    .orderBy(asc(memberships.role), asc(users.name));
+}

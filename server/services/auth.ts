@@ -1,0 +1,86 @@
+/**
+ * Sign-in and sessions. A session is a JWT (HS256, signed with the server's session secret) naming the user;
+ * it lives 12 h in an httpOnly cookie. Every request re-reads the user, so a deleted user loses access at once.
+ */
+import { errors as joseErrors, jwtVerify, SignJWT } from "jose";
+import type { Me, SignInInput } from "../../shared/schemas/auth.js";
+import type { DbOrTx } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import { findUserByEmail, findUserById, listMembershipsOfUser } from "../db/queries/users.js";
+import type { User } from "../db/schema/index.js";
+import { AppError } from "../errors.js";
+import { DUMMY_HASH, verifyPassword } from "./passwords.js";
+
+export const SESSION_COOKIE = "stillspan_session";
+export const SESSION_TTL_SECONDS = 12 * 60 * 60;
+const ISSUER = "stillspan";
+const AUDIENCE = "stillspan-session";
+
+/** The signed-in user as routes and services see it. */
+export interface SessionUser {
+  id: number;
+  email: string;
+  name: string;
+  isAdmin: boolean;
+}
+
+/** Same answer for an unknown e-mail and a wrong password, so the response does not reveal who has an account. */
+const invalidCredentials = () => new AppError(401, "invalid_credentials", "E-mail or password is incorrect.");
+
+export async function createSessionToken(secret: Uint8Array, userId: number, now = new Date()): Promise<string> {
+  const issuedAt = Math.floor(now.getTime() / 1000);
+  return new SignJWT({})
+    .setProtectedHeader({ alg: "HS256", typ: "JWT" })
+    .setSubject(String(userId))
+    .setIssuer(ISSUER)
+    .setAudience(AUDIENCE)
+    .setIssuedAt(issuedAt)
+    .setExpirationTime(issuedAt + SESSION_TTL_SECONDS)
+    .sign(secret);
+}
+
+/** The user id in a valid, unexpired session token; undefined for anything else (tampered, expired, malformed). */
+export async function readSessionToken(secret: Uint8Array, token: string): Promise<number | undefined> {
+  try {
+    const { payload } = await jwtVerify(token, secret, { algorithms: ["HS256"], issuer: ISSUER, audience: AUDIENCE });
+    const id = Number(payload.sub);
+    return Number.isSafeInteger(id) && id > 0 ? id : undefined;
+  } catch (err) {
+    if (err instanceof joseErrors.JOSEError) return undefined;
+    throw err;
+  }
+}
+
+export function toSessionUser(user: User): SessionUser {
+  return { id: user.id, email: user.email, name: user.name, isAdmin: user.isAdmin };
+}
+
+/** Checks the credentials; on success records the sign-in and returns the user. */
+export async function signIn(db: DbOrTx, input: SignInInput, ip: string | undefined): Promise<SessionUser> {
+  const user = await findUserByEmail(db, input.email);
+  // Compare against a dummy hash for unknown e-mails so both failures take the same time.
+  const ok = await verifyPassword(input.password, user?.passwordHash ?? DUMMY_HASH);
+  if (!user || !ok) throw invalidCredentials();
+  await writeAudit(db, { actorId: user.id, action: "auth.sign-in", objectType: "user", objectId: user.id, ip });
+  return toSessionUser(user);
+}
+
+/** The user behind a session token, or undefined when the token is invalid or the user no longer exists. */
+export async function userFromSession(db: DbOrTx, secret: Uint8Array, token: string): Promise<SessionUser | undefined> {
+  const id = await readSessionToken(secret, token);
+  if (id === undefined) return undefined;
+  const user = await findUserById(db, id);
+  return user ? toSessionUser(user) : undefined;
+}
+
+/** Body of GET /api/auth/me. */
+export async function describeMe(db: DbOrTx, user: SessionUser): Promise<Me> {
+  const memberships = await listMembershipsOfUser(db, user.id);
+  return {
+    id: String(user.id),
+    email: user.email,
+    name: user.name,
+    isAdmin: user.isAdmin,
+    memberships: memberships.map((m) => ({ projectId: String(m.projectId), role: m.role })),
+  };
+}

@@ -1,0 +1,2 @@
+import { expect, it } from "vitest";
+it("x", () => { expect({ a: "hello" }).toMatchObject({ a: /zzz/ }); });

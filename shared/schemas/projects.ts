@@ -1,0 +1,36 @@
+/**
+ * Contract of the projects API (`/api/projects*`). Identifiers travel as decimal strings; times as ISO 8601.
+ */
+import { z } from "zod";
+import { projectRoleSchema } from "./auth";
+
+export const projectSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  description: z.string(),
+  siteNotes: z.string(),
+  /** The caller's membership role; null for an administrator who is not a member. */
+  role: projectRoleSchema.nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type ProjectDto = z.infer<typeof projectSchema>;
+
+/** PATCH /api/projects/:id — analysts (and administrators) edit the project's texts. */
+export const projectPatchSchema = z
+  .strictObject({
+    name: z.string().trim().min(1, "must not be blank").max(200, "must have at most 200 characters"),
+    description: z.string().trim().max(5000, "must have at most 5000 characters"),
+    siteNotes: z.string().trim().max(20000, "must have at most 20000 characters"),
+  })
+  .partial()
+  .refine((p) => Object.keys(p).length > 0, "give at least one of name, description, siteNotes");
+export type ProjectPatch = z.infer<typeof projectPatchSchema>;
+
+export const projectMemberSchema = z.object({
+  userId: z.string(),
+  name: z.string(),
+  email: z.string(),
+  role: projectRoleSchema,
+});
+export type ProjectMember = z.infer<typeof projectMemberSchema>;
