@@ -1,0 +1,87 @@
+import { useQueryClient, type QueryClient } from "@tanstack/react-query";
+import { useMemo } from "react";
+import { createBrowserRouter, redirect, RouterProvider, type RouteObject } from "react-router-dom";
+import { LoadingBlock } from "@/components/ui/spinner";
+import { paths } from "@/config/paths";
+import { homeHref, requireUser } from "@/app/routes/guards";
+import { RouteErrorBoundary } from "@/app/routes/route-error-boundary";
+
+/**
+ * Data routes. Each screen is its own lazily loaded module (heavy screens such as plots then cost nothing
+ * until opened), guarded by its loader, and wrapped in its own error boundary so one failing screen leaves
+ * the frame and navigation usable.
+ */
+export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.auth.signIn.path,
+      ErrorBoundary: RouteErrorBoundary,
+      lazy: async () => {
+        const { SignInRoute, clientLoader } = await import("@/app/routes/sign-in");
+        return { Component: SignInRoute, loader: clientLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.home.path,
+      ErrorBoundary: RouteErrorBoundary,
+      HydrateFallback: () => <LoadingBlock label="Loading Stillspan…" className="min-h-dvh" />,
+      lazy: async () => {
+        const { AppRoot, clientLoader } = await import("@/app/routes/app/root");
+        return { Component: AppRoot, loader: clientLoader(queryClient) };
+      },
+      children: [
+        {
+          index: true,
+          ErrorBoundary: RouteErrorBoundary,
+          loader: async ({ request }) => redirect(homeHref(await requireUser(queryClient, request))),
+        },
+        {
+          path: paths.app.projects.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { ProjectsRoute, clientLoader } = await import("@/app/routes/app/projects");
+            return { Component: ProjectsRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.project.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { ProjectRoute, clientLoader } = await import("@/app/routes/app/project");
+            return { Component: ProjectRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.signedSummaries.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { SignedSummariesRoute, clientLoader } = await import("@/app/routes/app/signed-summaries");
+            return { Component: SignedSummariesRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.admin.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { AdminRoute, clientLoader } = await import("@/app/routes/app/admin");
+            return { Component: AdminRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: "*",
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { NotFoundRoute } = await import("@/app/routes/app/not-found");
+            return { Component: NotFoundRoute };
+          },
+        },
+      ],
+    },
+  ];
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const router = useMemo(() => createBrowserRouter(createAppRoutes(queryClient)), [queryClient]);
+  return <RouterProvider router={router} />;
+}

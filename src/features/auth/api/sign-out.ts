@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { apiPaths } from "@/config/paths";
+import { api } from "@/lib/api-client";
+import { meQueryKey } from "@/features/auth/api/get-me";
+
+export function signOut(): Promise<void> {
+  return api.post<void>(apiPaths.auth.signOut, undefined, { redirectOnUnauthorized: false });
+}
+
+/** Ends the session on the server, then forgets every cached answer so nothing outlives the session. */
+export function useSignOut({ onSuccess }: { onSuccess?: () => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: signOut,
+    onSuccess: () => {
+      // Mark the session gone first, so the sign-in page's check sees it, then drop everything else.
+      queryClient.setQueryData(meQueryKey, null);
+      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== meQueryKey[0] });
+      onSuccess?.();
+    },
+  });
+}

@@ -1,0 +1,103 @@
+import { paths, safeRedirectTarget } from "@/config/paths";
+import type { ApiErrorBody } from "@/types/api";
+
+/** An HTTP or network failure, carrying the server's `{ error: { code, message, details } }` when there is one. */
+export class ApiError extends Error {
+  override readonly name = "ApiError";
+
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+
+  get isUnauthorized(): boolean {
+    return this.status === 401;
+  }
+}
+
+type JsonBody = Record<string, unknown> | unknown[];
+
+export interface RequestOptions {
+  method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+  body?: JsonBody;
+  signal?: AbortSignal;
+  /**
+   * By default a 401 means the session is gone, and the browser is sent to the sign-in page (returning here
+   * afterwards). The session probe and the sign-in call itself turn this off and handle 401 as an answer.
+   */
+  redirectOnUnauthorized?: boolean;
+}
+
+function isApiErrorBody(value: unknown): value is ApiErrorBody {
+  if (typeof value !== "object" || value === null || !("error" in value)) return false;
+  const error = (value as { error: unknown }).error;
+  return typeof error === "object" && error !== null && typeof (error as { message?: unknown }).message === "string";
+}
+
+function redirectToSignIn(): void {
+  const here = `${window.location.pathname}${window.location.search}`;
+  if (window.location.pathname === paths.auth.signIn.path) return;
+  window.location.assign(paths.auth.signIn.getHref(safeRedirectTarget(here)));
+}
+
+async function readJson(response: Response): Promise<unknown> {
+  const text = await response.text();
+  if (text === "") return undefined;
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new ApiError(
+      response.status,
+      "bad_response",
+      `The server answered ${response.status} with a body that is not JSON.`,
+    );
+  }
+}
+
+/** The one way the client talks to the API: JSON in and out, the session cookie included, typed errors. */
+export async function apiRequest<T>(url: string, options: RequestOptions = {}): Promise<T> {
+  const { method = "GET", body, signal, redirectOnUnauthorized = true } = options;
+  const headers: Record<string, string> = { Accept: "application/json" };
+  if (body !== undefined) headers["Content-Type"] = "application/json";
+
+  let response: Response;
+  try {
+    response = await fetch(url, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+      credentials: "same-origin",
+      signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
+    throw new ApiError(0, "network_error", "Could not reach the Stillspan server. Check the connection and retry.");
+  }
+
+  const payload = await readJson(response);
+  if (response.ok) return payload as T;
+
+  if (response.status === 401 && redirectOnUnauthorized) redirectToSignIn();
+  if (isApiErrorBody(payload)) {
+    const { code, message, details } = payload.error;
+    throw new ApiError(response.status, code, message, details);
+  }
+  throw new ApiError(response.status, "http_error", `The server answered ${response.status} ${response.statusText}.`);
+}
+
+export const api = {
+  get: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "GET" }),
+  post: <T>(url: string, body?: JsonBody, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "POST", body }),
+  put: <T>(url: string, body?: JsonBody, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "PUT", body }),
+  patch: <T>(url: string, body?: JsonBody, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "PATCH", body }),
+  delete: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "DELETE" }),
+};
