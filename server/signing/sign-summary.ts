@@ -6,7 +6,7 @@
 import { CompactSign } from "jose";
 import { canonicalJsonBytes } from "@shared/canonical-json";
 import { summaryPayloadSchema, type SummaryPayload } from "@shared/schemas/summary";
-import { SIGNING_ALG, type KeyStore } from "./key-store";
+import { SIGNING_ALG, type KeyStore } from "./key-store.js";
 
 /** `typ` header of a signed summary (RFC 7515 §4.1.9; "application/" omitted as the RFC recommends). */
 export const SUMMARY_JWS_TYP = "stillspan-summary+jws";

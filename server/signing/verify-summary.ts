@@ -8,8 +8,8 @@
 import { compactVerify, createLocalJWKSet, decodeProtectedHeader, errors, type JSONWebKeySet } from "jose";
 import { canonicalJson } from "@shared/canonical-json";
 import { SUMMARY_FORMAT, summaryPayloadSchema, type SummaryPayload } from "@shared/schemas/summary";
-import { SIGNING_ALG } from "./key-store";
-import { SUMMARY_JWS_TYP } from "./sign-summary";
+import { SIGNING_ALG } from "./key-store.js";
+import { SUMMARY_JWS_TYP } from "./sign-summary.js";
 
 export type SummaryVerification =
   | { valid: true; kid: string; summary: SummaryPayload }
@@ -45,7 +45,9 @@ export async function verifySummary(jws: string, jwks: JSONWebKeySet): Promise<S
     typ = result.protectedHeader.typ;
   } catch (err) {
     if (err instanceof errors.JWKSNoMatchingKey) return invalid(`signed with key ${kid}, which is not in the JWKS`);
-    if (err instanceof errors.JWSSignatureVerificationFailed) return invalid("the signature does not match the content");
+    if (err instanceof errors.JWSSignatureVerificationFailed) {
+      return invalid("the signature does not match the content");
+    }
     if (err instanceof errors.JOSEAlgNotAllowed) return invalid(`algorithm not allowed (only ${SIGNING_ALG})`);
     return invalid(`malformed JWS: ${(err as Error).message}`);
   }

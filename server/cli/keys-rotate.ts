@@ -1,0 +1,25 @@
+/**
+ * `npm run keys:rotate`: makes a new current signing key in the key folder. Summaries signed with older keys keep
+ * verifying: their public keys stay in the JWKS. A running server picks the new key up on its next signature.
+ */
+import { ConfigError, loadConfig } from "../config.js";
+import { KeyStore, KeyStoreError, keyStoreOptionsFromEnv } from "../signing/key-store.js";
+
+async function main(): Promise<void> {
+  const config = loadConfig();
+  const store = await KeyStore.open(keyStoreOptionsFromEnv(config.dataDir));
+  const previous = (await store.signingKey()).kid;
+  const next = await store.rotate();
+  const jwks = await store.jwks();
+  console.log(`Signing key rotated: ${previous} → ${next.kid}`);
+  console.log(`The JWKS now lists ${jwks.keys.length} public key(s); older signatures still verify.`);
+}
+
+main().catch((err: unknown) => {
+  if (err instanceof ConfigError || err instanceof KeyStoreError) {
+    console.error(err.message);
+    process.exit(2);
+  }
+  console.error(err);
+  process.exit(1);
+});
