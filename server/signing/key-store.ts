@@ -24,8 +24,9 @@ import {
   type CryptoKey,
   type JWK,
 } from "jose";
+import { SUMMARY_JWS_ALG } from "@shared/schemas/summary";
 
-export const SIGNING_ALG = "EdDSA";
+export const SIGNING_ALG = SUMMARY_JWS_ALG;
 
 export interface PublicSigningJwk extends JWK {
   kty: "OKP";

@@ -5,11 +5,10 @@
  */
 import { CompactSign } from "jose";
 import { canonicalJsonBytes } from "@shared/canonical-json";
-import { summaryPayloadSchema, type SummaryPayload } from "@shared/schemas/summary";
-import { SIGNING_ALG, type KeyStore } from "./key-store.js";
+import { SUMMARY_JWS_ALG, SUMMARY_JWS_TYP, summaryPayloadSchema, type SummaryPayload } from "@shared/schemas/summary";
+import type { KeyStore } from "./key-store.js";
 
-/** `typ` header of a signed summary (RFC 7515 §4.1.9; "application/" omitted as the RFC recommends). */
-export const SUMMARY_JWS_TYP = "stillspan-summary+jws";
+export { SUMMARY_JWS_TYP };
 
 export interface SignedSummary {
   jws: string;
@@ -22,7 +21,7 @@ export async function signSummary(store: KeyStore, summary: SummaryPayload): Pro
   const validated = summaryPayloadSchema.parse(summary);
   const key = await store.signingKey();
   const jws = await new CompactSign(canonicalJsonBytes(validated))
-    .setProtectedHeader({ alg: SIGNING_ALG, kid: key.kid, typ: SUMMARY_JWS_TYP })
+    .setProtectedHeader({ alg: SUMMARY_JWS_ALG, kid: key.kid, typ: SUMMARY_JWS_TYP })
     .sign(key.privateKey);
   return { jws, kid: key.kid, summary: validated };
 }

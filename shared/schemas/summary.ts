@@ -9,6 +9,10 @@
 import { z } from "zod";
 
 export const SUMMARY_FORMAT = "stillspan.summary/1";
+/** JWS algorithm of signed summaries: EdDSA with Ed25519 keys (RFC 8037). */
+export const SUMMARY_JWS_ALG = "EdDSA";
+/** `typ` header of a signed summary (RFC 7515 §4.1.9; "application/" omitted as the RFC recommends). */
+export const SUMMARY_JWS_TYP = "stillspan-summary+jws";
 
 const text = (max: number) =>
   z.string().trim().min(1, "must not be blank").max(max, `must have at most ${max} characters`);
