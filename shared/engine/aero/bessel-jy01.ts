@@ -9,7 +9,8 @@
  *
  * Notes: the series loses accuracy to cancellation as x grows (terms up to ≈ e^x/√(2πx)) and the asymptotic
  * expansion gains it; the switch at x = 12 balances the two. Error (absolute where |f| < 1, else relative)
- * below 1e-12 on (0, ∞), checked against mpmath at 40 digits (__tests__/fixtures/make-aero-fixtures.py).
+ * below 2e-12 on (0, ∞), largest just below the switch; checked against mpmath at 40 digits
+ * (__tests__/fixtures/make-aero-fixtures.py).
  * For x → 0, Y0 → −∞ (like (2/π) ln x) and Y1 → −∞ (like −2/(πx)).
  *
  * @param x - argument, x > 0 (dimensionless)
