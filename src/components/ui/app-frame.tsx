@@ -1,8 +1,9 @@
 import type { ReactNode } from "react";
-import { NavLink } from "react-router-dom";
+import { Link, NavLink } from "react-router-dom";
 import { Button } from "@/components/ui/button";
 import { CautionsLine } from "@/components/ui/cautions";
 import { Wordmark } from "@/components/ui/logo";
+import { paths } from "@/config/paths";
 import { cn } from "@/lib/cn";
 
 export interface NavItem {
@@ -37,7 +38,9 @@ export function AppFrame({ navItems, user, onSignOut, isSigningOut, isNavigating
       </a>
       <header className="on-ink relative bg-ink-900 text-ink-100">
         <div className="flex flex-wrap items-center gap-x-6 gap-y-1 px-4 py-1.5 md:px-6">
-          <Wordmark />
+          <Link to={paths.home.getHref()} aria-label="Stillspan, start page" className="flex items-center rounded-md">
+            <Wordmark />
+          </Link>
           <nav aria-label="Main" className="order-3 w-full md:order-none md:w-auto">
             <ul className="flex gap-1">
               {navItems.map((item) => (
@@ -68,9 +71,8 @@ export function AppFrame({ navItems, user, onSignOut, isSigningOut, isNavigating
               <p className="text-xs text-ink-300">{user.standing}</p>
             </div>
             <Button
-              variant="ghost"
+              variant="inverse"
               size="sm"
-              className="text-ink-100 hover:bg-ink-800 hover:text-white"
               onClick={onSignOut}
               isLoading={isSigningOut}
             >

@@ -9,6 +9,8 @@ const VARIANTS = {
     "border border-ink-300 bg-surface text-ink-800 hover:border-ink-400 hover:bg-ink-50 disabled:text-ink-400",
   ghost: "text-ink-700 hover:bg-ink-100 disabled:text-ink-400",
   danger: "bg-signal-600 text-white hover:bg-signal-700 disabled:bg-ink-400",
+  /** For the dark ink header and panels. */
+  inverse: "border border-ink-600 text-ink-100 hover:border-ink-400 hover:bg-ink-800 hover:text-white",
 } as const;
 
 const SIZES = {

@@ -61,7 +61,7 @@ export function ProjectOverview({ projectId, isAdmin }: { projectId: string; isA
         }
       />
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(16rem,1fr)]">
-        <Card title="Site notes" subtitle="Exposure, terrain and design wind at deck level, as recorded by the team">
+        <Card title="Site notes">
           {siteNotes ? (
             <p className="max-w-prose whitespace-pre-line text-ink-800">{siteNotes}</p>
           ) : (

@@ -14,7 +14,7 @@ export function ProjectsTable({ isAdmin }: { isAdmin: boolean }) {
 
   if (projects.isPending) {
     return (
-      <Card title="Projects">
+      <Card title={isAdmin ? "All projects" : "Your projects"}>
         <LoadingBlock label="Loading projects…" />
       </Card>
     );
@@ -36,7 +36,7 @@ export function ProjectsTable({ isAdmin }: { isAdmin: boolean }) {
   const rows = projects.data;
   return (
     <Card
-      title="Projects"
+      title={isAdmin ? "All projects" : "Your projects"}
       subtitle={`${rows.length} ${rows.length === 1 ? "project" : "projects"}`}
       flush
     >
