@@ -1,10 +1,10 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, isNotNull } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
 import { memberships, projects, users, type Project, type ProjectRole } from "../schema/index.js";
 
 export type ProjectWithRole = Project & { role: ProjectRole | null };
 
-const withRoleColumns = (userId: number) => ({
+const projectWithRoleColumns = {
   id: projects.id,
   name: projects.name,
   description: projects.description,
@@ -12,25 +12,29 @@ const withRoleColumns = (userId: number) => ({
   createdBy: projects.createdBy,
   createdAt: projects.createdAt,
   updatedAt: projects.updatedAt,
-  role: sql<ProjectRole | null>`(select m.role from ${memberships} m where m.project_id = ${projects.id} and m.user_id = ${userId})`,
-});
+  role: memberships.role,
+};
+
+/** Projects joined to the user's own membership row (left join: the role is null where they are not a member). */
+function selectWithRole(db: DbOrTx, userId: number) {
+  return db
+    .select(projectWithRoleColumns)
+    .from(projects)
+    .leftJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, userId)));
+}
 
 /** Projects the user is a member of, with their role, by name. */
 export async function listProjectsOfMember(db: DbOrTx, userId: number): Promise<ProjectWithRole[]> {
-  return db
-    .select({ ...withRoleColumns(userId), role: memberships.role })
-    .from(projects)
-    .innerJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, userId)))
-    .orderBy(asc(projects.name), asc(projects.id));
+  return selectWithRole(db, userId).where(isNotNull(memberships.id)).orderBy(asc(projects.name), asc(projects.id));
 }
 
 /** Every project, with the user's role where they are a member (administrators). */
 export async function listAllProjects(db: DbOrTx, userId: number): Promise<ProjectWithRole[]> {
-  return db.select(withRoleColumns(userId)).from(projects).orderBy(asc(projects.name), asc(projects.id));
+  return selectWithRole(db, userId).orderBy(asc(projects.name), asc(projects.id));
 }
 
 export async function findProjectById(db: DbOrTx, projectId: number, userId: number): Promise<ProjectWithRole | undefined> {
-  const [row] = await db.select(withRoleColumns(userId)).from(projects).where(eq(projects.id, projectId)).limit(1);
+  const [row] = await selectWithRole(db, userId).where(eq(projects.id, projectId)).limit(1);
   return row;
 }
 

@@ -1,0 +1,187 @@
+/**
+ * `npm test`: everything the README's test command promises, on a database of its own.
+ *
+ *   1. Debian's Chromium for the browser tests (scripts/ensure-chromium.sh)
+ *   2. the project's PostgreSQL cluster (started when needed), database `stillspan_test` dropped and re-created,
+ *      migrated and seeded with the demo data
+ *   3. `vite build` of the client into dist/client
+ *   4. the app as a child process on a free port of its own (a running `npm start` does not collide)
+ *   5. `vitest run` over every project (unit, client, integration incl. browser), with TEST_BASE_URL,
+ *      TEST_DATABASE_URL, TEST_SESSION_SECRET and STILLSPAN_TEST=1; arguments after `--` go to vitest
+ *
+ * The app child is always stopped (its whole process group); the exit code is vitest's.
+ */
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { randomBytes } from "node:crypto";
+import { createWriteStream, existsSync, mkdirSync, readFileSync } from "node:fs";
+import net from "node:net";
+import path from "node:path";
+import { loadConfig, projectRoot } from "../server/config.js";
+import { createDb } from "../server/db/client.js";
+import { runMigrations } from "../server/db/migrate.js";
+import { createDatabase, dropDatabase, ensureLocalPostgres } from "../server/db/pg-local.js";
+import { seedDemo } from "../server/db/seed.js";
+import { logger } from "../server/logger.js";
+
+const TEST_DB = "stillspan_test";
+const bin = (name: string) => path.join(projectRoot, "node_modules", ".bin", name);
+const artifacts = path.join(projectRoot, "test-artifacts");
+const started = Date.now();
+const step = (what: string) => console.log(`[test] ${((Date.now() - started) / 1000).toFixed(1)}s ${what}`);
+
+function run(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): void {
+  const result = spawnSync(cmd, args, { cwd: projectRoot, stdio: "inherit", env });
+  if (result.status !== 0) throw new Error(`${cmd} ${args.join(" ")} failed (exit ${result.status ?? result.signal})`);
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.unref();
+    server.on("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const { port } = server.address() as net.AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+async function waitForHealth(baseUrl: string, child: ChildProcess, timeoutMs: number): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`the app exited with code ${child.exitCode} before it was healthy`);
+    try {
+      const res = await fetch(`${baseUrl}/api/health`);
+      if (res.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`the app did not answer ${baseUrl}/api/health within ${timeoutMs / 1000} s`);
+}
+
+function stopGroup(child: ChildProcess | undefined): Promise<void> {
+  if (!child?.pid || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => {
+    const force = setTimeout(() => {
+      try {
+        process.kill(-child.pid!, "SIGKILL");
+      } catch {
+        /* already gone */
+      }
+    }, 5000);
+    child.once("exit", () => {
+      clearTimeout(force);
+      resolve();
+    });
+    try {
+      process.kill(-child.pid!, "SIGTERM");
+    } catch {
+      clearTimeout(force);
+      resolve();
+    }
+  });
+}
+
+async function prepareDatabase(): Promise<string> {
+  const config = loadConfig({ ...process.env, DATABASE_URL: undefined });
+  let maintenanceUrl: string;
+  let testUrl: string;
+  if (process.env.DATABASE_URL) {
+    // An external server: reuse its credentials for a database of our own.
+    const url = new URL(process.env.DATABASE_URL);
+    url.pathname = "/postgres";
+    maintenanceUrl = url.toString();
+    url.pathname = `/${TEST_DB}`;
+    testUrl = url.toString();
+  } else {
+    const cluster = await ensureLocalPostgres({ projectRoot, port: config.pgPort, logger });
+    maintenanceUrl = cluster.url;
+    testUrl = cluster.urlFor(TEST_DB);
+  }
+  await dropDatabase(maintenanceUrl, TEST_DB);
+  await createDatabase(maintenanceUrl, TEST_DB);
+  const db = createDb(testUrl, { max: 2 });
+  try {
+    await runMigrations(db);
+    await seedDemo(db, config, logger);
+  } finally {
+    await db.$client.end();
+  }
+  return testUrl;
+}
+
+async function main(): Promise<number> {
+  const vitestArgs = process.argv.slice(2).filter((a, i) => !(i === 0 && a === "--"));
+  mkdirSync(artifacts, { recursive: true });
+
+  step("checking Chromium");
+  run("bash", [path.join(projectRoot, "scripts", "ensure-chromium.sh")]);
+
+  step(`preparing database ${TEST_DB}`);
+  const databaseUrl = await prepareDatabase();
+
+  if (existsSync(path.join(projectRoot, "index.html"))) {
+    step("building the client");
+    run(bin("vite"), ["build", "--logLevel", "warn"]);
+  } else {
+    step("no index.html yet: skipping the client build");
+  }
+
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const sessionSecret = randomBytes(32).toString("base64url");
+  const appLog = path.join(artifacts, "app.log");
+  const appEnv: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "test",
+    PORT: String(port),
+    DATABASE_URL: databaseUrl,
+    STILLSPAN_SEED: "none",
+    STILLSPAN_SESSION_SECRET: sessionSecret,
+    STILLSPAN_SIGNIN_LIMIT: "100000",
+    STILLSPAN_TEST: "1",
+    LOG_LEVEL: process.env.LOG_LEVEL ?? "warn",
+  };
+  step(`starting the app on ${baseUrl} (log: ${path.relative(projectRoot, appLog)})`);
+  const out = createWriteStream(appLog);
+  const app = spawn(bin("tsx"), ["server/main.ts"], { cwd: projectRoot, env: appEnv, detached: true, stdio: ["ignore", "pipe", "pipe"] });
+  app.stdout!.pipe(out);
+  app.stderr!.pipe(out);
+
+  const stop = () => void stopGroup(app).then(() => process.exit(130));
+  process.once("SIGINT", stop);
+  process.once("SIGTERM", stop);
+  try {
+    try {
+      await waitForHealth(baseUrl, app, 60_000);
+    } catch (err) {
+      console.error(readFileSync(appLog, "utf8").split("\n").slice(-30).join("\n"));
+      throw err;
+    }
+    step("running vitest");
+    const vitest = spawnSync(bin("vitest"), ["run", ...vitestArgs], {
+      cwd: projectRoot,
+      stdio: "inherit",
+      env: {
+        ...process.env,
+        TEST_BASE_URL: baseUrl,
+        TEST_DATABASE_URL: databaseUrl,
+        TEST_SESSION_SECRET: sessionSecret,
+        STILLSPAN_TEST: "1",
+      },
+    });
+    step(`vitest finished (exit ${vitest.status ?? vitest.signal})`);
+    return vitest.status ?? 1;
+  } finally {
+    await stopGroup(app);
+  }
+}
+
+main()
+  .then((code) => process.exit(code))
+  .catch((err: unknown) => {
+    console.error(`[test] ${err instanceof Error ? err.message : String(err)}`);
+    process.exit(1);
+  });

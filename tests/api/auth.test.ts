@@ -1,0 +1,141 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createSessionToken } from "../../server/services/auth.js";
+import { startTestApp, type TestApp } from "../support/app.js";
+import { auditActions, openTestDb, userId } from "../support/db.js";
+import { testEnv } from "../support/env.js";
+import { api, sessionCookieFrom, signIn } from "../support/http.js";
+
+const base = () => testEnv.baseUrl;
+const db = openTestDb();
+afterAll(() => db.$client.end());
+
+describe("POST /api/auth/sign-in", () => {
+  it("signs the analyst in: 200 with the me body and an httpOnly SameSite=Lax session cookie", async () => {
+    const res = await api(base(), "/api/auth/sign-in", {
+      body: { email: "Analyst@Stillspan.test", password: "stillspan-demo" },
+    });
+
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ email: "analyst@stillspan.test", isAdmin: false });
+    expect(res.body.memberships).toEqual([{ projectId: expect.any(String), role: "analyst" }]);
+    const setCookie = res.headers.getSetCookie().find((c) => c.startsWith("stillspan_session="))!;
+    expect(setCookie).toMatch(/HttpOnly/i);
+    expect(setCookie).toMatch(/SameSite=Lax/i);
+    expect(setCookie).toMatch(/Max-Age=43200/);
+    expect(setCookie).not.toMatch(/Secure/i); // plain HTTP on loopback
+  });
+
+  it("records the sign-in in the audit trail", async () => {
+    await signIn(base(), "reviewer@stillspan.test");
+    const actions = await auditActions(db, "user", await userId(db, "reviewer@stillspan.test"));
+    expect(actions).toContain("auth.sign-in");
+  });
+
+  it("answers a wrong password and an unknown e-mail with the same 401 body and no cookie", async () => {
+    const wrongPassword = await api(base(), "/api/auth/sign-in", {
+      body: { email: "viewer@stillspan.test", password: "not-the-password" },
+    });
+    const unknownEmail = await api(base(), "/api/auth/sign-in", {
+      body: { email: "nobody@stillspan.test", password: "stillspan-demo" },
+    });
+
+    expect(wrongPassword.status).toBe(401);
+    expect(unknownEmail.status).toBe(401);
+    expect(unknownEmail.body).toEqual(wrongPassword.body);
+    expect(sessionCookieFrom(wrongPassword.headers)).toBeUndefined();
+    expect(sessionCookieFrom(unknownEmail.headers)).toBeUndefined();
+  });
+
+  it("rejects a body without a valid e-mail with 400 naming the field", async () => {
+    const res = await api(base(), "/api/auth/sign-in", { body: { email: "not-an-address", password: "x" } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([expect.objectContaining({ path: "email" })]);
+  });
+});
+
+describe("GET /api/auth/me", () => {
+  it("returns the signed-in user with memberships", async () => {
+    const cookie = await signIn(base(), "admin@stillspan.test");
+    const res = await api(base(), "/api/auth/me", { cookie });
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({
+      id: String(await userId(db, "admin@stillspan.test")),
+      email: "admin@stillspan.test",
+      name: expect.any(String),
+      isAdmin: true,
+      memberships: [],
+    });
+  });
+
+  it("answers 401 without a cookie", async () => {
+    const res = await api(base(), "/api/auth/me");
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe("unauthorized");
+  });
+
+  it("answers 401 to a tampered cookie (payload changed to another user, signature kept)", async () => {
+    const cookie = await signIn(base(), "viewer@stillspan.test");
+    const [header, , signature] = cookie.split("=")[1].split(".");
+    const adminId = await userId(db, "admin@stillspan.test");
+    const forgedPayload = Buffer.from(
+      JSON.stringify({ sub: String(adminId), iss: "stillspan", aud: "stillspan-session", iat: 1, exp: 4102444800 }),
+    ).toString("base64url");
+
+    const res = await api(base(), "/api/auth/me", { cookie: `stillspan_session=${header}.${forgedPayload}.${signature}` });
+    expect(res.status).toBe(401);
+  });
+
+  it("answers 401 to a token signed with another secret", async () => {
+    const token = await createSessionToken(new TextEncoder().encode("x".repeat(40)), await userId(db, "admin@stillspan.test"));
+    const res = await api(base(), "/api/auth/me", { cookie: `stillspan_session=${token}` });
+    expect(res.status).toBe(401);
+  });
+
+  it("answers 401 to an expired cookie (signed with the app's secret 13 h ago)", async () => {
+    const id = await userId(db, "analyst@stillspan.test");
+    const thirteenHoursAgo = new Date(Date.now() - 13 * 3600 * 1000);
+    const expired = await createSessionToken(testEnv.sessionSecret, id, thirteenHoursAgo);
+    const fresh = await createSessionToken(testEnv.sessionSecret, id);
+
+    expect((await api(base(), "/api/auth/me", { cookie: `stillspan_session=${expired}` })).status).toBe(401);
+    expect((await api(base(), "/api/auth/me", { cookie: `stillspan_session=${fresh}` })).status).toBe(200);
+  });
+});
+
+describe("POST /api/auth/sign-out", () => {
+  it("clears the session cookie", async () => {
+    const cookie = await signIn(base(), "analyst@stillspan.test");
+    const res = await api(base(), "/api/auth/sign-out", { method: "POST", cookie });
+    expect(res.status).toBe(204);
+    const cleared = res.headers.getSetCookie().find((c) => c.startsWith("stillspan_session="));
+    expect(cleared).toMatch(/^stillspan_session=;/);
+    expect(cleared).toMatch(/Expires=Thu, 01 Jan 1970/);
+  });
+});
+
+describe("sign-in settings of a deployment", () => {
+  let app: TestApp;
+  beforeAll(async () => {
+    app = await startTestApp({ env: { STILLSPAN_SIGNIN_LIMIT: "2", TRUST_PROXY: "1" } });
+  });
+  afterAll(() => app.close());
+
+  it("marks the cookie Secure behind a trusted HTTPS proxy", async () => {
+    const res = await api(app.baseUrl, "/api/auth/sign-in", {
+      body: { email: "analyst@stillspan.test", password: "stillspan-demo" },
+      headers: { "X-Forwarded-Proto": "https" },
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers.getSetCookie().find((c) => c.startsWith("stillspan_session="))).toMatch(/; Secure/);
+  });
+
+  it("answers 429 after the configured number of failed attempts from one address", async () => {
+    const attempt = () =>
+      api(app.baseUrl, "/api/auth/sign-in", { body: { email: "viewer@stillspan.test", password: "wrong-password" } });
+    expect((await attempt()).status).toBe(401);
+    expect((await attempt()).status).toBe(401);
+    const third = await attempt();
+    expect(third.status).toBe(429);
+    expect(third.body.error.code).toBe("too_many_attempts");
+  });
+});
