@@ -1,0 +1,213 @@
+import { solveComplexDense } from "./complex-solve";
+import type { PoleWorkspace } from "./quadratic-operator";
+
+/** A pole λ = re + i·im (rad/s) with its displacement eigenvector x (complex, n entries). */
+export interface Pole {
+  re: number;
+  im: number;
+  readonly vecRe: Float64Array;
+  readonly vecIm: Float64Array;
+}
+
+const NEWTON_MAX_ITERATIONS = 40;
+const NEWTON_TOLERANCE = 1e-13;
+/** Below this relative step a non-decreasing step means the rounding floor is reached: accept. */
+const NEWTON_STAGNATION = 1e-9;
+
+/**
+ * Refines one eigenpair of the quadratic eigenproblem Q(λ) x = (λ²M + λC + K) x = 0 from a nearby guess,
+ * with C = `work.dampTot`, K = `work.stiffTot` (assembled beforehand at fixed reduced frequency).
+ *
+ * Method: for n = 2, Newton's method on the scalar det Q(λ) (a real-coefficient quartic written through the
+ * 2×2 entries and their derivatives), the eigenvector then taken from the better-conditioned row of Q(λ). For
+ * n > 2, Newton's method on the bordered system [Q(λ) x = 0, vᴴx = 1] (Ruhe 1973, "Algorithms for the
+ * nonlinear eigenvalue problem", SIAM J. Numer. Anal. 10(4); Güttel & Tisseur 2017, Acta Numerica 26, §4.3),
+ * one complex (n+1)×(n+1) solve per iteration. Both converge quadratically to a simple eigenvalue from a
+ * warm start (previous speed or p-k iterate).
+ * Notes: stops when |Δλ| ≤ 1e-13·|λ| (or at the rounding floor below 1e-9·|λ|) or after 40 iterations (returns false then); the eigenvector is left
+ * unnormalised.
+ * @param mass M (n×n row-major)
+ * @param work workspace with the assembled C and K
+ * @param guessRe real part of the starting λ, rad/s
+ * @param guessIm imaginary part of the starting λ, rad/s
+ * @param startRe real part of the starting eigenvector (n > 2 only; the normalisation vector v)
+ * @param startIm imaginary part of the starting eigenvector
+ * @param out receives λ and x
+ * @returns true when converged
+ */
+export function refinePole(
+  mass: Float64Array,
+  work: PoleWorkspace,
+  guessRe: number,
+  guessIm: number,
+  startRe: Float64Array,
+  startIm: Float64Array,
+  out: Pole,
+): boolean {
+  if (work.n === 2) return refinePole2(mass, work, guessRe, guessIm, out);
+  return refinePoleBordered(mass, work, guessRe, guessIm, startRe, startIm, out);
+}
+
+function refinePole2(mass: Float64Array, work: PoleWorkspace, guessRe: number, guessIm: number, out: Pole): boolean {
+  const c = work.dampTot;
+  const k = work.stiffTot;
+  const m11 = mass[0], m12 = mass[1], m21 = mass[2], m22 = mass[3];
+  const c11 = c[0], c12 = c[1], c21 = c[2], c22 = c[3];
+  const k11 = k[0], k12 = k[1], k21 = k[2], k22 = k[3];
+  let lr = guessRe;
+  let li = guessIm;
+  let converged = false;
+  let lastStep = Number.POSITIVE_INFINITY;
+  // entries of Q(λ) = λ²m + λc + k and Q'(λ) = 2λm + c for a 2×2 block, complex
+  let q11r = 0, q11i = 0, q12r = 0, q12i = 0, q21r = 0, q21i = 0, q22r = 0, q22i = 0;
+  for (let it = 0; it < NEWTON_MAX_ITERATIONS; it++) {
+    const l2r = lr * lr - li * li;
+    const l2i = 2 * lr * li;
+    q11r = l2r * m11 + lr * c11 + k11; q11i = l2i * m11 + li * c11;
+    q12r = l2r * m12 + lr * c12 + k12; q12i = l2i * m12 + li * c12;
+    q21r = l2r * m21 + lr * c21 + k21; q21i = l2i * m21 + li * c21;
+    q22r = l2r * m22 + lr * c22 + k22; q22i = l2i * m22 + li * c22;
+    const d11r = 2 * lr * m11 + c11, d11i = 2 * li * m11;
+    const d12r = 2 * lr * m12 + c12, d12i = 2 * li * m12;
+    const d21r = 2 * lr * m21 + c21, d21i = 2 * li * m21;
+    const d22r = 2 * lr * m22 + c22, d22i = 2 * li * m22;
+    // f = q11 q22 − q12 q21
+    const fr = q11r * q22r - q11i * q22i - (q12r * q21r - q12i * q21i);
+    const fi = q11r * q22i + q11i * q22r - (q12r * q21i + q12i * q21r);
+    // f' = d11 q22 + q11 d22 − d12 q21 − q12 d21
+    const gr =
+      d11r * q22r - d11i * q22i + (q11r * d22r - q11i * d22i) - (d12r * q21r - d12i * q21i) - (q12r * d21r - q12i * d21i);
+    const gi =
+      d11r * q22i + d11i * q22r + (q11r * d22i + q11i * d22r) - (d12r * q21i + d12i * q21r) - (q12r * d21i + q12i * d21r);
+    const gg = gr * gr + gi * gi;
+    if (gg === 0) break;
+    const dr = (fr * gr + fi * gi) / gg;
+    const di = (fi * gr - fr * gi) / gg;
+    lr -= dr;
+    li -= di;
+    const step = Math.hypot(dr, di);
+    if (!Number.isFinite(step)) break;
+    const scale = Math.hypot(lr, li);
+    if (step <= NEWTON_TOLERANCE * scale || (step >= lastStep && step <= NEWTON_STAGNATION * scale)) {
+      converged = true;
+      break;
+    }
+    lastStep = step;
+  }
+  // Q at the final λ for the eigenvector
+  const l2r = lr * lr - li * li;
+  const l2i = 2 * lr * li;
+  q11r = l2r * m11 + lr * c11 + k11; q11i = l2i * m11 + li * c11;
+  q12r = l2r * m12 + lr * c12 + k12; q12i = l2i * m12 + li * c12;
+  q21r = l2r * m21 + lr * c21 + k21; q21i = l2i * m21 + li * c21;
+  q22r = l2r * m22 + lr * c22 + k22; q22i = l2i * m22 + li * c22;
+  const row1 = q11r * q11r + q11i * q11i + q12r * q12r + q12i * q12i;
+  const row2 = q21r * q21r + q21i * q21i + q22r * q22r + q22i * q22i;
+  if (row1 >= row2) {
+    out.vecRe[0] = -q12r; out.vecIm[0] = -q12i;
+    out.vecRe[1] = q11r; out.vecIm[1] = q11i;
+  } else {
+    out.vecRe[0] = q22r; out.vecIm[0] = q22i;
+    out.vecRe[1] = -q21r; out.vecIm[1] = -q21i;
+  }
+  if (row1 === 0 && row2 === 0) {
+    // Q(λ) = 0: every vector is an eigenvector; keep the first coordinate
+    out.vecRe[0] = 1; out.vecIm[0] = 0; out.vecRe[1] = 0; out.vecIm[1] = 0;
+  }
+  out.re = lr;
+  out.im = li;
+  return converged;
+}
+
+function refinePoleBordered(
+  mass: Float64Array,
+  work: PoleWorkspace,
+  guessRe: number,
+  guessIm: number,
+  startRe: Float64Array,
+  startIm: Float64Array,
+  out: Pole,
+): boolean {
+  const n = work.n;
+  const m = n + 1;
+  const { jRe, jIm, rRe, rIm, xRe, xIm } = work;
+  const c = work.dampTot;
+  const k = work.stiffTot;
+  // v = start; x0 = v / (vᴴv) so that vᴴx0 = 1
+  let vv = 0;
+  for (let i = 0; i < n; i++) vv += startRe[i] * startRe[i] + startIm[i] * startIm[i];
+  if (!(vv > 0)) return false;
+  for (let i = 0; i < n; i++) {
+    xRe[i] = startRe[i] / vv;
+    xIm[i] = startIm[i] / vv;
+  }
+  let lr = guessRe;
+  let li = guessIm;
+  let converged = false;
+  let lastStep = Number.POSITIVE_INFINITY;
+  for (let it = 0; it < NEWTON_MAX_ITERATIONS; it++) {
+    const l2r = lr * lr - li * li;
+    const l2i = 2 * lr * li;
+    let lastRe = 0;
+    let lastIm = 0;
+    for (let i = 0; i < n; i++) {
+      let qxr = 0, qxi = 0, dxr = 0, dxi = 0;
+      const row = i * n;
+      const jrow = i * m;
+      for (let j = 0; j < n; j++) {
+        const mm = mass[row + j];
+        const cc = c[row + j];
+        const qr = l2r * mm + lr * cc + k[row + j];
+        const qi = l2i * mm + li * cc;
+        jRe[jrow + j] = qr;
+        jIm[jrow + j] = qi;
+        const ar = xRe[j];
+        const ai = xIm[j];
+        qxr += qr * ar - qi * ai;
+        qxi += qr * ai + qi * ar;
+        const pr = 2 * lr * mm + cc;
+        const pi = 2 * li * mm;
+        dxr += pr * ar - pi * ai;
+        dxi += pr * ai + pi * ar;
+      }
+      jRe[jrow + n] = dxr;
+      jIm[jrow + n] = dxi;
+      rRe[i] = -qxr;
+      rIm[i] = -qxi;
+      // vᴴx for the last residual
+      lastRe += startRe[i] * xRe[i] + startIm[i] * xIm[i];
+      lastIm += startRe[i] * xIm[i] - startIm[i] * xRe[i];
+    }
+    const lrow = n * m;
+    for (let j = 0; j < n; j++) {
+      jRe[lrow + j] = startRe[j];
+      jIm[lrow + j] = -startIm[j];
+    }
+    jRe[lrow + n] = 0;
+    jIm[lrow + n] = 0;
+    rRe[n] = -(lastRe - 1);
+    rIm[n] = -lastIm;
+    if (!solveComplexDense(m, jRe, jIm, rRe, rIm)) break;
+    for (let i = 0; i < n; i++) {
+      xRe[i] += rRe[i];
+      xIm[i] += rIm[i];
+    }
+    const dr = rRe[n];
+    const di = rIm[n];
+    lr += dr;
+    li += di;
+    const step = Math.hypot(dr, di);
+    if (!Number.isFinite(step)) break;
+    const scale = Math.hypot(lr, li);
+    if (step <= NEWTON_TOLERANCE * scale || (step >= lastStep && step <= NEWTON_STAGNATION * scale)) {
+      converged = true;
+      break;
+    }
+    lastStep = step;
+  }
+  out.re = lr;
+  out.im = li;
+  out.vecRe.set(xRe);
+  out.vecIm.set(xIm);
+  return converged;
+}

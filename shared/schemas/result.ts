@@ -1,0 +1,62 @@
+/**
+ * The sweep result `runSweep` returns — the same JSON from the CLI, the API and stored revisions. Units are SI;
+ * each numeric field's `.describe()` names its unit. See docs/study-format.md.
+ */
+import { z } from "zod";
+
+export const WARNING_CODES = [
+  "extrapolated-derivatives",
+  "quasi-steady-flutter",
+  "unstable-at-start",
+  "static-instability",
+  "tracking-ambiguous",
+  "no-convergence",
+] as const;
+
+export const flutterKindSchema = z
+  .enum(["coupled", "torsional", "heave"])
+  .describe("coupled when the smaller participation at the critical point is ≥ 0.1, else the dominant degree of freedom");
+
+export const flutterSchema = z.object({
+  speed: z.number().describe("Flutter speed, m/s (to 0.001 m/s)"),
+  frequency: z.number().describe("Frequency of the critical pole, Hz"),
+  mode: z.string().describe("Id of the structural mode the critical branch started from at the first speed"),
+  reducedVelocity: z.number().describe("Ur = U/(fB) at flutter, dimensionless"),
+  kind: flutterKindSchema,
+});
+
+export const sweepStepSchema = z.object({
+  speed: z.number().describe("Mean wind speed, m/s"),
+  frequency: z.number().describe("Frequency Im λ / 2π, Hz (0 on a static branch)"),
+  damping: z.number().describe("Damping ratio −Re λ / |λ|, dimensionless"),
+  re: z.number().describe("Real part of the pole λ, rad/s"),
+  im: z.number().describe("Imaginary part of the pole λ, rad/s (≥ 0)"),
+  participation: z
+    .record(z.string(), z.number())
+    .describe("Share of each structural mode in the eigenvector's kinetic energy, summing to 1"),
+  mac: z.number().describe("Mass-weighted MAC with the same branch's previous step, 0–1"),
+  confidence: z.number().describe("Tracker confidence in the assignment, 0–1 (docs/method-and-validation.md)"),
+});
+
+export const sweepWarningSchema = z.object({
+  code: z.enum(WARNING_CODES),
+  message: z.string(),
+  speeds: z.array(z.number()).optional().describe("Speeds concerned, m/s (a [from, to] range for extrapolation)"),
+});
+
+export const sweepResultSchema = z.object({
+  flutter: flutterSchema.nullable().describe("Lowest flutter point over every branch; null when all stay damped"),
+  divergence: z
+    .object({ speed: z.number().describe("Torsional divergence speed (closed form), m/s") })
+    .nullable(),
+  selberg: z.number().nullable().describe("Selberg's flutter estimate, m/s; null unless f_torsion > f_heave"),
+  modes: z.array(z.object({ id: z.string(), steps: z.array(sweepStepSchema) })),
+  warnings: z.array(sweepWarningSchema),
+  engine: z.string().describe("Engine version that produced the result"),
+});
+
+export type SweepResult = z.infer<typeof sweepResultSchema>;
+export type SweepStep = z.infer<typeof sweepStepSchema>;
+export type SweepWarning = z.infer<typeof sweepWarningSchema>;
+export type SweepWarningCode = (typeof WARNING_CODES)[number];
+export type FlutterPoint = z.infer<typeof flutterSchema>;
