@@ -1,0 +1,106 @@
+import { describe, expect, it } from "vitest";
+import invented from "../../schemas/__tests__/fixtures/invented-deck-study.json";
+import { parseScreeningRequest, type ProjectCriteriaInput, type ScreeningStudy } from "../../schemas/criteria";
+import { DEFAULT_REQUIREMENTS } from "../default-requirements";
+import { divergenceSpeed } from "../divergence-speed";
+import { screenStudy } from "../screen-study";
+
+// Invented demo deck (shared/schemas/__tests__/fixtures): B = 27.5 m, D = 3.6 m, m = 15 200 kg/m,
+// I = 1.45e6 kg·m²/m, V1 0.124 Hz ζ 0.5 %, T1 0.342 Hz ζ 0.4 %, ρ = 1.225, tabulated derivatives.
+const study = invented as unknown as ScreeningStudy;
+const criteria: ProjectCriteriaInput = {
+  wind: { basicSpeed: 26, probability: { kind: "return-period", years: 100 }, terrain: { kind: "category", category: "0" }, deckHeight: 55 },
+  requirements: DEFAULT_REQUIREMENTS,
+};
+
+describe("screenStudy on the invented deck", () => {
+  const result = screenStudy(study, criteria, { strouhalNumber: 0.11, strouhalBasis: "invented section-model value" });
+
+  it("computes v_crit = D n / St per mode with b = D for torsion too, and flags lock-in against 1.25 v_m", () => {
+    const [v1, t1] = result.vortexShedding.modes;
+    expect(v1.onsetSpeedMps).toBeCloseTo((3.6 * 0.124) / 0.11, 12);
+    expect(t1.onsetSpeedMps).toBeCloseTo((3.6 * 0.342) / 0.11, 12);
+    expect(v1.referenceLengthM).toBe(3.6);
+    const required = result.required!.vortexOnset.requiredSpeedMps;
+    expect(v1.lockIn).toBe(v1.onsetSpeedMps! < required ? "possible" : "not-expected");
+    expect(v1.lockIn).toBe("possible"); // 4.06 m/s onset against ~52 m/s: a low-frequency deck sheds in the design range
+    expect(v1.statement).toMatch(/E\.1\.2\(2\)/);
+    expect(result.margins!.vortexOnset.status).toBe("fail");
+  });
+
+  it("uses the translational Scruton number for heave and the inertia form for torsion", () => {
+    const [v1, t1] = result.vortexShedding.modes;
+    expect(v1.scruton.form).toBe("translational");
+    expect(v1.scruton.value).toBeCloseTo((2 * 2 * Math.PI * 0.005 * 15200) / (1.225 * 3.6 ** 2), 10);
+    expect(t1.scruton.form).toBe("torsional");
+    expect(t1.scruton.value).toBeCloseTo((2 * 2 * Math.PI * 0.004 * 1.45e6) / (1.225 * 27.5 ** 4), 12);
+    expect(t1.scruton.source).toMatch(/common practice/);
+  });
+
+  it("gallops by the standard's formula with the fallback a_G = 10 for B/D = 7.6 (no static coefficients)", () => {
+    expect(result.galloping.governing).toBe("standard");
+    expect(result.galloping.standard).toMatchObject({ factor: 10, factorOrigin: "fallback" });
+    const sc = (2 * 2 * Math.PI * 0.005 * 15200) / (1.225 * 3.6 ** 2);
+    expect(result.galloping.standard.onsetSpeedMps).toBeCloseTo((2 * sc * 0.124 * 3.6) / 10, 10);
+    expect(result.galloping.denHartog).toBeNull();
+  });
+
+  it("takes divergence from K²A3* at the largest Ur and matches the E.24 routine", () => {
+    const k = (2 * Math.PI) / 12;
+    const slope = k * k * 3.46;
+    expect(result.divergence.momentSlope!.value).toBeCloseTo(slope, 12);
+    expect(result.divergence.speedMps).toBeCloseTo(divergenceSpeed(1.45e6, 0.342, 1.225, 27.5, slope)!, 12);
+    expect(result.margins!.divergence.requiredSpeedMps).toBeCloseTo(2 * result.designWind!.meanSpeedMps, 12);
+  });
+
+  it("carries the cautions and every check's sources", () => {
+    expect(result.cautions.join(" ")).toMatch(/indicative/);
+    expect(result.cautions.join(" ")).toMatch(/licensed engineer/);
+    expect(result.divergence.sources.join(" ")).toMatch(/E\.24/);
+    expect(result.galloping.sources.join(" ")).toMatch(/Den Hartog/);
+  });
+});
+
+describe("screenStudy with quasi-steady aerodynamics", () => {
+  it("lets Den Hartog govern galloping and reports 'not possible' when dC_L/dα + C_D ≥ 0", () => {
+    const quasi = { ...study, aerodynamics: { model: "quasi-steady" as const, liftSlope: 5.2, dragCoefficient: 0.08, momentSlope: 1.1 } };
+    const result = screenStudy(quasi, criteria);
+    expect(result.galloping.governing).toBe("den-hartog");
+    expect(result.galloping.critical).toMatchObject({ kind: "none" });
+    expect(result.margins!.gallopingOnset.status).toBe("pass");
+    expect(result.divergence.momentSlope).toMatchObject({ value: 1.1 });
+  });
+
+  it("gives a Den Hartog onset when the section is galloping-prone", () => {
+    const quasi = { ...study, aerodynamics: { model: "quasi-steady" as const, liftSlope: -4, dragCoefficient: 0.5, momentSlope: 1.1 } };
+    const result = screenStudy(quasi, criteria);
+    const expected = (4 * 15200 * 0.005 * 2 * Math.PI * 0.124) / (1.225 * 27.5 * 3.5);
+    expect(result.galloping.critical).toMatchObject({ kind: "speed" });
+    expect(result.galloping.denHartog!.onsetSpeedMps).toBeCloseTo(expected, 10);
+  });
+
+  it("without criteria gives onsets but no required speeds or margins", () => {
+    const result = screenStudy(study);
+    expect(result.margins).toBeNull();
+    expect(result.vortexShedding.modes[0].lockIn).toBe("not-evaluated");
+    expect(result.vortexShedding.strouhal.origin).toBe("table");
+  });
+});
+
+describe("screening request schema", () => {
+  it("accepts a full study document and rejects bad input with JSON paths", () => {
+    expect(parseScreeningRequest({ study: invented, criteria }).ok).toBe(true);
+    const bad = parseScreeningRequest({
+      study: { ...invented, air: { density: 0 } },
+      criteria: { ...criteria, wind: { ...criteria.wind, deckHeight: 250 } },
+      options: { liftSlope: -3 },
+    });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) {
+      const paths = bad.issues.map((issue) => issue.path);
+      expect(paths).toContain("$.study.air.density");
+      expect(paths).toContain("$.criteria.wind.deckHeight");
+      expect(paths).toContain("$.options.dragCoefficient");
+    }
+  });
+});
