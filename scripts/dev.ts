@@ -1,0 +1,67 @@
+/**
+ * `npm run dev`: the API (tsx watch, restarts on server changes) on PORT (3000) and the Vite dev server (hot
+ * reload, proxies /api to the API) on 5173, together. Ctrl-C stops both; if either exits, the other is stopped.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
+const bin = (name: string) => path.join(root, "node_modules", ".bin", name);
+const port = process.env.PORT ?? "3000";
+
+function start(name: string, cmd: string, args: string[], env: NodeJS.ProcessEnv): ChildProcess {
+  // Own process group, so stopping it also stops what it started (tsx's node child, esbuild).
+  const child = spawn(cmd, args, { cwd: root, env, stdio: "inherit", detached: true });
+  child.on("exit", (code, signal) => {
+    if (!stopping) {
+      console.log(`[dev] ${name} exited (${signal ?? code}); stopping the rest`);
+      void stopAll(code ?? 1);
+    }
+  });
+  return child;
+}
+
+let stopping = false;
+const children: ChildProcess[] = [];
+
+function stop(child: ChildProcess): Promise<void> {
+  if (!child.pid || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => {
+    const force = setTimeout(() => {
+      try {
+        process.kill(-child.pid!, "SIGKILL");
+      } catch {
+        /* gone */
+      }
+    }, 5000);
+    child.once("exit", () => {
+      clearTimeout(force);
+      resolve();
+    });
+    try {
+      process.kill(-child.pid!, "SIGTERM");
+    } catch {
+      clearTimeout(force);
+      resolve();
+    }
+  });
+}
+
+async function stopAll(code: number): Promise<never> {
+  stopping = true;
+  await Promise.all(children.map(stop));
+  process.exit(code);
+}
+
+children.push(
+  start("api", bin("tsx"), ["watch", "--clear-screen=false", "server/main.ts"], {
+    ...process.env,
+    PORT: port,
+    NODE_ENV: "development",
+  }),
+  start("vite", bin("vite"), [], { ...process.env, PORT: port }),
+);
+console.log(`[dev] API on http://127.0.0.1:${port}, client with hot reload on http://127.0.0.1:5173 (Ctrl-C stops both)`);
+process.on("SIGINT", () => void stopAll(0));
+process.on("SIGTERM", () => void stopAll(0));
