@@ -3,3 +3,4 @@
 export * from "./users.js";
 export * from "./projects.js";
 export * from "./audit-events.js";
+export * from "./criteria.js";
