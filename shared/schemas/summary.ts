@@ -3,10 +3,13 @@
  * owner's representative reads. The server signs the RFC 8785 canonical JSON of this object (compact JWS, EdDSA);
  * anyone holding the JWKS can check that the numbers below are exactly what was computed and signed.
  *
- * Units are SI (m/s, Hz); each numeric field's `.describe()` names its unit. A critical speed of `null` means
- * "not reached within the swept range": read it together with `sweep.toMps` (the summary says "> toMps").
+ * Units are SI (m/s, Hz); each numeric field's `.describe()` names its unit. The numbers are copied from the
+ * stored sweep result (shared/schemas/result.ts) and the project's criteria (shared/criteria: required speeds and
+ * margins), never recomputed for the summary.
  */
 import { z } from "zod";
+import { PHENOMENA } from "./criteria";
+import { flutterKindSchema } from "./result";
 
 export const SUMMARY_FORMAT = "stillspan.summary/1";
 /** JWS algorithm of signed summaries: EdDSA with Ed25519 keys (RFC 8037). */
@@ -54,36 +57,46 @@ export const summaryAeroDataSchema = z.strictObject({
 
 export const summaryFlutterSchema = z.strictObject({
   speedMps: speedMps("Flutter speed: lowest speed where an oscillatory pole's damping ratio crosses zero"),
-  frequencyHz: frequencyHz("Frequency of the unstable pole at the flutter speed"),
-  branch: text(40).describe("Identifier of the branch (pole path) that goes unstable"),
-  character: text(80).describe("Character of the branch at flutter, e.g. torsion-dominated coupled"),
+  frequencyHz: frequencyHz("Frequency of the critical pole at the flutter speed"),
+  mode: text(16).describe("Structural mode the critical branch started from"),
+  kind: flutterKindSchema,
+  reducedVelocity: z.number().positive().describe("Ur = U/(fB) at flutter, dimensionless"),
 });
 
 export const summaryDivergenceSchema = z.strictObject({
-  speedMps: speedMps("Torsional divergence speed"),
-  frequencyHz: frequencyHz("Frequency at divergence (static instability: 0)"),
+  speedMps: speedMps("Torsional divergence speed (closed form)"),
+  frequencyHz: frequencyHz("Frequency at divergence: 0, a static instability"),
 });
 
-export const summaryRequirementSchema = z.strictObject({
-  phenomenon: z.enum(["flutter", "divergence", "vortex-shedding", "galloping"]).describe("What is checked"),
-  requiredSpeedMps: speedMps("Speed the critical speed must exceed"),
-  criticalSpeedMps: speedMps("Critical speed found; null when not reached in the sweep").nullable(),
-  margin: z
-    .number()
-    .nullable()
-    .describe("Critical speed ÷ required speed, dimensionless; null when not reached (then > sweep end ÷ required)"),
-  pass: z
-    .boolean()
-    .describe("Critical speed > required; if not reached, pass only when the sweep end exceeds the required"),
-  criterion: text(80).describe("Identifier of the criterion in `criteria` that sets the required speed"),
+export const summaryDesignWindSchema = z.strictObject({
+  meanSpeedMps: speedMps("Design mean wind speed v_m at deck level"),
+  basicSpeedMps: speedMps("Basic wind speed v_b (10-min mean, 10 m, open terrain, p = 0.02)"),
+  deckHeightM: z.number().positive().describe("Deck height above ground or water, m"),
+  sources: z.array(text(500)).describe("Standards and clauses the design wind follows"),
 });
 
 export const summaryCriterionSchema = z.strictObject({
-  id: text(80).describe("Identifier of the criterion"),
-  label: text(200).describe("What the criterion requires, in words"),
-  factor: z.number().positive().nullable().describe("Factor applied to the reference speed, dimensionless"),
-  referenceSpeedMps: speedMps("Reference speed the factor applies to, e.g. design mean wind at deck level").nullable(),
-  basis: text(500).describe("Source of the criterion: standard and clause, project specification, or common practice"),
+  phenomenon: z.enum(PHENOMENA).describe("Instability the criterion applies to"),
+  requiredSpeedMps: speedMps("Speed the critical speed must reach: factor × multipliers × v_m"),
+  totalFactor: z.number().positive().describe("Product of the factor and its multipliers, dimensionless"),
+  factor: z.number().positive().describe("Factor on the design mean wind at deck level, dimensionless"),
+  gustFactor: z.number().positive().nullable().describe("Gust / span multiplier, dimensionless; null when none"),
+  angleFactor: z.number().positive().nullable().describe("Angle-of-attack multiplier, dimensionless; null when none"),
+  basis: z.array(text(2000)).min(1).describe("Basis of each factor, in the order they multiply"),
+});
+
+export const summaryMarginSchema = z.strictObject({
+  phenomenon: z.enum(PHENOMENA).describe("Instability checked"),
+  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]).describe("Outcome of the check"),
+  margin: z
+    .number()
+    .nonnegative()
+    .nullable()
+    .describe("Critical ÷ required speed, dimensionless (a lower bound when marginIsLowerBound); null: no ratio"),
+  marginIsLowerBound: z.boolean().describe("True when no instability was found up to the sweep end"),
+  criticalSpeedMps: speedMps("Critical speed found; null when not found or not possible").nullable(),
+  requiredSpeedMps: speedMps("Required speed"),
+  statement: text(1000).describe("The check in one sentence, as shown beside the numbers"),
 });
 
 export const summaryWarningSchema = z.strictObject({
@@ -110,12 +123,13 @@ export const summaryPayloadSchema = z.strictObject({
     toMps: speedMps("Last speed of the sweep"),
     airDensityKgM3: z.number().nonnegative().describe("Air density, kg/m³"),
   }),
-  flutter: summaryFlutterSchema.nullable().describe("null: no flutter up to sweep.toMps"),
+  flutter: summaryFlutterSchema.nullable().describe("null: every branch stays damped up to sweep.toMps"),
   divergence: summaryDivergenceSchema
     .nullable()
-    .describe("null: no divergence (static moment slope ≤ 0) or above sweep.toMps"),
-  requirements: z.array(summaryRequirementSchema).describe("Required speeds and margins, one row per check"),
-  criteria: z.array(summaryCriterionSchema).describe("Criteria that set the required speeds, with their basis"),
+    .describe("null: no divergence (static moment slope ≤ 0)"),
+  designWind: summaryDesignWindSchema,
+  criteria: z.array(summaryCriterionSchema).describe("Required speed per phenomenon with its factors and basis"),
+  margins: z.array(summaryMarginSchema).describe("Margin of each critical speed against its required speed"),
   warnings: z.array(summaryWarningSchema).describe("Warnings of the computation (extrapolation, model limits, …)"),
   signer: z.strictObject({ name: text(200), email: z.email() }),
   signedAt: z.iso.datetime({ offset: true }).describe("Signing time (ISO 8601, UTC)"),
@@ -123,8 +137,9 @@ export const summaryPayloadSchema = z.strictObject({
 });
 
 export type SummaryPayload = z.infer<typeof summaryPayloadSchema>;
-export type SummaryRequirement = z.infer<typeof summaryRequirementSchema>;
 export type SummaryCriterion = z.infer<typeof summaryCriterionSchema>;
+export type SummaryMargin = z.infer<typeof summaryMarginSchema>;
+export type SummaryFlutter = z.infer<typeof summaryFlutterSchema>;
 export type SummaryWarning = z.infer<typeof summaryWarningSchema>;
 
 /** The cautions every rendering of a summary carries (page, PDF, e-mail that mentions results). */

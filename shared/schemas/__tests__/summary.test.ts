@@ -8,10 +8,18 @@ describe("summaryPayloadSchema", () => {
     expect(summaryPayloadSchema.parse(summary)).toEqual(summary);
   });
 
-  it("accepts 'not reached' critical speeds as null", () => {
+  it("accepts 'not reached' critical speeds as null with a lower-bound margin", () => {
     const summary = { ...inventedSummary(), flutter: null, divergence: null };
-    summary.requirements = summary.requirements.map((r) => ({ ...r, criticalSpeedMps: null, margin: null }));
+    summary.margins = summary.margins.map((m) => ({ ...m, criticalSpeedMps: null, marginIsLowerBound: true }));
     expect(summaryPayloadSchema.safeParse(summary).success).toBe(true);
+  });
+
+  it("rejects a phenomenon or a margin status the criteria do not know", () => {
+    const summary = inventedSummary();
+    summary.margins[0] = { ...summary.margins[0], status: "ok" as never };
+    summary.criteria[1] = { ...summary.criteria[1], phenomenon: "buffeting" as never };
+    const paths = summaryPayloadSchema.safeParse(summary).error?.issues.map((i) => i.path.join("."));
+    expect(paths).toEqual(["criteria.1.phenomenon", "margins.0.status"]);
   });
 
   it("rejects another format tag", () => {
