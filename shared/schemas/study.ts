@@ -202,7 +202,10 @@ function jsonPath(path: readonly PropertyKey[]): string {
   return out;
 }
 
-/** Turns a zod error of `studyDocumentSchema` into JSON-path issues, one per bad value (unknown keys listed one by one). */
+/**
+ * Turns a zod error of `studyDocumentSchema` into JSON-path issues, one per bad value (each unknown key listed
+ * at its own path).
+ */
 export function formatStudyIssues(error: z.ZodError): StudyIssue[] {
   const issues: StudyIssue[] = [];
   for (const issue of error.issues) {

@@ -51,7 +51,8 @@ const FLIPPED_BY_H_UP = new Set(["H2", "H3", "A1", "A4"]);
  * K = 2k); derivatives ×2 from the 2B normalisation; with h and L upward, L = −L_up and h = −h_up flip the
  * terms that hold exactly one of them: H2*, H3* (α-terms of L) and A1*, A4* (h-terms of M); H1*, H4* (both)
  * and A2*, A3* (neither) keep their sign. Rows are then sorted by increasing Ur.
- * Source: Scanlan & Tomko, Airfoil and bridge deck flutter derivatives, J. Eng. Mech. Div. ASCE 97(EM6), 1971 (details from memory);
+ * Source: Scanlan & Tomko, Airfoil and bridge deck flutter derivatives, J. Eng. Mech. Div. ASCE 97(EM6), 1971
+ * (details from memory);
  * Simiu & Scanlan, Wind Effects on Structures; Jain, Jones & Scanlan, J. Struct. Eng. 122(7), 1996 (form on B).
  *
  * Notes: only the abscissa is read in half-chord terms; the derivatives are assumed to be defined with

@@ -32,7 +32,8 @@ export const FLAT_PLATE_LOG_TERM_FLOOR_K = 1e-3;
 export function createFlatPlateModel(): AeroModel {
   const fg = new Float64Array(2);
   const work = new Float64Array(4);
-  const fourGOverKAtFloor = (4 * theodorsen(0.5 * FLAT_PLATE_LOG_TERM_FLOOR_K, fg, work)[1]) / FLAT_PLATE_LOG_TERM_FLOOR_K;
+  const floorK = FLAT_PLATE_LOG_TERM_FLOOR_K;
+  const fourGOverKAtFloor = (4 * theodorsen(0.5 * floorK, fg, work)[1]) / floorK;
 
   function products(K: number, out: DerivativeProducts = emptyProducts()): DerivativeProducts {
     if (!(K >= 0) || K === Infinity) throw new RangeError(`reduced frequency K must be finite and ≥ 0 (got ${K})`);

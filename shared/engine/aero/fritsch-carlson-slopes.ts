@@ -23,7 +23,9 @@ export function fritschCarlsonSlopes(
 ): Float64Array {
   const n = x.length;
   if (n < 2 || y.length !== n || out.length < n) {
-    throw new RangeError(`monotone cubic needs ≥ 2 nodes and equal lengths (x ${n}, y ${y.length}, out ${out.length})`);
+    throw new RangeError(
+      `monotone cubic needs ≥ 2 nodes and equal lengths (x ${n}, y ${y.length}, out ${out.length})`,
+    );
   }
   let previousSecant = (y[1] - y[0]) / (x[1] - x[0]);
   out[0] = previousSecant;

@@ -100,7 +100,9 @@ function checkTable(table: TabulatedAerodynamics, ur: Float64Array): void {
   if (ur.length < 2) throw new RangeError(`a derivative table needs at least 2 rows (got ${ur.length})`);
   for (let i = 0; i < ur.length; i++) {
     if (!(ur[i] > 0) || !Number.isFinite(ur[i])) throw new RangeError(`reducedVelocity[${i}] must be finite and > 0`);
-    if (i > 0 && !(ur[i] > ur[i - 1])) throw new RangeError(`reducedVelocity[${i}] must exceed reducedVelocity[${i - 1}]`);
+    if (i > 0 && !(ur[i] > ur[i - 1])) {
+      throw new RangeError(`reducedVelocity[${i}] must exceed reducedVelocity[${i - 1}]`);
+    }
   }
   for (const name of SERIES) {
     const column = table[name];
