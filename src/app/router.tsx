@@ -33,6 +33,8 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
         {
           index: true,
           ErrorBoundary: RouteErrorBoundary,
+          // The loader always redirects; this only shows if that takes a moment.
+          Component: () => <LoadingBlock label="Opening your start page…" />,
           loader: async ({ request }) => redirect(homeHref(await requireUser(queryClient, request))),
         },
         {

@@ -6,9 +6,18 @@ const DEMO_PASSWORD = "stillspan-demo";
 
 describe("signing in and out in the browser", () => {
   let browser: BrowserSession;
+  /** Uncaught exceptions and console errors or warnings, except the browser's own note on a 401/404 resource. */
+  const problems: string[] = [];
 
   beforeAll(async () => {
     browser = await launchBrowser();
+    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
+    browser.page.on("console", (message) => {
+      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[14]/;
+      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
+        problems.push(`${message.type()}: ${message.text()}`);
+      }
+    });
   });
 
   afterAll(async () => {
@@ -94,5 +103,9 @@ describe("signing in and out in the browser", () => {
     await page.goto(browser.url("/projects"));
     await page.waitForURL((url) => url.pathname === "/sign-in");
     await browser.screenshot("signed-out");
+  });
+
+  it("the whole visit logged no uncaught error and no console error or warning", () => {
+    expect(problems).toEqual([]);
   });
 });
