@@ -3,8 +3,13 @@ import { z } from "zod";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
 import type { User } from "@/types/api";
+import type { SignInInput as SignInBody } from "@shared/schemas/auth";
 import { meQueryKey } from "@/features/auth/api/get-me";
 
+/**
+ * The form's own rules, worded for a person at the keyboard; the server checks the same fields again with
+ * shared/schemas/auth.ts (whose messages are written for API callers).
+ */
 export const signInInputSchema = z.object({
   email: z
     .string()
@@ -16,7 +21,7 @@ export const signInInputSchema = z.object({
 
 export type SignInInput = z.infer<typeof signInInputSchema>;
 
-export function signIn(input: SignInInput): Promise<User> {
+export function signIn(input: SignInBody): Promise<User> {
   // A 401 here means wrong credentials, shown in the form; it must not bounce the page.
   return api.post<User>(apiPaths.auth.signIn, input, { redirectOnUnauthorized: false });
 }
