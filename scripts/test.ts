@@ -2,7 +2,7 @@
  * `npm test`: everything the README's test command promises, on a database of its own.
  *
  *   1. Debian's Chromium for the browser tests (scripts/ensure-chromium.sh)
- *   2. the project's PostgreSQL cluster (started when needed), database `stillspan_test` dropped and re-created,
+ *   2. the project's PostgreSQL cluster (started when needed), a database of its own (`stillspan_test_<pid>`, dropped afterwards) created,
  *      migrated and seeded with the demo data
  *   3. `vite build` of the client into dist/client
  *   4. the app as a child process on a free port of its own (a running `npm start` does not collide)
@@ -13,7 +13,7 @@
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { createWriteStream, existsSync, mkdirSync, readFileSync } from "node:fs";
+import { createWriteStream, existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import net from "node:net";
 import path from "node:path";
 import { loadConfig, projectRoot } from "../server/config.js";
@@ -23,7 +23,8 @@ import { createDatabase, dropDatabase, ensureLocalPostgres } from "../server/db/
 import { seedDemo } from "../server/db/seed.js";
 import { logger } from "../server/logger.js";
 
-const TEST_DB = "stillspan_test";
+// One database per run (dropped afterwards), so two runs on one machine never reset each other's data.
+const TEST_DB = process.env.STILLSPAN_TEST_DB ?? `stillspan_test_${process.pid}`;
 const bin = (name: string) => path.join(projectRoot, "node_modules", ".bin", name);
 const artifacts = path.join(projectRoot, "test-artifacts");
 const started = Date.now();
@@ -84,7 +85,7 @@ function stopGroup(child: ChildProcess | undefined): Promise<void> {
   });
 }
 
-async function prepareDatabase(): Promise<string> {
+async function prepareDatabase(): Promise<{ testUrl: string; maintenanceUrl: string }> {
   const config = loadConfig({ ...process.env, DATABASE_URL: undefined });
   let maintenanceUrl: string;
   let testUrl: string;
@@ -109,7 +110,7 @@ async function prepareDatabase(): Promise<string> {
   } finally {
     await db.$client.end();
   }
-  return testUrl;
+  return { testUrl, maintenanceUrl };
 }
 
 async function main(): Promise<number> {
@@ -120,11 +121,13 @@ async function main(): Promise<number> {
   run("bash", [path.join(projectRoot, "scripts", "ensure-chromium.sh")]);
 
   step(`preparing database ${TEST_DB}`);
-  const databaseUrl = await prepareDatabase();
+  const { testUrl: databaseUrl, maintenanceUrl } = await prepareDatabase();
 
+  // Each run builds into a folder of its own, so a running `npm start` or another run keeps its files.
+  const clientDir = path.join(projectRoot, "dist", `test-client-${process.pid}`);
   if (existsSync(path.join(projectRoot, "index.html"))) {
     step("building the client");
-    run(bin("vite"), ["build", "--logLevel", "warn"]);
+    run(bin("vite"), ["build", "--logLevel", "warn", "--outDir", clientDir]);
   } else {
     step("no index.html yet: skipping the client build");
   }
@@ -142,6 +145,7 @@ async function main(): Promise<number> {
     STILLSPAN_SESSION_SECRET: sessionSecret,
     STILLSPAN_SIGNIN_LIMIT: "100000",
     STILLSPAN_TEST: "1",
+    STILLSPAN_CLIENT_DIR: clientDir,
     LOG_LEVEL: process.env.LOG_LEVEL ?? "warn",
   };
   step(`starting the app on ${baseUrl} (log: ${path.relative(projectRoot, appLog)})`);
@@ -176,6 +180,8 @@ async function main(): Promise<number> {
     return vitest.status ?? 1;
   } finally {
     await stopGroup(app);
+    rmSync(clientDir, { recursive: true, force: true });
+    if (!process.env.STILLSPAN_TEST_DB) await dropDatabase(maintenanceUrl, TEST_DB).catch(() => undefined);
   }
 }
 

@@ -23,6 +23,7 @@ const envSchema = z.object({
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).optional(),
   STILLSPAN_DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/, "lower-case letters, digits and _ only").default("stillspan"),
   STILLSPAN_DATA_DIR: optionalText,
+  STILLSPAN_CLIENT_DIR: optionalText,
   STILLSPAN_SEED: z.enum(["demo", "none"]).default("demo"),
   STILLSPAN_SESSION_SECRET: z.string().min(32, "at least 32 characters").optional(),
   STILLSPAN_ADMIN_EMAIL: z.email().optional(),
@@ -47,6 +48,8 @@ export interface Config {
   databaseUrl?: string;
   databaseName: string;
   dataDir: string;
+  /** Built client served by Express (default dist/client). */
+  clientDir: string;
   seed: Env["STILLSPAN_SEED"];
   sessionSecret: Uint8Array;
   admin?: { email: string; password: string };
@@ -102,6 +105,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     databaseUrl: e.DATABASE_URL,
     databaseName: e.STILLSPAN_DB_NAME,
     dataDir,
+    clientDir: path.resolve(projectRoot, e.STILLSPAN_CLIENT_DIR ?? path.join("dist", "client")),
     seed: e.STILLSPAN_SEED,
     sessionSecret: loadSessionSecret(dataDir, e.STILLSPAN_SESSION_SECRET),
     admin:

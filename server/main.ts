@@ -35,7 +35,7 @@ async function main(): Promise<void> {
   await runMigrations(db);
   const seeded = await prepareDatabaseContent(db, config, logger);
 
-  const app = createApp({ db, config, logger });
+  const app = createApp({ db, config, logger, clientDir: config.clientDir });
   const server: Server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once("listening", resolve);
