@@ -26,17 +26,17 @@ export function SignInRoute() {
   const redirectTo = safeRedirectTarget(searchParams.get("redirectTo"));
 
   return (
-    <div className="flex min-h-dvh flex-col md:flex-row">
-      <aside className="on-ink flex flex-col justify-between gap-8 bg-ink-900 px-8 py-8 text-ink-200 md:w-[42%] md:max-w-xl md:px-10 md:py-10">
+    <div className="flex min-h-dvh flex-col lg:flex-row">
+      <aside className="on-ink flex flex-col justify-between gap-4 bg-ink-900 px-6 py-5 text-ink-200 lg:w-[42%] lg:max-w-xl lg:px-10 lg:py-10">
         <Wordmark />
         <div className="space-y-5">
-          <SignInFigure className="hidden w-full max-w-sm md:block" />
-          <p className="max-w-sm text-lg leading-snug text-ink-100">
+          <SignInFigure className="hidden w-full max-w-sm lg:block" />
+          <p className="max-w-xl text-ink-100 lg:max-w-sm lg:text-lg lg:leading-snug">
             Aeroelastic stability of long-span bridge decks: flutter and divergence speeds, studied revision by
             revision, compared across deck alternatives and signed by the reviewing engineer.
           </p>
         </div>
-        <p className="hidden text-xs text-ink-300 md:block">Access is by invitation from your project’s administrator.</p>
+        <p className="hidden text-xs text-ink-300 lg:block">Access is by invitation from your project’s administrator.</p>
       </aside>
       <main className="flex flex-1 flex-col">
         <div className="flex flex-1 items-center justify-center px-6 py-10">
