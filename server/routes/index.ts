@@ -1,8 +1,10 @@
 import { Router } from "express";
 import type { AppContext } from "../app-context.js";
 import { authRoutes } from "./auth.js";
+import { criteriaRoutes } from "./criteria.js";
 import { healthRoutes } from "./health.js";
 import { projectRoutes } from "./projects.js";
+import { screeningRoutes } from "./screening.js";
 
 /**
  * Every API resource, mounted under /api. To add one: write server/routes/<resource>.ts exporting a factory
@@ -12,6 +14,8 @@ export function apiRouter(ctx: AppContext): Router {
   const router = Router();
   router.use("/health", healthRoutes(ctx));
   router.use("/auth", authRoutes(ctx));
+  router.use("/projects/:projectId/criteria", criteriaRoutes(ctx));
   router.use("/projects", projectRoutes(ctx));
+  router.use("/screening", screeningRoutes(ctx));
   return router;
 }

@@ -6,6 +6,7 @@
  * pairs each with the JSON path of the offending value.
  */
 import { z } from "zod";
+import type { EvaluatedCriteria } from "../criteria/evaluate-criteria";
 import { formatStudyIssues, studyDocumentSchema, type StudyIssue } from "./study";
 
 const typeError = (expected: string) => (issue: { input?: unknown }) =>
@@ -135,6 +136,42 @@ export type ProjectCriteriaInput = z.input<typeof projectCriteriaSchema>;
 export type TerrainInput = DesignWind["terrain"];
 export type ProbabilityInput = DesignWind["probability"];
 
+/** Body of PUT /api/projects/:id/criteria. `baseVersion` (the version the editor started from) guards against lost updates. */
+export const putCriteriaBodySchema = object({
+  criteria: projectCriteriaSchema,
+  baseVersion: z
+    .number({ error: typeError("a whole number or null") })
+    .int({ error: "must be a whole number" })
+    .positive({ error: "must be greater than 0" })
+    .nullable()
+    .optional()
+    .describe("Version the edit started from (null: there was none); a newer saved version gives 409"),
+});
+export type PutCriteriaBody = z.infer<typeof putCriteriaBodySchema>;
+
+/**
+ * Response of GET/PUT /api/projects/:id/criteria. `evaluated` holds v_m at deck level with its factors and the
+ * required speeds (shared/criteria/evaluate-criteria.ts); `defaults` the default factors with their basis.
+ */
+export interface ProjectCriteriaDto {
+  projectId: string;
+  /** Current version, or null when the project has no criteria yet. */
+  version: number | null;
+  criteria: ProjectCriteria | null;
+  evaluated: EvaluatedCriteria | null;
+  savedAt: string | null;
+  savedBy: { id: string; name: string } | null;
+  defaults: ProjectCriteria["requirements"];
+}
+
+/** One saved version, for the history list. */
+export interface ProjectCriteriaVersionDto {
+  version: number;
+  savedAt: string;
+  savedBy: { id: string; name: string } | null;
+  criteria: ProjectCriteria;
+}
+
 export const screeningOptionsSchema = object({
   strouhalNumber: positive("Strouhal number St on the deck depth D, dimensionless (measured on the deck section)")
     .max(1, { error: "must be at most 1" })
@@ -175,6 +212,10 @@ export const screeningStudySchema = z
 
 export const screeningRequestSchema = object({
   study: screeningStudySchema,
+  projectId: z
+    .union([z.string().regex(/^\d{1,9}$/), z.number().int().positive()], { error: "must be a project id" })
+    .optional()
+    .describe("Project whose current criteria apply when `criteria` is not given (caller must be its analyst or reviewer)"),
   criteria: projectCriteriaSchema.optional(),
   options: screeningOptionsSchema.optional(),
 });

@@ -1,4 +1,5 @@
 import { demoAccounts } from "./accounts.js";
+import { demoCriteria } from "./criteria.js";
 import { demoProject } from "./projects.js";
 import type { SeedStep } from "./types.js";
 
@@ -6,4 +7,4 @@ import type { SeedStep } from "./types.js";
  * The demo seed, in order. Later features append their own step files here (studies, revisions, signed
  * summaries); each step reads earlier ids through `ref(ctx, key)`.
  */
-export const DEMO_SEED_STEPS: SeedStep[] = [demoAccounts, demoProject];
+export const DEMO_SEED_STEPS: SeedStep[] = [demoAccounts, demoProject, demoCriteria];

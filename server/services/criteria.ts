@@ -1,0 +1,114 @@
+import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
+import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
+import type {
+  ProjectCriteria,
+  ProjectCriteriaDto,
+  ProjectCriteriaVersionDto,
+  PutCriteriaBody,
+} from "../../shared/schemas/criteria.js";
+import type { Db } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import {
+  findCurrentCriteria,
+  insertCriteriaVersion,
+  listCriteriaVersions,
+  type CriteriaVersionRow,
+} from "../db/queries/criteria.js";
+import { AppError } from "../errors.js";
+import { ANY_ROLE, assertRole } from "../middleware/auth.js";
+import type { SessionUser } from "./auth.js";
+
+const savedBy = (row: CriteriaVersionRow) =>
+  row.createdById === null ? null : { id: String(row.createdById), name: row.createdByName ?? "" };
+
+/** v_m and the required speeds of saved criteria; a RangeError of the formulas becomes a 400 naming the input. */
+export function evaluateOrReject(criteria: ProjectCriteria) {
+  try {
+    return evaluateCriteria(criteria);
+  } catch (err) {
+    if (err instanceof RangeError) throw AppError.badRequest(`The design wind cannot be evaluated: ${err.message}`);
+    throw err;
+  }
+}
+
+function toDto(projectId: number, row: CriteriaVersionRow | undefined): ProjectCriteriaDto {
+  return {
+    projectId: String(projectId),
+    version: row?.version ?? null,
+    criteria: row?.criteria ?? null,
+    evaluated: row ? evaluateOrReject(row.criteria) : null,
+    savedAt: row?.createdAt.toISOString() ?? null,
+    savedBy: row ? savedBy(row) : null,
+    defaults: DEFAULT_REQUIREMENTS,
+  };
+}
+
+/** The project's current criteria with v_m at deck level and the required speeds; any member reads them. */
+export async function getProjectCriteria(db: Db, user: SessionUser, projectId: number): Promise<ProjectCriteriaDto> {
+  await assertRole(db, user, projectId, ANY_ROLE);
+  return toDto(projectId, await findCurrentCriteria(db, projectId));
+}
+
+/** Every saved version, newest first; any member reads them. */
+export async function getProjectCriteriaHistory(
+  db: Db,
+  user: SessionUser,
+  projectId: number,
+): Promise<ProjectCriteriaVersionDto[]> {
+  await assertRole(db, user, projectId, ANY_ROLE);
+  const rows = await listCriteriaVersions(db, projectId);
+  return rows.map((row) => ({ version: row.version, savedAt: row.createdAt.toISOString(), savedBy: savedBy(row), criteria: row.criteria }));
+}
+
+const UNIQUE_VIOLATION = "23505";
+
+/**
+ * Saves a new version of the project's criteria (analysts and administrators), audited in the same
+ * transaction. 409 when `baseVersion` is given and another version was saved since, or when a concurrent
+ * save took the same version number.
+ */
+export async function saveProjectCriteria(
+  db: Db,
+  user: SessionUser,
+  projectId: number,
+  body: PutCriteriaBody,
+  ip?: string,
+): Promise<ProjectCriteriaDto> {
+  await assertRole(db, user, projectId, ["analyst"]);
+  const evaluated = evaluateOrReject(body.criteria);
+  try {
+    return await db.transaction(async (tx) => {
+      const current = await findCurrentCriteria(tx, projectId);
+      const currentVersion = current?.version ?? null;
+      if (body.baseVersion !== undefined && body.baseVersion !== currentVersion) {
+        throw AppError.conflict(
+          `The criteria were changed since you opened them (your version ${body.baseVersion ?? "none"}, now ${currentVersion ?? "none"}). Reload and apply your edit again.`,
+          { currentVersion },
+        );
+      }
+      const version = (currentVersion ?? 0) + 1;
+      await insertCriteriaVersion(tx, { projectId, version, criteria: body.criteria, createdBy: user.id });
+      await writeAudit(tx, {
+        actorId: user.id,
+        action: "criteria.update",
+        objectType: "project",
+        objectId: projectId,
+        ip,
+        details: {
+          version,
+          meanSpeedMps: evaluated.designWind.meanSpeedMps,
+          requiredSpeedsMps: Object.fromEntries(
+            Object.entries(evaluated.required).map(([phenomenon, r]) => [phenomenon, r.requiredSpeedMps]),
+          ),
+        },
+      });
+      return toDto(projectId, await findCurrentCriteria(tx, projectId));
+    });
+  } catch (err) {
+    if ((err as { code?: string; cause?: { code?: string } }).code === UNIQUE_VIOLATION ||
+        (err as { cause?: { code?: string } }).cause?.code === UNIQUE_VIOLATION) {
+      throw AppError.conflict("Another version of the criteria was saved at the same moment. Reload and apply your edit again.");
+    }
+    throw err;
+  }
+}

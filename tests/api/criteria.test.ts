@@ -1,0 +1,155 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import invented from "../../shared/schemas/__tests__/fixtures/invented-deck-study.json";
+import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
+import { auditActions, createProjectWithMembers, openTestDb } from "../support/db.js";
+import { testEnv } from "../support/env.js";
+import { api, signIn } from "../support/http.js";
+
+const base = () => testEnv.baseUrl;
+const db = openTestDb();
+let projectId: number;
+let otherProjectId: number;
+let cookies: Record<"admin" | "analyst" | "reviewer" | "viewer", string>;
+
+const criteria = () => ({
+  wind: {
+    basicSpeed: 26,
+    probability: { kind: "return-period", years: 100 },
+    terrain: { kind: "category", category: "II" },
+    deckHeight: 60,
+  },
+  requirements: structuredClone(DEFAULT_REQUIREMENTS),
+});
+
+beforeAll(async () => {
+  const suffix = Date.now().toString(36);
+  projectId = await createProjectWithMembers(db, `Criteria test crossing ${suffix}`, {
+    "analyst@stillspan.test": "analyst",
+    "reviewer@stillspan.test": "reviewer",
+    "viewer@stillspan.test": "viewer",
+  });
+  otherProjectId = await createProjectWithMembers(db, `Criteria test crossing without the viewer ${suffix}`, {
+    "analyst@stillspan.test": "analyst",
+  });
+  const [admin, analyst, reviewer, viewer] = await Promise.all(
+    ["admin", "analyst", "reviewer", "viewer"].map((r) => signIn(base(), `${r}@stillspan.test`)),
+  );
+  cookies = { admin, analyst, reviewer, viewer };
+});
+afterAll(() => db.$client.end());
+
+const criteriaUrl = (id: number) => `/api/projects/${id}/criteria`;
+
+describe("GET /api/projects/:id/criteria", () => {
+  it("shows a project without criteria as version null, with the default factors and their basis", async () => {
+    const res = await api(base(), criteriaUrl(projectId), { cookie: cookies.viewer });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ projectId: String(projectId), version: null, criteria: null, evaluated: null });
+    expect(res.body.defaults.divergence).toMatchObject({ factor: 2 });
+    expect(res.body.defaults.flutter.basis).toMatch(/from memory/);
+  });
+
+  it("shows the demo crossing's seeded criteria with v_m at deck level (category 0, 62 m, v_b 28 m/s)", async () => {
+    const projects = await api(base(), "/api/projects", { cookie: cookies.viewer });
+    const demo = projects.body.find((p: { name: string }) => p.name.startsWith("Harrowmere"));
+    const res = await api(base(), criteriaUrl(Number(demo.id)), { cookie: cookies.viewer });
+    expect(res.status).toBe(200);
+    // By hand, EN 1991-1-4 Expr. (4.3)–(4.5): 0.19·(0.003/0.05)^0.07 · ln(62/0.003) · 28 = 43.41 m/s.
+    const byHand = 0.19 * Math.pow(0.003 / 0.05, 0.07) * Math.log(62 / 0.003) * 28;
+    expect(res.body.version).toBeGreaterThanOrEqual(1);
+    expect(res.body.evaluated.designWind.meanSpeedMps).toBeCloseTo(byHand, 9);
+    expect(res.body.evaluated.required.flutter.requiredSpeedMps).toBeCloseTo(1.2 * byHand, 9);
+  });
+
+  it("answers 403 to a non-member and 401 without a session", async () => {
+    expect((await api(base(), criteriaUrl(otherProjectId), { cookie: cookies.viewer })).status).toBe(403);
+    expect((await api(base(), criteriaUrl(projectId))).status).toBe(401);
+  });
+});
+
+describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
+  it("answers 403 to the viewer and to the reviewer and saves nothing", async () => {
+    for (const who of ["viewer", "reviewer"] as const) {
+      const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies[who], body: { criteria: criteria() } });
+      expect(res.status, who).toBe(403);
+      expect(res.body.error.code).toBe("forbidden");
+    }
+    const after = await api(base(), criteriaUrl(projectId), { cookie: cookies.analyst });
+    expect(after.body.version).toBeNull();
+  });
+
+  it("answers 400 with the path of every bad field and saves nothing", async () => {
+    const bad = criteria() as any;
+    bad.wind.deckHeight = 250;
+    bad.wind.terrain = { kind: "category", category: "VI" };
+    bad.requirements.flutter.basis = "";
+    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: bad } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("invalid_input");
+    const paths = res.body.error.details.map((d: { path: string }) => d.path);
+    expect(paths).toEqual(
+      expect.arrayContaining(["criteria.wind.deckHeight", "criteria.wind.terrain.category", "criteria.requirements.flutter.basis"]),
+    );
+    expect((await api(base(), criteriaUrl(projectId), { cookie: cookies.analyst })).body.version).toBeNull();
+  });
+
+  it("saves version 1, reads it back unchanged with v_m and required speeds, and audits the save", async () => {
+    const sent = criteria();
+    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: sent, baseVersion: null } });
+    expect(res.status).toBe(200);
+    expect(res.body.version).toBe(1);
+    const read = await api(base(), criteriaUrl(projectId), { cookie: cookies.viewer });
+    expect(read.body.criteria).toEqual({ ...sent, wind: { ...sent.wind, orographyFactor: 1 } });
+    expect(read.body.savedBy).toMatchObject({ name: expect.any(String) });
+    // By hand, EN 1991-1-4 (4.2)–(4.5): c_prob(100 yr) · 0.19 ln(60/0.05) · 26.
+    const cProb = Math.sqrt((1 - 0.2 * Math.log(-Math.log(0.99))) / (1 - 0.2 * Math.log(-Math.log(0.98))));
+    expect(read.body.evaluated.designWind.meanSpeedMps).toBeCloseTo(cProb * 0.19 * Math.log(1200) * 26, 9);
+    expect(await auditActions(db, "project", projectId)).toContain("criteria.update");
+  });
+
+  it("appends version 2 on the next save, refuses a stale baseVersion with 409, and keeps the history", async () => {
+    const edited = criteria();
+    edited.requirements.flutter = { factor: 1.4, basis: "Owner's specification (invented for the test)" } as any;
+    const second = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: edited, baseVersion: 1 } });
+    expect(second.status).toBe(200);
+    expect(second.body.version).toBe(2);
+    expect(second.body.evaluated.required.flutter.totalFactor).toBe(1.4);
+
+    const stale = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: criteria(), baseVersion: 1 } });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.code).toBe("conflict");
+
+    const history = await api(base(), `${criteriaUrl(projectId)}/history`, { cookie: cookies.viewer });
+    expect(history.status).toBe(200);
+    expect(history.body.map((v: { version: number }) => v.version)).toEqual([2, 1]);
+  });
+
+  it("lets an administrator who is not a member save", async () => {
+    const res = await api(base(), criteriaUrl(otherProjectId), { method: "PUT", cookie: cookies.admin, body: { criteria: criteria() } });
+    expect(res.status).toBe(200);
+    expect(res.body.version).toBe(1);
+  });
+});
+
+describe("POST /api/screening", () => {
+  it("screens a study against the project's current criteria for its analyst", async () => {
+    const res = await api(base(), "/api/screening", {
+      cookie: cookies.analyst,
+      body: { study: invented, projectId: String(projectId), options: { strouhalNumber: 0.11 } },
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.vortexShedding.modes[0].onsetSpeedMps).toBeCloseTo((3.6 * 0.124) / 0.11, 9);
+    expect(res.body.margins.divergence.requiredSpeedMps).toBeCloseTo(2 * res.body.designWind.meanSpeedMps, 9);
+    expect(res.body.cautions.join(" ")).toMatch(/indicative/);
+  });
+
+  it("answers 403 to a user who is only a viewer, and 400 with paths for a bad study", async () => {
+    expect((await api(base(), "/api/screening", { cookie: cookies.viewer, body: { study: invented } })).status).toBe(403);
+    const bad = await api(base(), "/api/screening", {
+      cookie: cookies.reviewer,
+      body: { study: { ...invented, deck: { width: -1, depth: 3 } } },
+    });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details.map((d: { path: string }) => d.path)).toContain("study.deck.width");
+  });
+});
