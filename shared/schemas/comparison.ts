@@ -1,0 +1,65 @@
+/**
+ * Contract of GET /api/projects/:projectId/comparison: the latest revision of every study of every deck
+ * alternative side by side, with margins against the project's required speeds, and per-study trends of the
+ * critical speeds over all revisions.
+ */
+import { z } from "zod";
+import { criticalSpeedsSchema, personSchema } from "./revisions";
+
+export const comparisonMarginSchema = z.object({
+  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]),
+  margin: z.number().nullable().describe("critical / required speed, dimensionless (lower bound when marginIsLowerBound)"),
+  marginIsLowerBound: z.boolean(),
+  criticalSpeedMps: z.number().nullable(),
+  requiredSpeedMps: z.number(),
+  statement: z.string(),
+});
+
+export const comparisonRowSchema = z.object({
+  alternativeId: z.string(),
+  alternativeName: z.string(),
+  studyId: z.string(),
+  studyName: z.string(),
+  /** Null for a study without revisions. */
+  latest: z
+    .object({
+      revisionId: z.string(),
+      number: z.number(),
+      createdAt: z.string(),
+      author: personSchema.nullable(),
+      engineVersion: z.string(),
+      critical: criticalSpeedsSchema,
+    })
+    .nullable(),
+  /** Null when the project has no criteria yet or the study has no revision. */
+  margins: z.object({ flutter: comparisonMarginSchema, divergence: comparisonMarginSchema }).nullable(),
+});
+
+export const trendPointSchema = z.object({
+  revisionId: z.string(),
+  number: z.number(),
+  createdAt: z.string(),
+  changeNote: z.string(),
+  flutterSpeedMps: z.number().nullable(),
+  flutterFrequencyHz: z.number().nullable(),
+  divergenceSpeedMps: z.number().nullable(),
+  sweepToMps: z.number(),
+});
+
+export const comparisonSchema = z.object({
+  projectId: z.string(),
+  /** The project's current criteria (version, v_m at deck level, required speeds), or null when none are saved. */
+  criteria: z
+    .object({
+      version: z.number(),
+      meanSpeedMps: z.number().describe("Design mean wind speed at deck level, m/s"),
+      requiredFlutterSpeedMps: z.number(),
+      requiredDivergenceSpeedMps: z.number(),
+    })
+    .nullable(),
+  rows: z.array(comparisonRowSchema),
+  /** Per study, every revision's critical speeds in revision order (for a trend chart). */
+  trends: z.array(z.object({ studyId: z.string(), studyName: z.string(), alternativeName: z.string(), points: z.array(trendPointSchema) })),
+});
+export type ComparisonDto = z.infer<typeof comparisonSchema>;
+export type ComparisonRow = z.infer<typeof comparisonRowSchema>;

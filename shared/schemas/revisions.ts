@@ -1,0 +1,111 @@
+/**
+ * Contract of study revisions (`/api/studies/:id/revisions`, `/api/revisions/:id`, diff, re-run, export and
+ * import). A revision is numbered 1, 2, … per study, never changed or deleted, and holds the full study
+ * document (`stillspan.study/1`), its SHA-256 over RFC 8785 canonical JSON, the engine version and the result.
+ * It is `superseded` when a newer revision of the same study exists.
+ */
+import { z } from "zod";
+import { flutterKindSchema, sweepResultSchema } from "./result";
+import { studyDocumentSchema } from "./study";
+
+export const CHANGE_NOTE_MAX = 2000;
+
+/**
+ * POST /api/studies/:id/revisions (analysts). `parentRevision` is the number of the revision the edit started
+ * from (null for the first revision of an empty study); when a newer revision exists the answer is 409
+ * `stale_parent` and nothing is stored. `changeNote` is required from revision 2 on.
+ */
+export const createRevisionSchema = z.strictObject({
+  parentRevision: z
+    .number({ error: "must be a whole number or null" })
+    .int("must be a whole number")
+    .positive("must be greater than 0")
+    .nullable(),
+  changeNote: z.string().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
+  study: studyDocumentSchema,
+});
+export type CreateRevisionInput = z.input<typeof createRevisionSchema>;
+export type CreateRevision = z.infer<typeof createRevisionSchema>;
+
+/** Multipart fields of POST /api/studies/:id/import besides the `file` part (a study JSON file). */
+export const importRevisionFieldsSchema = z.strictObject({
+  parentRevision: z
+    .string()
+    .regex(/^(\d{1,9}|null|)$/, "must be a revision number, or empty for the first revision")
+    .transform((v) => (v === "" || v === "null" ? null : Number(v))),
+  changeNote: z.string().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
+});
+
+export const personSchema = z.object({ id: z.string(), name: z.string() });
+
+/** The critical speeds of a stored result, for lists, comparisons and trends. */
+export const criticalSpeedsSchema = z.object({
+  flutter: z
+    .object({
+      speedMps: z.number().describe("Flutter speed, m/s"),
+      frequencyHz: z.number().describe("Frequency at flutter, Hz"),
+      kind: flutterKindSchema,
+      mode: z.string(),
+      reducedVelocity: z.number().describe("U/(fB) at flutter, dimensionless"),
+    })
+    .nullable()
+    .describe("null: no flutter up to sweepToMps"),
+  divergenceSpeedMps: z.number().nullable().describe("Torsional divergence speed, m/s; null: none in the sweep"),
+  selbergSpeedMps: z.number().nullable().describe("Selberg's estimate, m/s"),
+  sweepToMps: z.number().describe("Last speed of the sweep, m/s"),
+  warningCodes: z.array(z.string()),
+});
+export type CriticalSpeeds = z.infer<typeof criticalSpeedsSchema>;
+
+export const revisionSummarySchema = z.object({
+  id: z.string(),
+  studyId: z.string(),
+  number: z.number(),
+  parentNumber: z.number().nullable(),
+  author: personSchema.nullable(),
+  changeNote: z.string(),
+  documentSha256: z.string().describe("SHA-256 (hex) of the RFC 8785 canonical JSON of the study document"),
+  engineVersion: z.string(),
+  createdAt: z.string(),
+  superseded: z.boolean(),
+  critical: criticalSpeedsSchema,
+});
+export type RevisionSummaryDto = z.infer<typeof revisionSummarySchema>;
+
+/** GET /api/revisions/:id and the 201 of a save. */
+export const revisionSchema = revisionSummarySchema.extend({
+  alternativeId: z.string(),
+  projectId: z.string(),
+  studyName: z.string(),
+  latestNumber: z.number().describe("Number of the newest revision of the study"),
+  study: studyDocumentSchema,
+  result: sweepResultSchema,
+});
+export type RevisionDto = z.infer<typeof revisionSchema>;
+
+/** `error.details` of a 409 `stale_parent`: the newer revision and the document that was not stored. */
+export const staleParentDetailsSchema = z.object({
+  latest: z.object({ id: z.string(), number: z.number(), author: personSchema.nullable(), createdAt: z.string() }),
+  rejected: z.object({ parentRevision: z.number().nullable(), changeNote: z.string(), study: z.unknown() }),
+});
+export type StaleParentDetails = z.infer<typeof staleParentDetailsSchema>;
+
+/** One difference between two study documents. Paths are JSON paths ("$.structure.modes[1].frequency"). */
+export const documentChangeSchema = z.object({
+  path: z.string(),
+  kind: z.enum(["changed", "added", "removed"]),
+  /** Absent when kind is "added". */
+  old: z.unknown().optional(),
+  /** Absent when kind is "removed". */
+  new: z.unknown().optional(),
+});
+export type DocumentChange = z.infer<typeof documentChangeSchema>;
+
+/** GET /api/revisions/:a/diff/:b: what changed from revision a to revision b. */
+export const revisionDiffSchema = z.object({
+  from: revisionSummarySchema,
+  to: revisionSummarySchema,
+  identical: z.boolean().describe("true when both documents have the same canonical hash"),
+  changes: z.array(documentChangeSchema),
+});
+export type RevisionDiffDto = z.infer<typeof revisionDiffSchema>;
