@@ -62,8 +62,13 @@ async function main(): Promise<void> {
   process.once("SIGTERM", () => shutdown("SIGTERM"));
 }
 
+// Process-level failures end up in the same log, then stop the process: its state is unknown.
 process.on("unhandledRejection", (err) => {
   logger.fatal({ err }, "unhandled promise rejection");
+  process.exit(1);
+});
+process.on("uncaughtException", (err) => {
+  logger.fatal({ err }, "uncaught exception");
   process.exit(1);
 });
 
