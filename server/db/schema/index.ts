@@ -4,3 +4,7 @@ export * from "./users.js";
 export * from "./projects.js";
 export * from "./audit-events.js";
 export * from "./criteria.js";
+export * from "./alternatives.js";
+export * from "./aero-datasets.js";
+export * from "./studies.js";
+export * from "./study-revisions.js";
