@@ -8,3 +8,4 @@ export * from "./alternatives.js";
 export * from "./aero-datasets.js";
 export * from "./studies.js";
 export * from "./study-revisions.js";
+export * from "./mail.js";
