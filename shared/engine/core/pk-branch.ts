@@ -49,7 +49,8 @@ export function createPkOutcome(n: number): PkOutcome {
  * @param speedMps wind speed U, m/s
  * @param guess starting pole and eigenvector (previous speed or predictor)
  * @param out receives the converged pole
- * @param select when given, the pole of each iterate is chosen by it from `allPoles`
+ * @param select when given, the pole of the first iterate is chosen by it from `allPoles` (later iterates,
+ *   whose K changes little, follow that pole by Newton refinement)
  * @param allPolesOf full decomposition routine (robust path only)
  */
 export function solveBranchPk(
@@ -75,7 +76,8 @@ export function solveBranchPk(
   let k = 0;
   for (it = 1; it <= PK_MAX_ITERATIONS; it++) {
     k = assembleQuadratic(system, speedMps, omega, work);
-    if (select && allPolesOf) {
+    if (select && allPolesOf && it === 1) {
+      // robust path: the branch's pole is chosen among all poles once; later iterates follow it by Newton
       const chosen = select(allPolesOf());
       lr = chosen.re;
       li = chosen.im;

@@ -11,6 +11,11 @@ export interface Pole {
 
 const NEWTON_MAX_ITERATIONS = 40;
 const NEWTON_TOLERANCE = 1e-13;
+/**
+ * A step this small (relative), after a step that shrank at least 1000-fold (quadratic convergence observed),
+ * leaves an error of the order of its square: accept without a confirming iteration.
+ */
+const NEWTON_QUADRATIC_ACCEPT = 1e-7;
 /** Below this relative step a non-decreasing step means the rounding floor is reached: accept. */
 const NEWTON_STAGNATION = 1e-9;
 
@@ -24,7 +29,8 @@ const NEWTON_STAGNATION = 1e-9;
  * nonlinear eigenvalue problem", SIAM J. Numer. Anal. 10(4); Güttel & Tisseur 2017, Acta Numerica 26, §4.3),
  * one complex (n+1)×(n+1) solve per iteration. Both converge quadratically to a simple eigenvalue from a
  * warm start (previous speed or p-k iterate).
- * Notes: stops when |Δλ| ≤ 1e-13·|λ| (or at the rounding floor below 1e-9·|λ|) or after 40 iterations (returns false then); the eigenvector is left
+ * Notes: stops when |Δλ| ≤ 1e-13·|λ|, or ≤ 1e-7·|λ| once quadratic convergence is seen (the remaining error is
+ * then of the order of the step squared), or at the rounding floor below 1e-9·|λ| or after 40 iterations (returns false then); the eigenvector is left
  * unnormalised.
  * @param mass M (n×n row-major)
  * @param work workspace with the assembled C and K
@@ -88,7 +94,11 @@ function refinePole2(mass: Float64Array, work: PoleWorkspace, guessRe: number, g
     const step = Math.hypot(dr, di);
     if (!Number.isFinite(step)) break;
     const scale = Math.hypot(lr, li);
-    if (step <= NEWTON_TOLERANCE * scale || (step >= lastStep && step <= NEWTON_STAGNATION * scale)) {
+    if (
+      step <= NEWTON_TOLERANCE * scale ||
+      (step <= NEWTON_QUADRATIC_ACCEPT * scale && step <= 1e-3 * lastStep) ||
+      (step >= lastStep && step <= NEWTON_STAGNATION * scale)
+    ) {
       converged = true;
       break;
     }
@@ -199,7 +209,11 @@ function refinePoleBordered(
     const step = Math.hypot(dr, di);
     if (!Number.isFinite(step)) break;
     const scale = Math.hypot(lr, li);
-    if (step <= NEWTON_TOLERANCE * scale || (step >= lastStep && step <= NEWTON_STAGNATION * scale)) {
+    if (
+      step <= NEWTON_TOLERANCE * scale ||
+      (step <= NEWTON_QUADRATIC_ACCEPT * scale && step <= 1e-3 * lastStep) ||
+      (step >= lastStep && step <= NEWTON_STAGNATION * scale)
+    ) {
       converged = true;
       break;
     }

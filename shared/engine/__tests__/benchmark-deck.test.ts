@@ -1,0 +1,58 @@
+import { describe, expect, it } from "vitest";
+import { runSweep } from "../run-sweep";
+import { benchmarkDeck, relativeError } from "./support/benchmark-deck";
+
+// Reference values: domain guide §5, "computed by an independent reference" (not published values; the paper's
+// participants' results were not checked). Tolerance 0.1 %.
+const TOLERANCE = 1e-3;
+
+function expectClose(actual: number | undefined, expected: number, what: string) {
+  expect(actual, `${what}: no value`).toBeDefined();
+  const error = relativeError(actual!, expected);
+  expect(error, `${what}: ${actual} vs ${expected} (relative error ${error.toExponential(2)} > ${TOLERANCE})`).toBeLessThan(
+    TOLERANCE,
+  );
+}
+
+describe("benchmark deck of the IABSE TG 3.1 2-DOF benchmark (inputs from domain guide §5), flat plate", () => {
+  it("flutters at 77.24 m/s and 0.1936 Hz (K = 0.4881) with ζ = 0.3 %, coupled, from the torsion branch", () => {
+    const result = runSweep(benchmarkDeck());
+    const flutter = result.flutter!;
+    expectClose(flutter.speed, 77.24, "flutter speed");
+    expectClose(flutter.frequency, 0.1936, "flutter frequency");
+    const k = (31 * 2 * Math.PI * flutter.frequency) / flutter.speed;
+    expectClose(k, 0.4881, "reduced frequency K = Bω/U");
+    expect(flutter.mode).toBe("T1");
+    expect(flutter.kind).toBe("coupled");
+    expect(flutter.reducedVelocity).toBeCloseTo(flutter.speed / (flutter.frequency * 31), 9);
+  });
+
+  it("flutters at 76.68 m/s without structural damping and at 75.77 m/s with ρ = 1.25", () => {
+    expectClose(runSweep(benchmarkDeck({ damping: 0 })).flutter?.speed, 76.68, "ζ = 0");
+    expectClose(runSweep(benchmarkDeck({ damping: 0, density: 1.25 })).flutter?.speed, 75.77, "ζ = 0, ρ = 1.25");
+  });
+
+  it("gives the divergence closed form 90.47 m/s, and the sweep's static root crosses zero close to it", () => {
+    const result = runSweep(benchmarkDeck());
+    expectClose(result.divergence?.speed, 90.47, "divergence");
+    const crossing = result.warnings.find((w) => w.code === "static-instability");
+    // the sweep adds H3*, H4*, A4* to the static balance: near, not equal (within 1 %)
+    expect(crossing?.speeds?.[0]).toBeDefined();
+    expect(relativeError(crossing!.speeds![0], 90.47)).toBeLessThan(0.01);
+  });
+
+  it.each([
+    [0.8, 69.31],
+    [1.2, 84.47],
+  ])("scales mass and inertia by %s → %s m/s", (factor, expected) => {
+    expectClose(runSweep(benchmarkDeck({ massFactor: factor })).flutter?.speed, expected, `mass ×${factor}`);
+  });
+
+  it.each([
+    [0.15, 70.36],
+    [0.2, 59.94],
+    [0.25, 48.13],
+  ])("with f_h = %s Hz flutters at %s m/s", (heaveHz, expected) => {
+    expectClose(runSweep(benchmarkDeck({ heaveHz })).flutter?.speed, expected, `f_h = ${heaveHz} Hz`);
+  });
+});
