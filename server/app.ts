@@ -7,6 +7,7 @@ import { APP_CONTEXT_KEY, type AppContext } from "./app-context.js";
 import type { Config } from "./config.js";
 import { projectRoot } from "./config.js";
 import type { Db } from "./db/client.js";
+import { AppError } from "./errors.js";
 import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
@@ -50,6 +51,9 @@ export function createApp(options: CreateAppOptions): Express {
 
   const clientDir = options.clientDir ?? path.join(projectRoot, "dist", "client");
   if (existsSync(path.join(clientDir, "index.html"))) {
+    // Vite names built assets by content hash: they never change, so browsers may keep them.
+    app.use("/assets", express.static(path.join(clientDir, "assets"), { index: false, immutable: true, maxAge: "365d" }));
+    app.use("/assets", (_req, _res, next) => next(AppError.notFound("Asset")));
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
     app.get("/{*splat}", (_req, res) => {
       res.setHeader("Cache-Control", "no-cache");
@@ -57,6 +61,7 @@ export function createApp(options: CreateAppOptions): Express {
     });
   }
 
+  app.use((req, _res, next) => next(new AppError(404, "not_found", `Nothing at ${req.method} ${req.path}.`)));
   app.use(errorHandler(ctx.logger));
   return app;
 }

@@ -55,6 +55,20 @@ describe("errors", () => {
     expect(res.body.error.code).toBe("not_found");
   });
 
+  it("answers a missing built asset with 404, not with the single-page app", async () => {
+    const res = await api(testEnv.baseUrl, "/assets/no-such-chunk.js");
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe("not_found");
+  });
+
+  it("serves the single-page app for client routes and 404 JSON for other methods", async () => {
+    const page = await fetch(`${testEnv.baseUrl}/projects/1`);
+    expect(page.status).toBe(200);
+    expect(page.headers.get("content-type")).toMatch(/text\/html/);
+    const post = await api(testEnv.baseUrl, "/projects/1", { method: "POST", body: {} });
+    expect(post.status).toBe(404);
+  });
+
   it("sends helmet's security headers", async () => {
     const res = await api(testEnv.baseUrl, "/api/health");
     expect(res.headers.get("x-content-type-options")).toBe("nosniff");
