@@ -3,6 +3,7 @@
 export * from "./users.js";
 export * from "./projects.js";
 export * from "./audit-events.js";
+export * from "./sessions.js";
 export * from "./criteria.js";
 export * from "./alternatives.js";
 export * from "./aero-datasets.js";
