@@ -6,8 +6,9 @@ import { requirePositive } from "./check-input";
  *
  * **Method**: Sc = 2 δ_s m / (ρ b²).
  *
- * **Notes**: EN 1991-1-4:2005 Annex E.1.3.3, Expr. (E.4); the same form is given by S.O. Hansen,
- * "Vortex-induced vibrations of structures", Structural Engineers World Congress 2007. δ_s = 2πζ is the
+ * **Notes**: EN 1991-1-4:2005 Annex E.1.3.3, Expr. (E.4) (expression number from memory); the same definition
+ * is quoted from S.O. Hansen, "Vortex-induced vibrations of structures", Structural Engineers World Congress
+ * 2007 (seen as quoted, not in the paper itself). δ_s = 2πζ is the
  * logarithmic decrement of structural damping, m the equivalent mass per unit length of the mode (for a
  * section model, the deck's mass per unit length), b the cross-wind dimension (deck depth D). Computed
  * check: δ_s = 0.02, m = 12 000 kg/m, ρ = 1.25 kg/m³, b = 3 m → Sc = 42.67.

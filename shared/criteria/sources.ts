@@ -21,8 +21,9 @@ export const SOURCES = {
     `${EN_1991_1_4}, Annex E.1.3.2, Table E.1 / Figure E.2 (rectangular sections with sharp corners against ` +
     "d/b) — values from memory, not checked against the standard: verify before use, or enter the deck's measured St",
   scruton:
-    `${EN_1991_1_4}, Annex E.1.3.3, Expr. (E.4): Sc = 2 δ_s m_i,e / (ρ b²) (same form in S.O. Hansen, ` +
-    "“Vortex-induced vibrations of structures”, Structural Engineers World Congress 2007)",
+    `${EN_1991_1_4}, Annex E.1.3.3, Expr. (E.4): Sc = 2 δ_s m_i,e / (ρ b²) (expression number from memory; the ` +
+    "same definition is quoted from S.O. Hansen, “Vortex-induced vibrations of structures”, Structural Engineers " +
+    "World Congress 2007, in the encyclopaedia article “Scruton number”)",
   torsionalScruton:
     "Torsional (inertia) form Sc_θ = 2 δ_s I / (ρ B⁴), B = deck width — common practice in bridge aerodynamics " +
     "(EN 1991-1-4 gives only the translational form); not a code formula",
