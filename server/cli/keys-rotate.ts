@@ -3,11 +3,11 @@
  * verifying: their public keys stay in the JWKS. A running server picks the new key up on its next signature.
  */
 import { ConfigError, loadConfig } from "../config.js";
-import { KeyStore, KeyStoreError, keyStoreOptionsFromEnv } from "../signing/key-store.js";
+import { KeyStore, KeyStoreError, keyStoreOptions } from "../signing/key-store.js";
 
 async function main(): Promise<void> {
   const config = loadConfig();
-  const store = await KeyStore.open(keyStoreOptionsFromEnv(config.dataDir));
+  const store = await KeyStore.open(keyStoreOptions(config.signing));
   const previous = (await store.signingKey()).kid;
   const next = await store.rotate();
   const jwks = await store.jwks();

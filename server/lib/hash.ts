@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import { canonicalJsonBytes } from "@shared/canonical-json";
+import { canonicalJsonBytes } from "../../shared/canonical-json.js";
 
 /** Lower-case hex SHA-256 of a string (UTF-8) or of bytes. */
 export function sha256Hex(data: string | Uint8Array): string {

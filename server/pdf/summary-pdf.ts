@@ -8,7 +8,7 @@
 import path from "node:path";
 import { decodeProtectedHeader } from "jose";
 import PDFDocument from "pdfkit";
-import { SUMMARY_CAUTIONS, type SummaryPayload } from "@shared/schemas/summary";
+import { SUMMARY_CAUTIONS, type SummaryPayload } from "../../shared/schemas/summary.js";
 import { projectRoot } from "../config.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { drawLineChart, type ChartSeries } from "./line-chart.js";

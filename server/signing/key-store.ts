@@ -24,7 +24,7 @@ import {
   type CryptoKey,
   type JWK,
 } from "jose";
-import { SUMMARY_JWS_ALG } from "@shared/schemas/summary";
+import { SUMMARY_JWS_ALG } from "../../shared/schemas/summary.js";
 
 export const SIGNING_ALG = SUMMARY_JWS_ALG;
 
@@ -245,11 +245,7 @@ async function parseRetiredJwks(text: string): Promise<PublicSigningJwk[]> {
   );
 }
 
-/** Store options from the environment: the env key when set, else the key folder under the data folder. */
-export function keyStoreOptionsFromEnv(dataDir: string, env: NodeJS.ProcessEnv = process.env): KeyStoreOptions {
-  return {
-    dir: env.STILLSPAN_KEYS_DIR ? path.resolve(env.STILLSPAN_KEYS_DIR) : path.join(dataDir, "keys"),
-    envKey: env.STILLSPAN_SIGNING_KEY?.trim() || undefined,
-    envRetiredJwks: env.STILLSPAN_SIGNING_RETIRED_JWKS?.trim() || undefined,
-  };
+/** Store options from the parsed configuration (`Config["signing"]`). */
+export function keyStoreOptions(signing: { keysDir: string; privateKey?: string; retiredJwks?: string }): KeyStoreOptions {
+  return { dir: signing.keysDir, envKey: signing.privateKey, envRetiredJwks: signing.retiredJwks };
 }

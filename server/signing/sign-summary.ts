@@ -4,8 +4,13 @@
  * bytes themselves, so anyone can re-canonicalise the decoded summary and get the signed bytes back.
  */
 import { CompactSign } from "jose";
-import { canonicalJsonBytes } from "@shared/canonical-json";
-import { SUMMARY_JWS_ALG, SUMMARY_JWS_TYP, summaryPayloadSchema, type SummaryPayload } from "@shared/schemas/summary";
+import { canonicalJsonBytes } from "../../shared/canonical-json.js";
+import {
+  SUMMARY_JWS_ALG,
+  SUMMARY_JWS_TYP,
+  summaryPayloadSchema,
+  type SummaryPayload,
+} from "../../shared/schemas/summary.js";
 import type { KeyStore } from "./key-store.js";
 
 export { SUMMARY_JWS_TYP };
