@@ -36,6 +36,10 @@ const envSchema = z.object({
   SMTP_USER: optionalText,
   SMTP_PASSWORD: optionalText,
   SMTP_FROM: z.email().optional(),
+  SMTP_SECURE: flag,
+  STILLSPAN_KEYS_DIR: optionalText,
+  STILLSPAN_SIGNING_KEY: optionalText,
+  STILLSPAN_SIGNING_RETIRED_JWKS: optionalText,
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -55,7 +59,10 @@ export interface Config {
   admin?: { email: string; password: string };
   signInRateLimit: { limit: number; windowMs: number };
   trustProxy: boolean;
-  smtp: { host?: string; port?: number; user?: string; password?: string; from?: string };
+  /** Outgoing mail; without `host` the server runs the local fake SMTP server on 127.0.0.1:`port` (default 2525). */
+  smtp: { host?: string; port?: number; secure: boolean; user?: string; password?: string; from?: string };
+  /** Summary signing keys: a key folder (default <dataDir>/keys), or a private key given by the environment. */
+  signing: { keysDir: string; privateKey?: string; retiredJwks?: string };
 }
 
 export class ConfigError extends Error {
@@ -114,6 +121,18 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
         : undefined,
     signInRateLimit: { limit: e.STILLSPAN_SIGNIN_LIMIT, windowMs: e.STILLSPAN_SIGNIN_WINDOW_MS },
     trustProxy: e.TRUST_PROXY,
-    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, password: e.SMTP_PASSWORD, from: e.SMTP_FROM },
+    smtp: {
+      host: e.SMTP_HOST,
+      port: e.SMTP_PORT,
+      secure: e.SMTP_SECURE,
+      user: e.SMTP_USER,
+      password: e.SMTP_PASSWORD,
+      from: e.SMTP_FROM,
+    },
+    signing: {
+      keysDir: path.resolve(projectRoot, e.STILLSPAN_KEYS_DIR ?? path.join(dataDir, "keys")),
+      privateKey: e.STILLSPAN_SIGNING_KEY,
+      retiredJwks: e.STILLSPAN_SIGNING_RETIRED_JWKS,
+    },
   };
 }
