@@ -2,13 +2,12 @@ import { Router, type CookieOptions, type Request, type Response } from "express
 import { rateLimit } from "express-rate-limit";
 import { signInInputSchema } from "../../shared/schemas/auth.js";
 import type { AppContext } from "../app-context.js";
-import { writeAudit } from "../db/queries/audit.js";
 import { AppError } from "../errors.js";
 import { currentUser, requireAuth } from "../middleware/auth.js";
 import {
   createSessionToken,
   describeMe,
-  readSessionToken,
+  endSession,
   SESSION_COOKIE,
   SESSION_TTL_SECONDS,
   signIn,
@@ -47,10 +46,7 @@ export function authRoutes({ db, config }: AppContext): Router {
 
   router.post("/sign-out", async (req, res) => {
     const token: unknown = req.cookies?.[SESSION_COOKIE];
-    const userId = typeof token === "string" ? await readSessionToken(config.sessionSecret, token) : undefined;
-    if (userId !== undefined) {
-      await writeAudit(db, { actorId: userId, action: "auth.sign-out", objectType: "user", objectId: userId, ip: req.ip });
-    }
+    if (typeof token === "string" && token) await endSession(db, config.sessionSecret, token, req.ip);
     res.clearCookie(SESSION_COOKIE, cookieOptions(req));
     res.status(204).end();
   });

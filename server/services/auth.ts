@@ -1,11 +1,14 @@
 /**
- * Sign-in and sessions. A session is a JWT (HS256, signed with the server's session secret) naming the user;
- * it lives 12 h in an httpOnly cookie. Every request re-reads the user, so a deleted user loses access at once.
+ * Sign-in and sessions. A session is a JWT (HS256, signed with the server's session secret) naming the user and
+ * carrying a random session id (jti); it lives 12 h in an httpOnly cookie. Every request re-reads the user, so a
+ * deleted user loses access at once, and checks the session id against those ended by sign-out.
  */
+import { randomUUID } from "node:crypto";
 import { errors as joseErrors, jwtVerify, SignJWT } from "jose";
 import type { Me, SignInInput } from "../../shared/schemas/auth.js";
 import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
+import { isSessionRevoked, revokeSession } from "../db/queries/sessions.js";
 import { findUserByEmail, findUserById, listMembershipsOfUser } from "../db/queries/users.js";
 import type { User } from "../db/schema/index.js";
 import { AppError } from "../errors.js";
@@ -32,6 +35,7 @@ export async function createSessionToken(secret: Uint8Array, userId: number, now
   return new SignJWT({})
     .setProtectedHeader({ alg: "HS256", typ: "JWT" })
     .setSubject(String(userId))
+    .setJti(randomUUID())
     .setIssuer(ISSUER)
     .setAudience(AUDIENCE)
     .setIssuedAt(issuedAt)
@@ -39,12 +43,25 @@ export async function createSessionToken(secret: Uint8Array, userId: number, now
     .sign(secret);
 }
 
-/** The user id in a valid, unexpired session token; undefined for anything else (tampered, expired, malformed). */
-export async function readSessionToken(secret: Uint8Array, token: string): Promise<number | undefined> {
+export interface SessionClaims {
+  userId: number;
+  /** Session id. */
+  jti: string;
+  expiresAt: Date;
+}
+
+/** The claims of a valid, unexpired session token; undefined for anything else (tampered, expired, malformed). */
+export async function readSessionToken(secret: Uint8Array, token: string): Promise<SessionClaims | undefined> {
   try {
-    const { payload } = await jwtVerify(token, secret, { algorithms: ["HS256"], issuer: ISSUER, audience: AUDIENCE });
-    const id = Number(payload.sub);
-    return Number.isSafeInteger(id) && id > 0 ? id : undefined;
+    const { payload } = await jwtVerify(token, secret, {
+      algorithms: ["HS256"],
+      issuer: ISSUER,
+      audience: AUDIENCE,
+      requiredClaims: ["sub", "jti", "exp"],
+    });
+    const userId = Number(payload.sub);
+    if (!Number.isSafeInteger(userId) || userId <= 0 || typeof payload.jti !== "string") return undefined;
+    return { userId, jti: payload.jti, expiresAt: new Date(payload.exp! * 1000) };
   } catch (err) {
     if (err instanceof joseErrors.JOSEError) return undefined;
     throw err;
@@ -65,12 +82,22 @@ export async function signIn(db: DbOrTx, input: SignInInput, ip: string | undefi
   return toSessionUser(user);
 }
 
-/** The user behind a session token, or undefined when the token is invalid or the user no longer exists. */
+/** The user behind a session token, or undefined when the token is invalid or revoked, or the user is gone. */
 export async function userFromSession(db: DbOrTx, secret: Uint8Array, token: string): Promise<SessionUser | undefined> {
-  const id = await readSessionToken(secret, token);
-  if (id === undefined) return undefined;
-  const user = await findUserById(db, id);
-  return user ? toSessionUser(user) : undefined;
+  const claims = await readSessionToken(secret, token);
+  if (!claims) return undefined;
+  const [user, revoked] = await Promise.all([findUserById(db, claims.userId), isSessionRevoked(db, claims.jti)]);
+  return user && !revoked ? toSessionUser(user) : undefined;
+}
+
+/** Ends a session before its expiry (sign-out) and records it; a no-op for an invalid token. */
+export async function endSession(db: DbOrTx, secret: Uint8Array, token: string, ip: string | undefined): Promise<void> {
+  const claims = await readSessionToken(secret, token);
+  if (!claims) return;
+  await db.transaction(async (tx) => {
+    await revokeSession(tx, claims.jti, claims.userId, claims.expiresAt);
+    await writeAudit(tx, { actorId: claims.userId, action: "auth.sign-out", objectType: "user", objectId: claims.userId, ip });
+  });
 }
 
 /** Body of GET /api/auth/me. */

@@ -77,9 +77,8 @@ describe("GET /api/auth/me", () => {
     const cookie = await signIn(base(), "viewer@stillspan.test");
     const [header, , signature] = cookie.split("=")[1].split(".");
     const adminId = await userId(db, "admin@stillspan.test");
-    const forgedPayload = Buffer.from(
-      JSON.stringify({ sub: String(adminId), iss: "stillspan", aud: "stillspan-session", iat: 1, exp: 4102444800 }),
-    ).toString("base64url");
+    const original = JSON.parse(Buffer.from(cookie.split("=")[1].split(".")[1], "base64url").toString());
+    const forgedPayload = Buffer.from(JSON.stringify({ ...original, sub: String(adminId) })).toString("base64url");
 
     const res = await api(base(), "/api/auth/me", { cookie: `stillspan_session=${header}.${forgedPayload}.${signature}` });
     expect(res.status).toBe(401);
@@ -103,13 +102,24 @@ describe("GET /api/auth/me", () => {
 });
 
 describe("POST /api/auth/sign-out", () => {
-  it("clears the session cookie", async () => {
+  it("clears the session cookie and ends that session on the server, leaving the user's other sessions", async () => {
     const cookie = await signIn(base(), "analyst@stillspan.test");
+    const otherDevice = await signIn(base(), "analyst@stillspan.test");
+
     const res = await api(base(), "/api/auth/sign-out", { method: "POST", cookie });
+
     expect(res.status).toBe(204);
     const cleared = res.headers.getSetCookie().find((c) => c.startsWith("stillspan_session="));
     expect(cleared).toMatch(/^stillspan_session=;/);
     expect(cleared).toMatch(/Expires=Thu, 01 Jan 1970/);
+    // A copy of the old cookie no longer works.
+    expect((await api(base(), "/api/auth/me", { cookie })).status).toBe(401);
+    expect((await api(base(), "/api/auth/me", { cookie: otherDevice })).status).toBe(200);
+    expect(await auditActions(db, "user", await userId(db, "analyst@stillspan.test"))).toContain("auth.sign-out");
+  });
+
+  it("answers 204 without a session", async () => {
+    expect((await api(base(), "/api/auth/sign-out", { method: "POST" })).status).toBe(204);
   });
 });
 
