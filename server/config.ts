@@ -17,7 +17,7 @@ const flag = z
 /** Every environment variable the server reads, validated once at start. */
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
-  HOST: z.string().default("127.0.0.1"),
+  STILLSPAN_HOST: z.string().min(1).default("127.0.0.1"),
   PORT: port(3000),
   PGPORT: port(54329),
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).optional(),
@@ -106,7 +106,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const dataDir = path.resolve(projectRoot, e.STILLSPAN_DATA_DIR ?? ".data");
   return {
     nodeEnv: e.NODE_ENV,
-    host: e.HOST,
+    host: e.STILLSPAN_HOST,
     port: e.PORT,
     pgPort: e.PGPORT,
     databaseUrl: e.DATABASE_URL,
