@@ -1,6 +1,6 @@
 /**
  * Production entry (`npm start`): config → PostgreSQL (our own cluster unless DATABASE_URL) → migrations →
- * demo seed on an empty database (unless STILLSPAN_SEED=none) → HTTP on HOST:PORT (127.0.0.1:3000).
+ * demo seed on an empty database (unless STILLSPAN_SEED=none) → HTTP on STILLSPAN_HOST:PORT (127.0.0.1:3000).
  */
 import type { Server } from "node:http";
 import { createApp } from "./app.js";
