@@ -11,14 +11,15 @@ import { verifyPassword } from "../../server/services/passwords.js";
 import { testEnv } from "../support/env.js";
 
 const quiet = logger.child({}, { level: "silent" });
-const SCRATCH = "stillspan_test_seed";
-
 /** URL of another database on the test server. */
 function databaseUrl(name: string): string {
   const url = new URL(testEnv.databaseUrl);
   url.pathname = `/${name}`;
   return url.toString();
 }
+
+// Named after this run's test database, so concurrent runs each have their own scratch database.
+const SCRATCH = `${new URL(testEnv.databaseUrl).pathname.slice(1)}_seed`;
 
 describe("seed on a fresh database", () => {
   let db: Db;
