@@ -7,7 +7,8 @@
  *   3. `vite build` of the client into dist/client
  *   4. the app as a child process on a free port of its own (a running `npm start` does not collide)
  *   5. `vitest run` over every project (unit, client, integration incl. browser), with TEST_BASE_URL,
- *      TEST_DATABASE_URL, TEST_SESSION_SECRET and STILLSPAN_TEST=1; arguments after `--` go to vitest
+ *      TEST_DATABASE_URL, TEST_SESSION_SECRET, SMTP_PORT (the app's fake SMTP server) and STILLSPAN_TEST=1;
+ *      arguments after `--` go to vitest
  *
  * The app child is always stopped (its whole process group); the exit code is vitest's.
  */
@@ -22,6 +23,7 @@ import { runMigrations } from "../server/db/migrate.js";
 import { createDatabase, dropDatabase, ensureLocalPostgres } from "../server/db/pg-local.js";
 import { seedDemo } from "../server/db/seed.js";
 import { logger } from "../server/logger.js";
+import { ensureSigningKey } from "../server/services/signing.js";
 
 // One database per run (dropped afterwards), so two runs on one machine never reset each other's data.
 const TEST_DB = process.env.STILLSPAN_TEST_DB ?? `stillspan_test_${process.pid}`;
@@ -106,6 +108,7 @@ async function prepareDatabase(): Promise<{ testUrl: string; maintenanceUrl: str
   const db = createDb(testUrl, { max: 2 });
   try {
     await runMigrations(db);
+    await ensureSigningKey(config); // the demo seed signs a summary
     await seedDemo(db, config, logger);
   } finally {
     await db.$client.end();
@@ -134,6 +137,9 @@ async function main(): Promise<number> {
 
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
+  // The app runs the local fake SMTP server on a free port of its own; tests never use a real SMTP server.
+  const smtpPort = await freePort();
+  const mailEnv = { SMTP_HOST: undefined, SMTP_USER: undefined, SMTP_PASSWORD: undefined, SMTP_PORT: String(smtpPort) };
   const sessionSecret = randomBytes(32).toString("base64url");
   const appLog = path.join(artifacts, "app.log");
   const appEnv: NodeJS.ProcessEnv = {
@@ -146,6 +152,7 @@ async function main(): Promise<number> {
     STILLSPAN_SIGNIN_LIMIT: "100000",
     STILLSPAN_TEST: "1",
     STILLSPAN_CLIENT_DIR: clientDir,
+    ...mailEnv,
     LOG_LEVEL: process.env.LOG_LEVEL ?? "warn",
   };
   step(`starting the app on ${baseUrl} (log: ${path.relative(projectRoot, appLog)})`);
@@ -174,6 +181,7 @@ async function main(): Promise<number> {
         TEST_DATABASE_URL: databaseUrl,
         TEST_SESSION_SECRET: sessionSecret,
         STILLSPAN_TEST: "1",
+        ...mailEnv,
       },
     });
     step(`vitest finished (exit ${vitest.status ?? vitest.signal})`);

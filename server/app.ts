@@ -11,6 +11,7 @@ import { AppError } from "./errors.js";
 import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
+import { wellKnownRoutes } from "./routes/well-known.js";
 
 export type { AppContext } from "./app-context.js";
 
@@ -48,6 +49,7 @@ export function createApp(options: CreateAppOptions): Express {
   app.use(cookieParser());
 
   app.use("/api", apiRouter(ctx), apiNotFound);
+  app.use("/.well-known", wellKnownRoutes(ctx));
 
   const clientDir = options.clientDir ?? path.join(projectRoot, "dist", "client");
   if (existsSync(path.join(clientDir, "index.html"))) {

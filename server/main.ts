@@ -11,6 +11,8 @@ import { createDatabase, ensureLocalPostgres } from "./db/pg-local.js";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "./db/seed/accounts.js";
 import { prepareDatabaseContent } from "./db/seed.js";
 import { logger } from "./logger.js";
+import { startFakeSmtpIfNeeded } from "./services/mail.js";
+import { ensureSigningKey } from "./services/signing.js";
 
 async function resolveDatabaseUrl(config: Config): Promise<string> {
   if (config.databaseUrl) return config.databaseUrl;
@@ -33,6 +35,10 @@ async function main(): Promise<void> {
 
   const db: Db = createDb(await resolveDatabaseUrl(config));
   await runMigrations(db);
+  // The signing key exists before the seed runs (the demo seed signs a summary).
+  const signingKey = await ensureSigningKey(config);
+  logger.info(signingKey, "summary signing key ready");
+  const fakeSmtp = await startFakeSmtpIfNeeded(config, db, logger);
   const seeded = await prepareDatabaseContent(db, config, logger);
 
   const app = createApp({ db, config, logger, clientDir: config.clientDir });
@@ -50,11 +56,18 @@ async function main(): Promise<void> {
     console.log(`Demo accounts (password "${DEMO_PASSWORD}"; demo data is invented):`);
     for (const a of DEMO_ACCOUNTS) console.log(`  ${a.email.padEnd(26)} ${a.label}`);
   }
+  if (fakeSmtp) {
+    console.log(
+      `Mail goes to the local fake SMTP server on ${fakeSmtp.host}:${fakeSmtp.port} (nothing leaves this machine); ` +
+        "administrators read it at /api/dev/mailbox.",
+    );
+  }
   console.log("");
 
   const shutdown = (signal: string) => {
     logger.info({ signal }, "shutting down");
-    server.close(() => void db.$client.end().finally(() => process.exit(0)));
+    const closeMail = fakeSmtp ? fakeSmtp.close() : Promise.resolve();
+    server.close(() => void closeMail.then(() => db.$client.end()).finally(() => process.exit(0)));
     server.closeAllConnections();
     setTimeout(() => process.exit(0), 5000).unref();
   };

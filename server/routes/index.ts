@@ -2,9 +2,11 @@ import { Router } from "express";
 import type { AppContext } from "../app-context.js";
 import { authRoutes } from "./auth.js";
 import { criteriaRoutes } from "./criteria.js";
+import { devMailboxRoutes } from "./dev-mailbox.js";
 import { healthRoutes } from "./health.js";
 import { projectRoutes } from "./projects.js";
 import { screeningRoutes } from "./screening.js";
+import { signatureRoutes } from "./signatures.js";
 
 /**
  * Every API resource, mounted under /api. To add one: write server/routes/<resource>.ts exporting a factory
@@ -17,5 +19,7 @@ export function apiRouter(ctx: AppContext): Router {
   router.use("/projects/:projectId/criteria", criteriaRoutes(ctx));
   router.use("/projects", projectRoutes(ctx));
   router.use("/screening", screeningRoutes(ctx));
+  router.use("/signatures", signatureRoutes(ctx));
+  router.use("/dev/mailbox", devMailboxRoutes(ctx));
   return router;
 }
