@@ -10,3 +10,5 @@ export * from "./aero-datasets.js";
 export * from "./studies.js";
 export * from "./study-revisions.js";
 export * from "./mail.js";
+export * from "./review.js";
+export * from "./one-time-tokens.js";
