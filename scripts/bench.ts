@@ -9,7 +9,7 @@
 import { createAeroModel } from "../shared/engine/aero/create-aero-model";
 import { locateFlutter, locateStaticCrossing } from "../shared/engine/core/locate-critical";
 import { trackPoles } from "../shared/engine/core/track-poles";
-import { generalizedSystem } from "../shared/engine/generalized";
+import { generalizedSystem, type GeneralizedModeInput } from "../shared/engine/generalized";
 import { runSweep } from "../shared/engine/run-sweep";
 import { sweepGrid } from "../shared/engine/sweep-grid";
 import type { StudyDocument } from "../shared/schemas/study";
@@ -47,7 +47,7 @@ function generalized20(): BenchCase {
   const stations = Float64Array.from({ length: 201 }, (_, i) => (i * span) / 200);
   const shape = (k: number) => Float64Array.from(stations, (x) => Math.sin((k * Math.PI * x) / span));
   const zero = new Float64Array(stations.length);
-  const modes = [];
+  const modes: GeneralizedModeInput[] = [];
   for (let k = 1; k <= 10; k++) {
     modes.push({ id: `V${k}`, frequencyHz: 0.1 + 0.03 * (k - 1), damping: 0.003, heave: shape(k), torsion: zero });
   }
