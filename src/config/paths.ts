@@ -23,6 +23,22 @@ export const paths = {
       path: "/projects/:projectId",
       getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
     },
+    study: {
+      path: "/projects/:projectId/studies/:studyId",
+      getHref: (projectId: string, studyId: string, revision?: number) =>
+        `/projects/${encodeURIComponent(projectId)}/studies/${encodeURIComponent(studyId)}${revision ? `?revision=${revision}` : ""}`,
+    },
+    studyRevisions: {
+      path: "/projects/:projectId/studies/:studyId/revisions",
+      getHref: (projectId: string, studyId: string) =>
+        `/projects/${encodeURIComponent(projectId)}/studies/${encodeURIComponent(studyId)}/revisions`,
+    },
+    compare: {
+      path: "/projects/:projectId/compare",
+      /** `items`: revision ids to overlay (2–4). */
+      getHref: (projectId: string, revisionIds: readonly string[] = []) =>
+        `/projects/${encodeURIComponent(projectId)}/compare${revisionIds.length ? `?revisions=${revisionIds.map(encodeURIComponent).join(",")}` : ""}`,
+    },
     signedSummaries: {
       path: "/signed-summaries",
       getHref: () => "/signed-summaries",
@@ -45,7 +61,30 @@ export const apiPaths = {
   projects: {
     list: "/api/projects",
     detail: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}`,
+    members: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/members`,
+    alternatives: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/alternatives`,
+    comparison: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/comparison`,
+    criteria: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/criteria`,
+    criteriaHistory: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/criteria/history`,
   },
+  alternatives: {
+    studies: (alternativeId: string) => `/api/alternatives/${encodeURIComponent(alternativeId)}/studies`,
+    datasets: (alternativeId: string) => `/api/alternatives/${encodeURIComponent(alternativeId)}/datasets`,
+  },
+  datasets: {
+    detail: (datasetId: string) => `/api/datasets/${encodeURIComponent(datasetId)}`,
+  },
+  studies: {
+    detail: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}`,
+    revisions: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/revisions`,
+  },
+  revisions: {
+    detail: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}`,
+    diff: (fromId: string, toId: string) =>
+      `/api/revisions/${encodeURIComponent(fromId)}/diff/${encodeURIComponent(toId)}`,
+  },
+  sweep: "/api/sweep",
+  screening: "/api/screening",
 } as const;
 
 /**

@@ -11,6 +11,8 @@ const FALLBACK: Record<string, string> = {
   "--color-ink-100": "#e4ecec",
   "--color-surface": "#fcfcfa",
   "--color-signal-600": "#b0461a",
+  "--color-signal-700": "#8c3110",
+  "--color-signal-50": "#fcf1ea",
   "--color-tide-600": "#14737b",
   "--color-tide-100": "#d5ecec",
   "--color-caution-100": "#f6ebc9",

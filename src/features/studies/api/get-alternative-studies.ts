@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { StudyDto } from "@shared/schemas/studies";
+import { apiPaths } from "@/config/paths";
+import { api } from "@/lib/api-client";
+
+export function getAlternativeStudies(alternativeId: string, signal?: AbortSignal): Promise<StudyDto[]> {
+  return api.get<StudyDto[]>(apiPaths.alternatives.studies(alternativeId), { signal });
+}
+
+export function getAlternativeStudiesQueryOptions(alternativeId: string) {
+  return queryOptions({
+    queryKey: ["studies", "list", alternativeId],
+    queryFn: ({ signal }) => getAlternativeStudies(alternativeId, signal),
+  });
+}
+
+export function useAlternativeStudies(alternativeId: string) {
+  return useQuery(getAlternativeStudiesQueryOptions(alternativeId));
+}

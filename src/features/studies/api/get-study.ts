@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { StudyDto } from "@shared/schemas/studies";
+import { apiPaths } from "@/config/paths";
+import { api } from "@/lib/api-client";
+
+export function getStudy(studyId: string, signal?: AbortSignal): Promise<StudyDto> {
+  return api.get<StudyDto>(apiPaths.studies.detail(studyId), { signal });
+}
+
+export function getStudyQueryOptions(studyId: string) {
+  return queryOptions({
+    queryKey: ["studies", "detail", studyId],
+    queryFn: ({ signal }) => getStudy(studyId, signal),
+  });
+}
+
+export function useStudy(studyId: string) {
+  return useQuery(getStudyQueryOptions(studyId));
+}

@@ -1,0 +1,304 @@
+import Papa from "papaparse";
+import { useId, useMemo, useRef, useState, type ChangeEvent } from "react";
+import type { DerivativeConvention } from "@shared/engine/aero/convert-convention";
+import type { DatasetDto } from "@shared/schemas/datasets";
+import type { StudyAerodynamics } from "@shared/schemas/study";
+import { Button } from "@/components/ui/button";
+import { Plot } from "@/components/ui/plot";
+import { cn } from "@/lib/cn";
+import { DerivativeTable } from "@/features/studies/components/derivative-table";
+import { aeroFigure } from "@/features/studies/utils/aero-figure";
+import {
+  emptyRow,
+  gridFromTable,
+  importDerivativeCsv,
+  parseGrid,
+  type CellError,
+  type GridRow,
+  type TabulatedAerodynamics,
+} from "@/features/studies/utils/derivative-grid";
+
+type Choice = "flat-plate" | "quasi-steady" | "tabulated";
+
+const CHOICES: Array<{ value: Choice; label: string; hint: string }> = [
+  { value: "tabulated", label: "Measured table", hint: "Flutter derivatives from section-model tests" },
+  { value: "flat-plate", label: "Thin plate", hint: "Theodorsen's flat plate; a first estimate" },
+  { value: "quasi-steady", label: "Quasi-steady", hint: "From static coefficient slopes; not for flutter" },
+];
+
+const DEFAULT_QS = { model: "quasi-steady", liftSlope: 2 * Math.PI, dragCoefficient: 0, momentSlope: Math.PI / 2 } as const;
+
+interface AerodynamicsEditorProps {
+  value: StudyAerodynamics;
+  readOnly: boolean;
+  /** Flutter-derivative data sets of the study's deck alternative. */
+  datasets: readonly DatasetDto[];
+  /** A valid block, or null with the grid's errors while the table cannot be read. */
+  onChange: (value: StudyAerodynamics | null, errors: CellError[]) => void;
+}
+
+/**
+ * Chooses and edits the study's aerodynamics: a measured table (typed, pasted, uploaded as CSV in a stated
+ * convention, or copied from one of the alternative's data sets), Theodorsen's thin plate, or quasi-steady
+ * slopes; the derivatives are drawn against Ur as the engine will interpolate them.
+ */
+export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: AerodynamicsEditorProps) {
+  const groupId = useId();
+  const [rows, setRows] = useState<GridRow[]>(() =>
+    value.model === "tabulated" ? gridFromTable(value) : [emptyRow(), emptyRow()],
+  );
+  const [interpolation, setInterpolation] = useState<TabulatedAerodynamics["interpolation"]>(
+    value.model === "tabulated" ? value.interpolation : "monotone-cubic",
+  );
+  const [rowNotes, setRowNotes] = useState<CellError[]>([]);
+  const [importMessage, setImportMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const [convention, setConvention] = useState<DerivativeConvention>({ abscissa: "Ur", normalisation: "B", sign: "h-down" });
+  const fileInput = useRef<HTMLInputElement>(null);
+
+  const gridParse = useMemo(() => parseGrid(rows), [rows]);
+  const gridErrors = gridParse.ok ? [] : gridParse.errors;
+  const shownErrors = [...rowNotes, ...gridErrors.filter((e) => !rowNotes.some((n) => n.row === e.row && n.column === e.column))];
+
+  const emitTable = (nextRows: GridRow[], nextInterpolation = interpolation, notes = rowNotes) => {
+    const parsed = parseGrid(nextRows);
+    if (parsed.ok && notes.length === 0) {
+      onChange({ model: "tabulated", interpolation: nextInterpolation, ...parsed.table }, []);
+    } else {
+      onChange(null, [...notes, ...(parsed.ok ? [] : parsed.errors)]);
+    }
+  };
+
+  const choose = (choice: Choice) => {
+    if (choice === value.model) return;
+    if (choice === "flat-plate") onChange({ model: "flat-plate" }, []);
+    else if (choice === "quasi-steady") onChange({ ...DEFAULT_QS }, []);
+    else emitTable(rows);
+  };
+
+  const editRows = (next: GridRow[]) => {
+    const edited = new Set(next.map((r, i) => (r !== rows[i] ? i : -1)));
+    const notes = rowNotes.filter((n) => !edited.has(n.row) && n.row < next.length);
+    setRows(next);
+    setRowNotes(notes);
+    emitTable(next, interpolation, notes);
+  };
+
+  const loadCsv = (text: string, source: string) => {
+    const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false, delimitersToGuess: [",", ";", "\t"] });
+    const imported = importDerivativeCsv(parsed.data, convention);
+    if ("fatal" in imported) {
+      setImportMessage({ tone: "error", text: `${source}: ${imported.fatal}` });
+      return;
+    }
+    const notes = imported.errors.filter((e) => e.column === null);
+    setRows(imported.rows);
+    setRowNotes(notes);
+    const bad = new Set(imported.errors.map((e) => e.row)).size;
+    setImportMessage(
+      bad > 0
+        ? { tone: "error", text: `${source}: ${imported.rows.length} rows read, ${bad} with errors — fix them in the table below.` }
+        : { tone: "info", text: `${source}: ${imported.rows.length} rows read and converted to the study convention.` },
+    );
+    emitTable(imported.rows, interpolation, notes);
+  };
+
+  const onFile = async (event: ChangeEvent<HTMLInputElement>) => {
+    const file = event.target.files?.[0];
+    event.target.value = "";
+    if (!file) return;
+    if (file.size > 1024 * 1024) {
+      setImportMessage({ tone: "error", text: `${file.name} is larger than 1 MB; is it the right file?` });
+      return;
+    }
+    loadCsv(await file.text(), file.name);
+  };
+
+  const copyDataset = (datasetId: string) => {
+    const dataset = datasets.find((d) => d.id === datasetId);
+    if (!dataset || !("reducedVelocity" in dataset.converted)) return;
+    const converted = dataset.converted;
+    const table: TabulatedAerodynamics = { model: "tabulated", interpolation, reducedVelocity: converted.reducedVelocity };
+    for (const name of ["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const) table[name] = converted[name];
+    const next = gridFromTable(table);
+    setRows(next);
+    setRowNotes([]);
+    setImportMessage({ tone: "info", text: `Copied from data set “${dataset.name}” (already in the study convention).` });
+    emitTable(next, interpolation, []);
+  };
+
+  const figure = useMemo(() => {
+    try {
+      if (value.model !== "tabulated") return aeroFigure(value);
+      return gridParse.ok ? aeroFigure({ model: "tabulated", interpolation, ...gridParse.table }) : null;
+    } catch {
+      return null;
+    }
+  }, [value, gridParse, interpolation]);
+
+  const flutterSets = datasets.filter((d) => d.kind === "flutter-derivatives");
+
+  return (
+    <div className="space-y-3">
+      <fieldset>
+        <legend className="mb-1 text-sm font-semibold text-ink-800">Model</legend>
+        <div className="grid grid-cols-3 gap-1 rounded-md bg-ink-50 p-1" role="radiogroup" aria-label="Aerodynamic model">
+          {CHOICES.map((choice) => {
+            const checked = value.model === choice.value;
+            return (
+              <label
+                key={choice.value}
+                className={cn(
+                  "cursor-pointer rounded-sm px-2 py-1 text-center text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-tide-600",
+                  checked ? "bg-surface font-semibold text-ink-950 shadow-panel" : "text-ink-700 hover:bg-ink-100",
+                  readOnly && !checked && "opacity-60",
+                )}
+                title={choice.hint}
+              >
+                <input
+                  type="radio"
+                  name={`${groupId}-model`}
+                  value={choice.value}
+                  checked={checked}
+                  disabled={readOnly}
+                  onChange={() => choose(choice.value)}
+                  className="sr-only"
+                />
+                {choice.label}
+              </label>
+            );
+          })}
+        </div>
+      </fieldset>
+
+      {value.model === "quasi-steady" ? (
+        <QuasiSteadyFields value={value} readOnly={readOnly} onChange={(next) => onChange(next, [])} />
+      ) : null}
+      {value.model === "flat-plate" ? (
+        <p className="text-sm text-ink-700">
+          Theodorsen's thin plate in the study convention (no inputs). Bluff decks usually flutter lower: use it as a
+          first estimate until section-model derivatives exist.
+        </p>
+      ) : null}
+
+      {value.model === "tabulated" || (value.model !== "flat-plate" && value.model !== "quasi-steady") ? (
+        <div className="space-y-2">
+          {!readOnly ? (
+            <div className="flex flex-wrap items-end gap-2 text-sm">
+              <SelectField label="Interpolation" value={interpolation}
+                onChange={(v) => { setInterpolation(v as typeof interpolation); emitTable(rows, v as typeof interpolation); }}
+                options={[["monotone-cubic", "Monotone cubic"], ["linear", "Linear"]]} />
+              {flutterSets.length > 0 ? (
+                <SelectField label="Copy from data set" value="" onChange={copyDataset}
+                  options={[["", "Choose…"], ...flutterSets.map((d) => [d.id, d.name] as [string, string])]} />
+              ) : null}
+            </div>
+          ) : (
+            <p className="text-sm text-ink-700">Interpolation: {interpolation === "linear" ? "linear" : "monotone cubic"}</p>
+          )}
+          {!readOnly ? (
+            <fieldset className="rounded-md border border-ink-200 px-2 pt-1 pb-2">
+              <legend className="px-1 text-xs font-semibold text-ink-700">CSV import — the file's convention</legend>
+              <div className="flex flex-wrap items-end gap-2 text-sm">
+                <SelectField label="Abscissa" value={convention.abscissa}
+                  onChange={(v) => setConvention({ ...convention, abscissa: v as DerivativeConvention["abscissa"] })}
+                  options={[["Ur", "Ur = U/(fB)"], ["Ur-half", "U/(fb), b = B/2"], ["K", "K = Bω/U"], ["k-half", "k = bω/U"]]} />
+                <SelectField label="Forces on" value={convention.normalisation}
+                  onChange={(v) => setConvention({ ...convention, normalisation: v as DerivativeConvention["normalisation"] })}
+                  options={[["B", "B, B² (ours)"], ["2B", "2B, 2B² (half of ours)"]]} />
+                <SelectField label="Heave and lift" value={convention.sign}
+                  onChange={(v) => setConvention({ ...convention, sign: v as DerivativeConvention["sign"] })}
+                  options={[["h-down", "Downward (ours)"], ["h-up", "Upward"]]} />
+                <input ref={fileInput} type="file" accept=".csv,text/csv,text/plain" className="sr-only" tabIndex={-1}
+                  aria-label="Derivative CSV file" onChange={onFile} data-testid="derivative-csv-input" />
+                <Button variant="secondary" size="sm" onClick={() => fileInput.current?.click()}>Upload CSV…</Button>
+                <Button variant="ghost" size="sm" onClick={() => editRows([...rows, emptyRow()])}>Add row</Button>
+              </div>
+              <p className="mt-1 text-xs text-ink-600">
+                Header row: abscissa, then any of H1…H4, A1…A4. Or paste a block from a spreadsheet into a cell.
+              </p>
+            </fieldset>
+          ) : null}
+          {importMessage ? (
+            <p role="status" className={cn("text-sm", importMessage.tone === "error" ? "font-semibold text-signal-700" : "text-ink-700")}>
+              {importMessage.text}
+            </p>
+          ) : null}
+          <DerivativeTable rows={rows} errors={shownErrors} readOnly={readOnly} onChange={editRows} />
+        </div>
+      ) : null}
+
+      <div>
+        <p className="text-xs text-ink-600">
+          Derivatives vs Ur as the engine interpolates them{value.model === "tabulated" ? "; tested range shaded, held end values dotted" : ""}.
+        </p>
+        {figure ? (
+          <Plot {...figure} height={250} label="Flutter derivatives H1* to A4* against reduced velocity" />
+        ) : (
+          <p className="flex h-[250px] items-center justify-center rounded-md bg-ink-50 text-sm text-ink-600">
+            The plots return when the table reads cleanly.
+          </p>
+        )}
+      </div>
+    </div>
+  );
+}
+
+function SelectField({ label, value, options, onChange }: {
+  label: string; value: string; options: ReadonlyArray<readonly [string, string]>; onChange: (value: string) => void;
+}) {
+  const id = useId();
+  return (
+    <div className="space-y-0.5">
+      <label htmlFor={id} className="block text-xs font-semibold text-ink-700">{label}</label>
+      <select id={id} value={value} onChange={(e) => onChange(e.target.value)}
+        className="h-7 rounded-md border border-ink-300 bg-white px-1.5 text-sm hover:border-ink-400">
+        {options.map(([v, text]) => <option key={v} value={v}>{text}</option>)}
+      </select>
+    </div>
+  );
+}
+
+function QuasiSteadyFields({ value, readOnly, onChange }: {
+  value: Extract<StudyAerodynamics, { model: "quasi-steady" }>; readOnly: boolean; onChange: (v: StudyAerodynamics) => void;
+}) {
+  const fields = [
+    ["liftSlope", "Lift slope dC_L/dα", "1/rad"],
+    ["dragCoefficient", "Drag coefficient C_D (on B)", "–"],
+    ["momentSlope", "Moment slope dC_M/dα", "1/rad"],
+  ] as const;
+  return (
+    <div className="space-y-2">
+      <div className="grid grid-cols-3 gap-2">
+        {fields.map(([key, label, unit]) => (
+          <NumberInput key={key} label={label} unit={unit} value={value[key]} readOnly={readOnly}
+            onChange={(n) => onChange({ ...value, [key]: n })} />
+        ))}
+      </div>
+      <p className="rounded-md border-l-4 border-l-caution-400 bg-caution-100 px-3 py-1.5 text-sm text-caution-700">
+        Quasi-steady derivatives carry no aerodynamic torsional damping (A2* = 0); flutter speeds from them can be far
+        too low. Meant for galloping checks and high reduced velocities.
+      </p>
+    </div>
+  );
+}
+
+function NumberInput({ label, unit, value, readOnly, onChange }: {
+  label: string; unit: string; value: number; readOnly: boolean; onChange: (value: number) => void;
+}) {
+  const id = useId();
+  const [text, setText] = useState(String(Number(value.toPrecision(6))));
+  const parsed = Number(text);
+  const invalid = text.trim() === "" || !Number.isFinite(parsed);
+  return (
+    <div className="space-y-0.5">
+      <label htmlFor={id} className="block text-sm font-semibold text-ink-800">{label}</label>
+      <div className="relative">
+        <input id={id} value={text} readOnly={readOnly} inputMode="decimal" aria-invalid={invalid || undefined}
+          onChange={(e) => { setText(e.target.value); const n = Number(e.target.value); if (e.target.value.trim() !== "" && Number.isFinite(n)) onChange(n); }}
+          className={cn("num h-8 w-full rounded-md border bg-white px-2 pr-10 text-right", invalid ? "border-signal-600" : "border-ink-300")} />
+        <span className="pointer-events-none absolute inset-y-0 right-2 flex items-center text-xs text-ink-600">{unit}</span>
+      </div>
+      {invalid ? <p className="text-xs font-semibold text-signal-700">must be a number</p> : null}
+    </div>
+  );
+}

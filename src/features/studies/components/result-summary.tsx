@@ -1,0 +1,121 @@
+import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
+import type { SweepResult } from "@shared/schemas/result";
+import { computeMargins, type CriticalSpeed, type Margin } from "@shared/criteria/margins";
+import { cn } from "@/lib/cn";
+import { explainWarning, WARNING_TITLES, warningSpeeds } from "@/features/studies/utils/warning-text";
+
+interface ResultSummaryProps {
+  result: SweepResult;
+  /** Last speed of the sweep, m/s: "none found up to". */
+  sweepToMps: number;
+  criteria: ProjectCriteriaDto | null;
+  showKmh: boolean;
+}
+
+const KIND_LABEL = { coupled: "coupled (heave and torsion)", torsional: "torsional", heave: "heave" } as const;
+
+export function Speed({ mps, showKmh, digits = 1 }: { mps: number; showKmh: boolean; digits?: number }) {
+  return (
+    <span className="num">
+      {mps.toFixed(digits)} m/s
+      {showKmh ? <span className="ml-1 text-ink-600">({(mps * 3.6).toFixed(0)} km/h)</span> : null}
+    </span>
+  );
+}
+
+/** Critical speeds from a result as the margin bookkeeping reads them (none found → at least the sweep's end). */
+export function criticalSpeedsOf(result: SweepResult, sweepToMps: number): { flutter: CriticalSpeed; divergence: CriticalSpeed } {
+  return {
+    flutter: result.flutter ? { kind: "speed", speedMps: result.flutter.speed } : { kind: "above", speedMps: sweepToMps },
+    divergence: result.divergence ? { kind: "speed", speedMps: result.divergence.speed } : { kind: "above", speedMps: sweepToMps },
+  };
+}
+
+/**
+ * The result in words and numbers: flutter (speed, frequency, reduced velocity, kind), divergence, Selberg's
+ * estimate, margins against the project's required speeds, and every warning explained with its speeds.
+ */
+export function ResultSummary({ result, sweepToMps, criteria, showKmh }: ResultSummaryProps) {
+  const { flutter, divergence, selberg, warnings } = result;
+  const required = criteria?.evaluated?.required ?? null;
+  const margins = required ? computeMargins(criticalSpeedsOf(result, sweepToMps), required) : null;
+  return (
+    <div className="space-y-3">
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-4">
+        <div className="col-span-2 rounded-md border border-ink-200 bg-white px-3 py-2">
+          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Flutter</dt>
+          <dd data-testid="flutter-speed" className={cn("text-2xl font-semibold", flutter ? "text-signal-700" : "text-steady-700")}>
+            {flutter ? <Speed mps={flutter.speed} showKmh={showKmh} digits={2} /> : <>None up to <Speed mps={sweepToMps} showKmh={showKmh} /></>}
+          </dd>
+          {flutter ? (
+            <dd className="num text-sm text-ink-700">
+              {flutter.frequency.toFixed(4)} Hz · Ur {flutter.reducedVelocity.toFixed(2)} · {KIND_LABEL[flutter.kind]} · branch {flutter.mode}
+            </dd>
+          ) : (
+            <dd className="text-sm text-ink-700">Every branch stays damped over the sweep.</dd>
+          )}
+        </div>
+        <div>
+          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Divergence</dt>
+          <dd className="text-lg font-semibold">
+            {divergence ? <Speed mps={divergence.speed} showKmh={showKmh} /> : <span className="text-base text-ink-700">none in the sweep</span>}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Selberg estimate</dt>
+          <dd className="text-lg font-semibold">
+            {selberg !== null ? <Speed mps={selberg} showKmh={showKmh} /> : <span className="text-base text-ink-700">n/a (f<sub>α</sub> ≤ f<sub>h</sub>)</span>}
+          </dd>
+          <dd className="text-xs text-ink-600">thin plate, no damping</dd>
+        </div>
+      </dl>
+
+      {margins ? (
+        <div className="grid gap-2 sm:grid-cols-2" aria-label="Margins against the required speeds">
+          <MarginLine label="Flutter" margin={margins.flutter} />
+          <MarginLine label="Divergence" margin={margins.divergence} />
+        </div>
+      ) : (
+        <p className="text-sm text-ink-600">No design wind saved for this project yet: margins appear once its criteria are set.</p>
+      )}
+
+      {warnings.length > 0 ? (
+        <ul className="space-y-1.5" aria-label="Warnings">
+          {warnings.map((warning, i) => (
+            <li key={i} className="rounded-md border-l-4 border-l-caution-400 bg-caution-100 px-3 py-1.5 text-sm text-ink-900">
+              <span className="font-semibold text-caution-700">{WARNING_TITLES[warning.code]}</span>
+              {warningSpeeds(warning) ? <span className="num ml-1 text-caution-700">({warningSpeeds(warning)})</span> : null}
+              {": "}
+              {explainWarning(warning.code)}
+            </li>
+          ))}
+        </ul>
+      ) : (
+        <p className="text-sm text-ink-600">No warnings from the engine.</p>
+      )}
+    </div>
+  );
+}
+
+const STATUS = {
+  pass: { text: "Pass", tone: "bg-steady-100 text-steady-700" },
+  fail: { text: "Fail", tone: "bg-signal-600 text-white" },
+  undetermined: { text: "Extend sweep", tone: "bg-caution-100 text-caution-700" },
+  "not-evaluated": { text: "Not evaluated", tone: "bg-ink-100 text-ink-700" },
+} as const;
+
+function MarginLine({ label, margin }: { label: string; margin: Margin }) {
+  const status = STATUS[margin.status];
+  return (
+    <div className="flex items-start gap-2 rounded-md border border-ink-200 bg-white px-3 py-1.5 text-sm">
+      <span className={cn("mt-0.5 shrink-0 rounded-sm px-1.5 text-xs leading-5 font-semibold", status.tone)}>{status.text}</span>
+      <span>
+        <span className="font-semibold">{label}</span>{" "}
+        <span className="num text-ink-700">
+          required {margin.requiredSpeedMps.toFixed(1)} m/s
+          {margin.margin !== null ? ` · margin ${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}` : ""}
+        </span>
+      </span>
+    </div>
+  );
+}
