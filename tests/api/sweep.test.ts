@@ -1,0 +1,83 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { sweepResultSchema } from "../../shared/schemas/result.js";
+import { createProjectWithMembers, openTestDb } from "../support/db.js";
+import { testEnv } from "../support/env.js";
+import { api, signIn } from "../support/http.js";
+
+const base = () => testEnv.baseUrl;
+const db = openTestDb();
+let cookies: Record<"admin" | "analyst" | "reviewer" | "viewer", string>;
+
+/** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (domain guide §5), flat plate, coarse sweep. */
+const benchmarkDeck = () => ({
+  format: "stillspan.study/1",
+  name: "Benchmark deck, domain guide §5",
+  air: { density: 1.22 },
+  deck: { width: 31, depth: 3 },
+  structure: {
+    mass: 22740,
+    inertia: 2.47e6,
+    modes: [
+      { id: "V1", dof: "heave", frequency: 0.1, damping: 0.003 },
+      { id: "T1", dof: "torsion", frequency: 0.278, damping: 0.003 },
+    ],
+  },
+  aerodynamics: { model: "flat-plate" },
+  sweep: { from: 10, to: 100, step: 1 },
+});
+
+beforeAll(async () => {
+  await createProjectWithMembers(db, `Sweep test crossing ${Date.now().toString(36)}`, {
+    "analyst@stillspan.test": "analyst",
+    "reviewer@stillspan.test": "reviewer",
+    "viewer@stillspan.test": "viewer",
+  });
+  const [admin, analyst, reviewer, viewer] = await Promise.all(
+    ["admin", "analyst", "reviewer", "viewer"].map((r) => signIn(base(), `${r}@stillspan.test`)),
+  );
+  cookies = { admin, analyst, reviewer, viewer };
+});
+afterAll(() => db.$client.end());
+
+describe("POST /api/sweep", () => {
+  it.each(["analyst", "reviewer", "admin"] as const)(
+    "runs the benchmark deck for an %s: 77.24 m/s flutter (domain guide §5, computed) in the result format",
+    async (role) => {
+      const res = await api(base(), "/api/sweep", { cookie: cookies[role], body: benchmarkDeck() });
+      expect(res.status).toBe(200);
+      const result = sweepResultSchema.parse(res.body);
+      expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3);
+      expect(result.modes.map((m) => m.id)).toEqual(["V1", "T1"]);
+      expect(result.modes[0].steps).toHaveLength(91);
+      expect(result.engine).toBe("1.0.0");
+    },
+  );
+
+  it("refuses a viewer with 403 and an anonymous caller with 401", async () => {
+    expect((await api(base(), "/api/sweep", { cookie: cookies.viewer, body: benchmarkDeck() })).status).toBe(403);
+    expect((await api(base(), "/api/sweep", { body: benchmarkDeck() })).status).toBe(401);
+  });
+
+  it("answers 400 naming each bad field's JSON path and rule", async () => {
+    const study = benchmarkDeck() as Record<string, any>;
+    study.structure.modes[1].frequency = -0.2;
+    study.sweep.step = 0;
+    delete study.deck.width;
+    const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: study });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("invalid_study");
+    expect(res.body.error.details).toEqual(
+      expect.arrayContaining([
+        { path: "$.structure.modes[1].frequency", message: "must be greater than 0" },
+        { path: "$.sweep.step", message: "must be greater than 0" },
+        { path: "$.deck.width", message: "is required" },
+      ]),
+    );
+  });
+
+  it("refuses a body over 1 MB with 413", async () => {
+    const study = { ...benchmarkDeck(), name: "x".repeat(1_100_000) };
+    const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: study });
+    expect(res.status).toBe(413);
+  });
+});
