@@ -3,7 +3,7 @@
  * signed before a rotation still verify.
  *
  * Two sources:
- * - a key folder (default <dataDir>/keys, mode 0700): `keyring.json` lists every key's public JWK and which one is
+ * - a key folder (default <dataDir>/keys or STILLSPAN_KEYS_DIR, mode 0700): `keyring.json` lists every key's public JWK and which one is
  *   current; the current private key sits beside it as `<kid>.pkcs8.pem` (mode 0600). Generated on first use;
  *   `rotate()` adds a new key and deletes the retired private key (only its public half is ever needed again).
  * - the environment (production): STILLSPAN_SIGNING_KEY holds the private key as PKCS8 PEM or as a private JWK;
@@ -246,6 +246,10 @@ async function parseRetiredJwks(text: string): Promise<PublicSigningJwk[]> {
 }
 
 /** Store options from the parsed configuration (`Config["signing"]`). */
-export function keyStoreOptions(signing: { keysDir: string; privateKey?: string; retiredJwks?: string }): KeyStoreOptions {
+export function keyStoreOptions(signing: {
+  keysDir: string;
+  privateKey?: string;
+  retiredJwks?: string;
+}): KeyStoreOptions {
   return { dir: signing.keysDir, envKey: signing.privateKey, envRetiredJwks: signing.retiredJwks };
 }

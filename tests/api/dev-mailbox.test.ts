@@ -24,7 +24,8 @@ async function sendToFake(to: string, subject: string): Promise<void> {
 }
 
 beforeAll(async () => {
-  [admin, analyst] = await Promise.all([signIn(base(), "admin@stillspan.test"), signIn(base(), "analyst@stillspan.test")]);
+  admin = await signIn(base(), "admin@stillspan.test");
+  analyst = await signIn(base(), "analyst@stillspan.test");
 });
 
 describe("GET /api/dev/mailbox", () => {

@@ -6,7 +6,7 @@ import { devMailMessages, type DevMailMessage } from "../schema/index.js";
 export async function insertDevMail(db: DbOrTx, mail: ReceivedMail): Promise<void> {
   await db.insert(devMailMessages).values({
     fromAddress: mail.from,
-    toAddresses: mail.to,
+    toAddresses: mail.to.map((address) => address.toLowerCase()),
     subject: mail.subject,
     text: mail.text,
     html: mail.html,
