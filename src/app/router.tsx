@@ -54,6 +54,30 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
+          path: paths.app.study.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { StudyRoute, clientLoader } = await import("@/app/routes/app/study");
+            return { Component: StudyRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.studyRevisions.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { StudyRevisionsRoute, clientLoader } = await import("@/app/routes/app/study-revisions");
+            return { Component: StudyRevisionsRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.compare.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { CompareRoute, clientLoader } = await import("@/app/routes/app/compare");
+            return { Component: CompareRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
           path: paths.app.signedSummaries.path,
           ErrorBoundary: RouteErrorBoundary,
           lazy: async () => {

@@ -3,19 +3,32 @@ import { useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { canUseWorkspace } from "@/lib/authorization";
 import { useMe } from "@/features/auth/api/get-me";
 import { getProjectQueryOptions } from "@/features/projects/api/get-project";
+import { ProjectMembers } from "@/features/projects/components/project-members";
 import { ProjectOverview } from "@/features/projects/components/project-overview";
+import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison";
+import { ProjectStudies } from "@/features/studies/components/project-studies";
 import { requireAccess } from "@/app/routes/guards";
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request, params }: LoaderFunctionArgs) => {
     await requireAccess(queryClient, request, canUseWorkspace);
-    if (params.projectId) void queryClient.prefetchQuery(getProjectQueryOptions(params.projectId));
+    if (params.projectId) {
+      void queryClient.prefetchQuery(getProjectQueryOptions(params.projectId));
+      void queryClient.prefetchQuery(getComparisonQueryOptions(params.projectId));
+    }
     return null;
   };
 
 export function ProjectRoute() {
   const { projectId = "" } = useParams();
   const me = useMe();
-  return <ProjectOverview key={projectId} projectId={projectId} isAdmin={me.data?.isAdmin ?? false} />;
+  const isAdmin = me.data?.isAdmin ?? false;
+  return (
+    <div key={projectId}>
+      <ProjectOverview projectId={projectId} isAdmin={isAdmin} />
+      <ProjectStudies projectId={projectId} />
+      {isAdmin ? <ProjectMembers projectId={projectId} /> : null}
+    </div>
+  );
 }

@@ -1,0 +1,177 @@
+import { useMemo } from "react";
+import { Link, useSearchParams } from "react-router-dom";
+import type { ComparisonDto } from "@shared/schemas/comparison";
+import type { RevisionDto } from "@shared/schemas/revisions";
+import { computeMargins } from "@shared/criteria/margins";
+import { Card } from "@/components/ui/card";
+import { PageHeader } from "@/components/ui/page-header";
+import { LoadingBlock } from "@/components/ui/spinner";
+import { paths } from "@/config/paths";
+import { cn } from "@/lib/cn";
+import { useComparison } from "@/features/studies/api/get-comparison";
+import { useCriteria } from "@/features/studies/api/get-criteria";
+import { useRevisionList } from "@/features/studies/api/get-revision";
+import { ResultPlots } from "@/features/studies/components/result-plots";
+import { criticalSpeedsOf } from "@/features/studies/components/result-summary";
+import { queryErrorPanel } from "@/features/studies/components/study-workspace";
+import { seriesColour } from "@/components/ui/plot-theme";
+import { WARNING_TITLES } from "@/features/studies/utils/warning-text";
+
+const MAX = 4;
+
+/** Short name of a revision in legends and column heads: "Twin box · Baseline r3". */
+function labelOf(revision: RevisionDto, comparison: ComparisonDto | undefined): string {
+  const row = comparison?.rows.find((r) => r.studyId === revision.studyId);
+  return `${row ? `${row.alternativeName} · ` : ""}${revision.studyName} r${revision.number}`;
+}
+
+/**
+ * Two to four revisions — of one study or of different deck alternatives — side by side: damping and pole
+ * paths overlaid (colour per revision, dash per branch) and a table of critical speeds and margins.
+ */
+export function CompareView({ projectId }: { projectId: string }) {
+  const [search, setSearch] = useSearchParams();
+  const selected = (search.get("revisions") ?? "").split(",").filter(Boolean).slice(0, MAX);
+  const comparison = useComparison(projectId);
+  const criteria = useCriteria(projectId);
+  const revisions = useRevisionList(selected);
+  const loaded = revisions.every((q) => q.isSuccess);
+  const runs = useMemo(
+    () => (loaded ? revisions.map((q) => ({ name: labelOf(q.data!, comparison.data), result: q.data!.result })) : []),
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [loaded, selected.join(","), comparison.data],
+  );
+
+  const toggle = (revisionId: string) => {
+    const next = selected.includes(revisionId) ? selected.filter((id) => id !== revisionId) : [...selected, revisionId].slice(-MAX);
+    setSearch(next.length ? { revisions: next.join(",") } : {}, { replace: true });
+  };
+
+  const pickLatest = () => {
+    const ids = (comparison.data?.rows ?? []).flatMap((r) => (r.latest ? [r.latest.revisionId] : [])).slice(0, MAX);
+    setSearch(ids.length ? { revisions: ids.join(",") } : {}, { replace: true });
+  };
+
+  return (
+    <>
+      <PageHeader
+        eyebrow={<Link to={paths.app.project.getHref(projectId)} className="text-tide-700 hover:underline">← Project</Link>}
+        title="Compare"
+        description="Pick two to four revisions — of one study or across deck alternatives — to overlay their results."
+      />
+      <div className="grid items-start gap-4 lg:grid-cols-[18rem_minmax(0,1fr)]">
+        <Card title="Revisions" subtitle={`${selected.length} of ${MAX} picked`} actions={
+          <button type="button" onClick={pickLatest} className="text-sm font-semibold text-tide-700 hover:underline">Latest of each</button>
+        } flush>
+          {comparison.isPending ? (
+            <LoadingBlock label="Loading the studies…" />
+          ) : comparison.isError ? (
+            <div className="p-3">{queryErrorPanel("The studies could not be loaded", comparison.error, () => void comparison.refetch(), comparison.isFetching)}</div>
+          ) : (
+            <div className="max-h-[32rem] divide-y divide-ink-100 overflow-y-auto">
+              {comparison.data.trends.map((trend) => (
+                <fieldset key={trend.studyId} className="px-4 py-2">
+                  <legend className="text-sm font-semibold text-ink-900">{trend.alternativeName} · {trend.studyName}</legend>
+                  <ul className="mt-1 space-y-0.5">
+                    {[...trend.points].sort((a, b) => b.number - a.number).map((point) => {
+                      const index = selected.indexOf(point.revisionId);
+                      return (
+                        <li key={point.revisionId}>
+                          <label className="flex items-baseline gap-2 text-sm">
+                            <input type="checkbox" checked={index >= 0} onChange={() => toggle(point.revisionId)}
+                              aria-label={`${trend.alternativeName} ${trend.studyName} revision ${point.number}`} className="accent-tide-600" />
+                            <span className="num font-semibold" style={index >= 0 ? { color: seriesColour(index) } : undefined}>r{point.number}</span>
+                            <span className="num text-ink-700">{point.flutterSpeedMps !== null ? `${point.flutterSpeedMps.toFixed(1)} m/s` : "no flutter"}</span>
+                            <span className="truncate text-xs text-ink-600" title={point.changeNote}>{point.changeNote}</span>
+                          </label>
+                        </li>
+                      );
+                    })}
+                  </ul>
+                </fieldset>
+              ))}
+            </div>
+          )}
+        </Card>
+
+        <div className="space-y-4">
+          {selected.length < 2 ? (
+            <Card title="Nothing to compare yet">
+              <p className="text-ink-700">Pick at least two revisions on the left, or take the latest revision of each study.</p>
+            </Card>
+          ) : revisions.some((q) => q.isError) ? (
+            queryErrorPanel("A revision could not be loaded", revisions.find((q) => q.isError)!.error!, () => revisions.forEach((q) => void q.refetch()), false)
+          ) : !loaded ? (
+            <LoadingBlock label="Loading the revisions…" className="min-h-96" />
+          ) : (
+            <>
+              <ComparisonTable revisions={revisions.map((q) => q.data!)} comparison={comparison.data} required={criteria.data?.evaluated?.required ?? null} />
+              <ResultPlots runs={runs} />
+            </>
+          )}
+        </div>
+      </div>
+    </>
+  );
+}
+
+function ComparisonTable({ revisions, comparison, required }: {
+  revisions: RevisionDto[];
+  comparison: ComparisonDto | undefined;
+  required: Parameters<typeof computeMargins>[1] | null;
+}) {
+  const columns = revisions.map((revision) => {
+    const margins = required ? computeMargins(criticalSpeedsOf(revision.result, revision.study.sweep.to), required) : null;
+    return { revision, margins };
+  });
+  const rows: Array<{ label: string; cell: (c: (typeof columns)[number]) => React.ReactNode }> = [
+    { label: "Flutter speed", cell: ({ revision: r }) => r.result.flutter ? <b className="text-signal-700">{r.result.flutter.speed.toFixed(2)} m/s</b> : `none up to ${r.study.sweep.to} m/s` },
+    { label: "Flutter frequency", cell: ({ revision: r }) => r.result.flutter ? `${r.result.flutter.frequency.toFixed(4)} Hz` : "—" },
+    { label: "Reduced velocity", cell: ({ revision: r }) => r.result.flutter ? r.result.flutter.reducedVelocity.toFixed(2) : "—" },
+    { label: "Kind", cell: ({ revision: r }) => r.result.flutter?.kind ?? "—" },
+    { label: "Divergence", cell: ({ revision: r }) => r.result.divergence ? `${r.result.divergence.speed.toFixed(1)} m/s` : "none in sweep" },
+    { label: "Selberg estimate", cell: ({ revision: r }) => r.result.selberg !== null ? `${r.result.selberg.toFixed(1)} m/s` : "n/a" },
+    { label: "Flutter margin", cell: ({ margins }) => <MarginCell margin={margins?.flutter ?? null} /> },
+    { label: "Divergence margin", cell: ({ margins }) => <MarginCell margin={margins?.divergence ?? null} /> },
+    { label: "f_h / f_α", cell: ({ revision: r }) => r.study.structure.modes.map((m) => `${m.frequency}`).join(" / ") + " Hz" },
+    { label: "Aerodynamics", cell: ({ revision: r }) => r.study.aerodynamics.model },
+    { label: "Warnings", cell: ({ revision: r }) => r.result.warnings.length ? [...new Set(r.result.warnings.map((w) => WARNING_TITLES[w.code]))].join("; ") : "none" },
+  ];
+  return (
+    <Card title="Critical speeds and margins" flush>
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm" aria-label="Critical speeds and margins side by side">
+          <thead>
+            <tr className="border-b border-ink-200 bg-ink-50">
+              <th scope="col" className="px-4 py-1.5 text-xs font-semibold tracking-wide text-ink-600 uppercase">Quantity</th>
+              {columns.map(({ revision }, i) => (
+                <th key={revision.id} scope="col" className="px-2 py-1.5 font-semibold" style={{ color: seriesColour(i) }}>
+                  {labelOf(revision, comparison)}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((row) => (
+              <tr key={row.label} className="border-b border-ink-100 last:border-b-0">
+                <th scope="row" className="px-4 py-1 font-normal text-ink-700">{row.label}</th>
+                {columns.map((c) => <td key={c.revision.id} className="num px-2 py-1">{row.cell(c)}</td>)}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </Card>
+  );
+}
+
+function MarginCell({ margin }: { margin: ReturnType<typeof computeMargins>["flutter"] | null }) {
+  if (!margin) return <span className="text-ink-600">no criteria</span>;
+  const tone = margin.status === "pass" ? "text-steady-700" : margin.status === "fail" ? "text-signal-700" : "text-caution-700";
+  return (
+    <span className={cn("font-semibold", tone)}>
+      {margin.status === "pass" ? "pass" : margin.status === "fail" ? "fail" : margin.status === "undetermined" ? "extend sweep" : "—"}
+      {margin.margin !== null ? ` ${margin.marginIsLowerBound ? "≥" : ""}${margin.margin.toFixed(2)}` : ""}
+    </span>
+  );
+}

@@ -1,0 +1,169 @@
+import { Link } from "react-router-dom";
+import type { AlternativeDto } from "@shared/schemas/alternatives";
+import type { ComparisonDto, ComparisonRow } from "@shared/schemas/comparison";
+import { Card } from "@/components/ui/card";
+import { LoadingBlock } from "@/components/ui/spinner";
+import { paths } from "@/config/paths";
+import { ApiError } from "@/lib/api-client";
+import { cn } from "@/lib/cn";
+import { formatDate } from "@/lib/format";
+import { useAlternatives } from "@/features/studies/api/get-alternatives";
+import { useComparison } from "@/features/studies/api/get-comparison";
+import { useDatasets } from "@/features/studies/api/get-datasets";
+import { queryErrorPanel } from "@/features/studies/components/study-workspace";
+
+/**
+ * The project's deck alternatives, each with its studies (latest critical speeds and margins against the
+ * required speeds) and its aerodynamic data sets; the required speeds once the project has criteria.
+ */
+export function ProjectStudies({ projectId }: { projectId: string }) {
+  const alternatives = useAlternatives(projectId);
+  const comparison = useComparison(projectId);
+
+  return (
+    <div className="mt-4 grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_19rem]">
+      <section aria-labelledby="alternatives-heading" className="space-y-4">
+        <div className="flex items-baseline justify-between gap-3">
+          <h2 id="alternatives-heading" className="text-lg font-semibold">Deck alternatives</h2>
+          <Link to={paths.app.compare.getHref(projectId)} className="text-sm font-semibold text-tide-700 hover:underline">Compare revisions →</Link>
+        </div>
+        {alternatives.isPending ? (
+          <Card><LoadingBlock label="Loading the alternatives…" /></Card>
+        ) : alternatives.isError ? (
+          queryErrorPanel("The alternatives could not be loaded", alternatives.error, () => void alternatives.refetch(), alternatives.isFetching)
+        ) : alternatives.data.length === 0 ? (
+          <Card><p className="text-ink-700">No deck alternative yet.</p></Card>
+        ) : (
+          alternatives.data.map((alternative) => (
+            <AlternativeCard key={alternative.id} projectId={projectId} alternative={alternative}
+              rows={comparison.data?.rows.filter((r) => r.alternativeId === alternative.id) ?? null}
+              comparisonError={comparison.isError ? comparison.error : null} />
+          ))
+        )}
+      </section>
+      <RequiredSpeeds comparison={comparison.data} isPending={comparison.isPending} />
+    </div>
+  );
+}
+
+function RequiredSpeeds({ comparison, isPending }: { comparison: ComparisonDto | undefined; isPending: boolean }) {
+  const criteria = comparison?.criteria ?? null;
+  return (
+    <Card title="Required speeds" subtitle="From the project's design wind at deck level">
+      {isPending ? (
+        <LoadingBlock label="Loading…" />
+      ) : criteria ? (
+        <dl className="grid grid-cols-[1fr_auto] gap-x-3 gap-y-1 text-[0.95rem]">
+          <dt className="text-ink-700">Design mean wind v<sub>m</sub></dt>
+          <dd className="num text-right font-semibold">{criteria.meanSpeedMps.toFixed(1)} m/s</dd>
+          <dt className="text-ink-700">Flutter</dt>
+          <dd className="num text-right font-semibold" data-testid="required-flutter">{criteria.requiredFlutterSpeedMps.toFixed(1)} m/s</dd>
+          <dt className="text-ink-700">Divergence</dt>
+          <dd className="num text-right font-semibold">{criteria.requiredDivergenceSpeedMps.toFixed(1)} m/s</dd>
+          <dt className="col-span-2 text-xs text-ink-600">Criteria version {criteria.version}</dt>
+        </dl>
+      ) : (
+        <p className="text-sm text-ink-700">No design wind saved yet; margins appear once the project's criteria are set.</p>
+      )}
+    </Card>
+  );
+}
+
+const STATUS_TONE = { pass: "text-steady-700", fail: "text-signal-700", undetermined: "text-caution-700", "not-evaluated": "text-ink-600" } as const;
+
+function MarginText({ margin }: { margin: NonNullable<ComparisonRow["margins"]>["flutter"] | undefined }) {
+  if (!margin) return <span className="text-ink-600">—</span>;
+  const word = margin.status === "undetermined" ? "extend" : margin.status === "not-evaluated" ? "—" : margin.status;
+  return (
+    <span className={cn("font-semibold", STATUS_TONE[margin.status])}>
+      {word}
+      {margin.margin !== null ? <span className="font-normal"> {margin.marginIsLowerBound ? "≥" : ""}{margin.margin.toFixed(2)}</span> : null}
+    </span>
+  );
+}
+
+function AlternativeCard({ projectId, alternative, rows, comparisonError }: {
+  projectId: string; alternative: AlternativeDto; rows: ComparisonRow[] | null; comparisonError: Error | null;
+}) {
+  const datasets = useDatasets(alternative.id);
+  return (
+    <Card
+      title={alternative.name}
+      subtitle={<span className="num">B = {alternative.deckWidthM} m · D = {alternative.deckDepthM} m · {alternative.studyCount} {alternative.studyCount === 1 ? "study" : "studies"} · {alternative.datasetCount} data {alternative.datasetCount === 1 ? "set" : "sets"}</span>}
+      flush
+    >
+      {alternative.description ? <p className="px-4 pt-2 text-sm text-ink-700">{alternative.description}</p> : null}
+      {comparisonError ? (
+        <p className="px-4 py-2 text-sm text-signal-700">Studies could not be loaded: {comparisonError.message}</p>
+      ) : rows === null ? (
+        <LoadingBlock label="Loading the studies…" />
+      ) : rows.length === 0 ? (
+        <p className="px-4 py-2 text-sm text-ink-700">No study yet.</p>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full text-left text-sm" aria-label={`Studies of ${alternative.name}`}>
+            <thead>
+              <tr className="border-y border-ink-200 bg-ink-50 text-xs tracking-wide text-ink-600 uppercase">
+                <th scope="col" className="px-4 py-1.5 font-semibold">Study</th>
+                <th scope="col" className="px-2 py-1.5 font-semibold">Latest</th>
+                <th scope="col" className="px-2 py-1.5 text-right font-semibold">Flutter</th>
+                <th scope="col" className="px-2 py-1.5 text-right font-semibold">Divergence</th>
+                <th scope="col" className="px-2 py-1.5 font-semibold">Flutter margin</th>
+                <th scope="col" className="px-2 py-1.5 font-semibold">Div. margin</th>
+              </tr>
+            </thead>
+            <tbody>
+              {rows.map((row) => {
+                const critical = row.latest?.critical;
+                return (
+                  <tr key={row.studyId} className="border-b border-ink-100 last:border-b-0 hover:bg-tide-50/60">
+                    <th scope="row" className="px-4 py-1.5 font-semibold">
+                      <Link to={paths.app.study.getHref(projectId, row.studyId)} className="text-tide-700 hover:underline">{row.studyName}</Link>
+                    </th>
+                    <td className="num px-2 py-1.5 whitespace-nowrap text-ink-700">
+                      {row.latest ? <>r{row.latest.number} · {formatDate(row.latest.createdAt)}</> : "no revision"}
+                    </td>
+                    <td className="num px-2 py-1.5 text-right whitespace-nowrap">
+                      {critical ? (critical.flutter ? <span className="font-semibold">{critical.flutter.speedMps.toFixed(1)} m/s</span> : <span className="text-ink-700">&gt; {critical.sweepToMps.toFixed(0)} m/s</span>) : "—"}
+                    </td>
+                    <td className="num px-2 py-1.5 text-right whitespace-nowrap">
+                      {critical ? (critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : <span className="text-ink-700">&gt; {critical.sweepToMps.toFixed(0)} m/s</span>) : "—"}
+                    </td>
+                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.flutter} /></td>
+                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.divergence} /></td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <div className="border-t border-ink-100 px-4 py-2">
+        <h3 className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Aerodynamic data sets</h3>
+        {datasets.isPending ? (
+          <p className="text-sm text-ink-600">Loading…</p>
+        ) : datasets.isError ? (
+          <p className="text-sm text-signal-700">
+            Could not be loaded: {datasets.error.message}
+            {datasets.error instanceof ApiError ? ` (${datasets.error.code})` : ""}
+          </p>
+        ) : datasets.data.length === 0 ? (
+          <p className="text-sm text-ink-700">None uploaded.</p>
+        ) : (
+          <ul className="text-sm">
+            {datasets.data.map((d) => (
+              <li key={d.id} className="num flex flex-wrap gap-x-2">
+                <span className="font-semibold text-ink-900">{d.name}</span>
+                <span className="text-ink-700">
+                  {d.kind === "flutter-derivatives" ? `flutter derivatives, Ur ${d.testedRange.min}–${d.testedRange.max}` : `static coefficients, ${d.testedRange.min}° to ${d.testedRange.max}°`}
+                  {" · "}{d.provenance.flow} flow{d.provenance.facility ? ` · ${d.provenance.facility}` : ""}
+                </span>
+                {d.warnings.length > 0 ? <span className="text-caution-700">{d.warnings.length} warning{d.warnings.length > 1 ? "s" : ""}</span> : null}
+              </li>
+            ))}
+          </ul>
+        )}
+      </div>
+    </Card>
+  );
+}
