@@ -50,6 +50,7 @@ export async function startFakeSmtp(options: FakeSmtpOptions): Promise<FakeSmtp>
     banner: "Stillspan local fake SMTP server: messages are stored, never delivered",
     disabledCommands: ["STARTTLS"],
     authOptional: true,
+    allowInsecureAuth: true, // loopback only, no TLS on the fake
     // Any user name and password is accepted, so a mailer configured with credentials works against the fake.
     onAuth: (auth, _session, callback) => callback(null, { user: auth.username ?? "fake" }),
     size: maxSizeBytes,

@@ -143,6 +143,23 @@ describe("fake SMTP server with the real mailer", () => {
     expect(m.html!.split(token)).toHaveLength(4);
   });
 
+  it("accepts a mailer that signs in with a user name and password", async () => {
+    const withAuth = createMailer({
+      host: fake.host,
+      port: fake.port,
+      from: "no-reply@stillspan.test",
+      ignoreTLS: true,
+      user: "stillspan",
+      password: "any",
+    });
+    try {
+      await withAuth.send({ to: "analyst@stillspan.test", ...passwordResetMail({ link: "http://x/r/1", expiresAt }) });
+    } finally {
+      withAuth.close();
+    }
+    expect(inbox.map((m) => m.to)).toEqual([["analyst@stillspan.test"]]);
+  });
+
   it("makes the sender fail when the fake cannot store the message (no silent loss)", async () => {
     failStore = true;
     await expect(
