@@ -1,16 +1,38 @@
 import { Router } from "express";
-import { projectPatchSchema } from "../../shared/schemas/projects.js";
+import { memberRoleInputSchema, projectCreateSchema, projectPatchSchema } from "../../shared/schemas/projects.js";
 import type { AppContext } from "../app-context.js";
-import { ANY_ROLE, currentUser, fromParam, parseProjectId, requireAuth, requireRole } from "../middleware/auth.js";
-import { getProject, getProjectMembers, listProjects, updateProject } from "../services/projects.js";
+import {
+  ANY_ROLE,
+  currentUser,
+  fromParam,
+  parseProjectId,
+  requireAdmin,
+  requireAuth,
+  requireRole,
+} from "../middleware/auth.js";
+import { removeMember, setMember } from "../services/memberships.js";
+import {
+  createProject,
+  deleteProject,
+  getProject,
+  getProjectMembers,
+  listProjects,
+  updateProject,
+} from "../services/projects.js";
+import { parseUserId } from "./users.js";
 
-/** /api/projects: list, read, edit (analysts), members. */
+/** /api/projects: list, read, edit (analysts), members; create, delete and membership (administrators). */
 export function projectRoutes({ db }: AppContext): Router {
   const router = Router();
   router.use(requireAuth);
 
   router.get("/", async (req, res) => {
     res.json(await listProjects(db, currentUser(req)));
+  });
+
+  router.post("/", requireAdmin, async (req, res) => {
+    const input = projectCreateSchema.parse(req.body ?? {});
+    res.status(201).json(await createProject(db, currentUser(req), input, req.ip));
   });
 
   router.get("/:projectId", requireRole(fromParam(), ANY_ROLE), async (req, res) => {
@@ -22,8 +44,27 @@ export function projectRoutes({ db }: AppContext): Router {
     res.json(await updateProject(db, currentUser(req), parseProjectId(fromParam()(req)), patch, req.ip));
   });
 
+  router.delete("/:projectId", requireAdmin, async (req, res) => {
+    await deleteProject(db, currentUser(req), parseProjectId(fromParam()(req)), req.ip);
+    res.status(204).end();
+  });
+
   router.get("/:projectId/members", requireRole(fromParam(), ANY_ROLE), async (req, res) => {
     res.json(await getProjectMembers(db, currentUser(req), parseProjectId(fromParam()(req))));
+  });
+
+  router.put("/:projectId/members/:userId", requireAdmin, async (req, res) => {
+    const projectId = parseProjectId(fromParam()(req));
+    const userId = parseUserId(req);
+    const input = memberRoleInputSchema.parse(req.body ?? {});
+    const { member, created } = await setMember(db, currentUser(req), { projectId, userId, input, ip: req.ip });
+    res.status(created ? 201 : 200).json(member);
+  });
+
+  router.delete("/:projectId/members/:userId", requireAdmin, async (req, res) => {
+    const projectId = parseProjectId(fromParam()(req));
+    await removeMember(db, currentUser(req), { projectId, userId: parseUserId(req), ip: req.ip });
+    res.status(204).end();
   });
 
   return router;

@@ -1,11 +1,15 @@
-import type { ProjectDto, ProjectMember, ProjectPatch } from "../../shared/schemas/projects.js";
+import type { ProjectCreateInput, ProjectDto, ProjectMember, ProjectPatch } from "../../shared/schemas/projects.js";
 import type { Db } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
+  countProjectContent,
+  deleteProjectRow,
   findProjectById,
+  insertProject,
   listAllProjects,
   listProjectMembers,
   listProjectsOfMember,
+  lockProject,
   updateProjectTexts,
   type ProjectWithRole,
 } from "../db/queries/projects.js";
@@ -68,4 +72,67 @@ export async function getProjectMembers(db: Db, user: SessionUser, projectId: nu
   await assertRole(db, user, projectId, ANY_ROLE);
   const rows = await listProjectMembers(db, projectId);
   return rows.map((m) => ({ ...m, userId: String(m.userId) }));
+}
+
+/** Administrators only; the services repeat the route guard so no other caller can skip it. */
+export function assertAdmin(user: SessionUser): void {
+  if (!user.isAdmin) throw AppError.forbidden("Only an administrator can do this.");
+}
+
+/** An administrator creates a project (with no members yet); audited as `project.create`. */
+export async function createProject(
+  db: Db,
+  user: SessionUser,
+  input: ProjectCreateInput,
+  ip?: string,
+): Promise<ProjectDto> {
+  assertAdmin(user);
+  return db.transaction(async (tx) => {
+    const project = await insertProject(tx, {
+      name: input.name,
+      description: input.description ?? "",
+      siteNotes: input.siteNotes ?? "",
+      createdBy: user.id,
+    });
+    await writeAudit(tx, {
+      actorId: user.id,
+      action: "project.create",
+      objectType: "project",
+      objectId: project.id,
+      ip,
+      details: { name: project.name },
+    });
+    return toProjectDto({ ...project, role: null });
+  });
+}
+
+/**
+ * An administrator deletes a project that holds no work yet. A project with deck alternatives (and so perhaps
+ * studies, whose revisions are kept for good) is refused with 409 and the counts. Memberships, criteria and
+ * pending invitations go with the project. Audited as `project.delete`.
+ */
+export async function deleteProject(db: Db, user: SessionUser, projectId: number, ip?: string): Promise<void> {
+  assertAdmin(user);
+  await db.transaction(async (tx) => {
+    // The lock keeps an alternative from being added between the count and the delete.
+    const project = await lockProject(tx, projectId);
+    if (!project) throw AppError.notFound("Project");
+    const content = await countProjectContent(tx, projectId);
+    if (content.alternatives > 0) {
+      throw AppError.conflict(
+        `"${project.name}" holds ${content.alternatives} deck alternative(s), ${content.studies} stud${content.studies === 1 ? "y" : "ies"} and ${content.datasets} data set(s); ` +
+          "a project with work in it cannot be deleted (study revisions are kept for good).",
+        content,
+      );
+    }
+    await deleteProjectRow(tx, projectId);
+    await writeAudit(tx, {
+      actorId: user.id,
+      action: "project.delete",
+      objectType: "project",
+      objectId: projectId,
+      ip,
+      details: { name: project.name },
+    });
+  });
 }

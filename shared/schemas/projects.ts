@@ -34,3 +34,25 @@ export const projectMemberSchema = z.object({
   role: projectRoleSchema,
 });
 export type ProjectMember = z.infer<typeof projectMemberSchema>;
+
+const projectNameSchema = z.string().trim().min(1, "must not be blank").max(200, "must have at most 200 characters");
+
+/** POST /api/projects — administrators create a project; description and site notes may be left out (empty). */
+export const projectCreateSchema = z.strictObject({
+  name: projectNameSchema,
+  description: z.string().trim().max(5000, "must have at most 5000 characters").optional(),
+  siteNotes: z.string().trim().max(20000, "must have at most 20000 characters").optional(),
+});
+export type ProjectCreateInput = z.infer<typeof projectCreateSchema>;
+
+/** PUT /api/projects/:id/members/:userId — administrators add a member or change their role. */
+export const memberRoleInputSchema = z.strictObject({ role: projectRoleSchema });
+export type MemberRoleInput = z.infer<typeof memberRoleInputSchema>;
+
+/** Body of a 409 on DELETE /api/projects/:id: what keeps the project (revisions are kept for good). */
+export const projectContentCountsSchema = z.object({
+  alternatives: z.number().int(),
+  studies: z.number().int(),
+  datasets: z.number().int(),
+});
+export type ProjectContentCounts = z.infer<typeof projectContentCountsSchema>;

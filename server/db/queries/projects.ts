@@ -1,6 +1,16 @@
-import { and, asc, eq, isNotNull } from "drizzle-orm";
+import { and, asc, countDistinct, eq, isNotNull } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
-import { memberships, projects, users, type Project, type ProjectRole } from "../schema/index.js";
+import {
+  aeroDatasets,
+  alternatives,
+  memberships,
+  projects,
+  studies,
+  users,
+  type NewProject,
+  type Project,
+  type ProjectRole,
+} from "../schema/index.js";
 
 export type ProjectWithRole = Project & { role: ProjectRole | null };
 
@@ -72,4 +82,39 @@ export async function listProjectMembers(db: DbOrTx, projectId: number) {
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.projectId, projectId))
     .orderBy(asc(memberships.role), asc(users.name));
+}
+
+export async function insertProject(db: DbOrTx, project: NewProject): Promise<Project> {
+  const [row] = await db.insert(projects).values(project).returning();
+  return row;
+}
+
+/** Locks the project row until the transaction ends (so no alternative can be added while it is deleted). */
+export async function lockProject(db: DbOrTx, projectId: number): Promise<Project | undefined> {
+  const [row] = await db.select().from(projects).where(eq(projects.id, projectId)).for("update").limit(1);
+  return row;
+}
+
+/** How many alternatives, studies and data sets hang on the project. */
+export async function countProjectContent(
+  db: DbOrTx,
+  projectId: number,
+): Promise<{ alternatives: number; studies: number; datasets: number }> {
+  const [row] = await db
+    .select({
+      alternatives: countDistinct(alternatives.id),
+      studies: countDistinct(studies.id),
+      datasets: countDistinct(aeroDatasets.id),
+    })
+    .from(alternatives)
+    .leftJoin(studies, eq(studies.alternativeId, alternatives.id))
+    .leftJoin(aeroDatasets, eq(aeroDatasets.alternativeId, alternatives.id))
+    .where(eq(alternatives.projectId, projectId));
+  return row ?? { alternatives: 0, studies: 0, datasets: 0 };
+}
+
+/** Deletes the project row; memberships, criteria and invitations go with it (cascade). */
+export async function deleteProjectRow(db: DbOrTx, projectId: number): Promise<boolean> {
+  const rows = await db.delete(projects).where(eq(projects.id, projectId)).returning({ id: projects.id });
+  return rows.length > 0;
 }

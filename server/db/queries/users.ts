@@ -1,6 +1,6 @@
 import { asc, eq, sql } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
-import { memberships, users, type NewUser, type ProjectRole, type User } from "../schema/index.js";
+import { memberships, projects, users, type NewUser, type ProjectRole, type User } from "../schema/index.js";
 
 /** Case-insensitive e-mail lookup (the unique index is on lower(email)). */
 export async function findUserByEmail(db: DbOrTx, email: string): Promise<User | undefined> {
@@ -32,6 +32,43 @@ export async function insertUser(db: DbOrTx, user: NewUser): Promise<User> {
   const [row] = await db
     .insert(users)
     .values({ ...user, email: user.email.trim().toLowerCase() })
+    .returning();
+  return row;
+}
+
+/** Every account, by name then e-mail. */
+export async function listAllUsers(db: DbOrTx): Promise<User[]> {
+  return db.select().from(users).orderBy(asc(users.name), asc(users.email));
+}
+
+/** Memberships with the project's name (for the administration page): every account's, or one account's. */
+export async function listMembershipsWithProject(
+  db: DbOrTx,
+  userId?: number,
+): Promise<{ userId: number; projectId: number; projectName: string; role: ProjectRole }[]> {
+  return db
+    .select({ userId: memberships.userId, projectId: projects.id, projectName: projects.name, role: memberships.role })
+    .from(memberships)
+    .innerJoin(projects, eq(projects.id, memberships.projectId))
+    .where(userId === undefined ? undefined : eq(memberships.userId, userId))
+    .orderBy(asc(projects.name), asc(projects.id));
+}
+
+/** Locks the account row until the transaction ends. */
+export async function lockUser(db: DbOrTx, id: number): Promise<User | undefined> {
+  const [row] = await db.select().from(users).where(eq(users.id, id)).for("update").limit(1);
+  return row;
+}
+
+export async function updateUserFields(
+  db: DbOrTx,
+  id: number,
+  patch: Partial<Pick<User, "name" | "isAdmin">>,
+): Promise<User | undefined> {
+  const [row] = await db
+    .update(users)
+    .set({ ...patch, updatedAt: new Date() })
+    .where(eq(users.id, id))
     .returning();
   return row;
 }
