@@ -143,7 +143,7 @@ describe("fake SMTP server with the real mailer", () => {
     expect(m.html!.split(token)).toHaveLength(4);
   });
 
-  it("accepts a mailer that signs in with a user name and password", async () => {
+  it("delivers from a mailer configured with a user name and password (as production settings would be)", async () => {
     const withAuth = createMailer({
       host: fake.host,
       port: fake.port,
