@@ -33,3 +33,10 @@ export async function auditActions(db: Db, objectType: string, objectId: string 
   );
   return rows.map((r) => r.action);
 }
+
+/** The id (as the API spells it: a string) of the project with this exact name. */
+export async function projectIdByName(db: Db, name: string): Promise<string> {
+  const { rows } = await db.execute<{ id: number }>(sql`select id from projects where name = ${name}`);
+  if (rows.length !== 1) throw new Error(`expected one project named ${name}, found ${rows.length}`);
+  return String(rows[0].id);
+}
