@@ -40,6 +40,7 @@ const envSchema = z.object({
   STILLSPAN_KEYS_DIR: optionalText,
   STILLSPAN_SIGNING_KEY: optionalText,
   STILLSPAN_SIGNING_RETIRED_JWKS: optionalText,
+  STILLSPAN_PUBLIC_URL: z.url({ protocol: /^https?$/ }).optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -63,6 +64,8 @@ export interface Config {
   smtp: { host?: string; port?: number; secure: boolean; user?: string; password?: string; from?: string };
   /** Summary signing keys: a key folder (default <dataDir>/keys), or a private key given by the environment. */
   signing: { keysDir: string; privateKey?: string; retiredJwks?: string };
+  /** Origin of the site as users reach it, for links in e-mails (STILLSPAN_PUBLIC_URL; default http://host:port). */
+  publicUrl: string;
 }
 
 export class ConfigError extends Error {
@@ -134,5 +137,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       privateKey: e.STILLSPAN_SIGNING_KEY,
       retiredJwks: e.STILLSPAN_SIGNING_RETIRED_JWKS,
     },
+    publicUrl: (e.STILLSPAN_PUBLIC_URL ?? `http://${e.STILLSPAN_HOST}:${e.PORT}`).replace(/\/+$/, ""),
   };
 }

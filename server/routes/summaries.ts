@@ -1,0 +1,28 @@
+import { Router } from "express";
+import type { AppContext } from "../app-context.js";
+import { currentUser, requireAuth } from "../middleware/auth.js";
+import { getSummary, getSummaryPdf, listSummaries, parseSummaryId } from "../services/summaries.js";
+
+/** /api/summaries: signed stability summaries of the caller's projects (viewers included), their PDF copies. */
+export function summaryRoutes({ db }: AppContext): Router {
+  const router = Router();
+  router.use(requireAuth);
+
+  router.get("/", async (req, res) => {
+    res.json(await listSummaries(db, currentUser(req)));
+  });
+
+  router.get("/:id", async (req, res) => {
+    res.json(await getSummary(db, currentUser(req), parseSummaryId(req.params.id)));
+  });
+
+  router.get("/:id/pdf", async (req, res) => {
+    const { pdf, fileName } = await getSummaryPdf(db, currentUser(req), parseSummaryId(req.params.id));
+    res.setHeader("Content-Type", "application/pdf");
+    res.setHeader("Content-Disposition", `attachment; filename="${fileName}"`);
+    res.setHeader("Cache-Control", "private, no-store");
+    res.send(pdf);
+  });
+
+  return router;
+}

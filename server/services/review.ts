@@ -1,0 +1,246 @@
+/**
+ * The review workflow of study revisions: submit (analyst names a reviewer of the project), return with
+ * comments or sign (reviewers only, never the revision's author), comments, the reviewer's queue. Every write
+ * and its audit event share one transaction; e-mail goes out after the commit and never undoes the action.
+ */
+import type {
+  ReviewQueueItemDto,
+  RevisionReviewDto,
+  SubmitReviewInput,
+} from "../../shared/schemas/review.js";
+import { submitReviewSchema } from "../../shared/schemas/review.js";
+import type { AppContext } from "../app-context.js";
+import type { DbOrTx } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import { findMembershipRole } from "../db/queries/projects.js";
+import {
+  decideReviewRequest,
+  findReviewRequest,
+  insertReviewComment,
+  insertReviewEvent,
+  insertReviewRequest,
+  listReviewComments,
+  listReviewEvents,
+  listReviewQueue,
+  resubmitReviewRequest,
+  reviewPeople,
+} from "../db/queries/review.js";
+import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
+import { findSignatureOfRevision } from "../db/queries/signatures.js";
+import { findUserById } from "../db/queries/users.js";
+import { AppError } from "../errors.js";
+import { assertRole } from "../middleware/auth.js";
+import { verificationCode } from "../signing/verification-code.js";
+import type { SessionUser } from "./auth.js";
+import { notifyReturned, notifyReviewRequested } from "./review-mail.js";
+
+const UNIQUE_VIOLATION = "23505";
+
+export function isUniqueViolation(err: unknown): boolean {
+  const e = err as { code?: string; cause?: { code?: string } };
+  return e?.code === UNIQUE_VIOLATION || e?.cause?.code === UNIQUE_VIOLATION;
+}
+
+/** Parses a revision id from the URL; anything but a positive integer is a revision that does not exist. */
+export function parseRevisionId(raw: unknown): number {
+  const id = typeof raw === "string" && /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
+  if (!Number.isSafeInteger(id) || id <= 0) throw AppError.notFound("Revision");
+  return id;
+}
+
+/** The revision, after checking the caller holds one of `roles` in its project (404 / 403 otherwise). */
+async function revisionFor(
+  db: DbOrTx,
+  user: SessionUser,
+  revisionId: number,
+  roles: readonly ("analyst" | "reviewer" | "viewer")[],
+): Promise<RevisionRow> {
+  const revision = await findRevision(db, revisionId);
+  if (!revision) throw AppError.notFound("Revision");
+  await assertRole(db, user, revision.projectId, roles);
+  return revision;
+}
+
+/** Signing and returning need the reviewer role itself: an administrator who is not a reviewer may not. */
+export async function assertReviewer(db: DbOrTx, user: SessionUser, revision: RevisionRow, what: string): Promise<void> {
+  const role = await findMembershipRole(db, user.id, revision.projectId);
+  if (role !== "reviewer") {
+    throw AppError.forbidden(`Only a reviewer of this project can ${what}; your role is ${role ?? (user.isAdmin ? "administrator (not a reviewer)" : "none")}.`);
+  }
+  if (revision.authorId === user.id) {
+    throw AppError.forbidden(`You are the author of revision ${revision.number}: nobody may ${what} their own revision.`);
+  }
+}
+
+const person = (id: number | null, name: string | null) => (id === null ? null : { id: String(id), name: name ?? "" });
+
+/** GET /api/revisions/:id/review — state, request, comments, history and signature (analysts and reviewers). */
+export async function getRevisionReview(db: DbOrTx, user: SessionUser, revisionId: number): Promise<RevisionReviewDto> {
+  const revision = await revisionFor(db, user, revisionId, ["analyst", "reviewer"]);
+  const [request, comments, events, signature] = await Promise.all([
+    findReviewRequest(db, revisionId),
+    listReviewComments(db, revisionId, revision.projectId),
+    listReviewEvents(db, revisionId),
+    findSignatureOfRevision(db, revisionId),
+  ]);
+  const people = request ? await reviewPeople(db, request.id) : undefined;
+  return {
+    revisionId: String(revision.id),
+    revisionNumber: revision.number,
+    studyId: String(revision.studyId),
+    projectId: String(revision.projectId),
+    author: person(revision.authorId, revision.authorName),
+    state: request?.state ?? "draft",
+    request:
+      request && people
+        ? {
+            reviewer: { id: String(request.reviewerId), name: people.reviewerName },
+            requestedBy: { id: String(request.requestedById), name: people.requesterName },
+            note: request.note,
+            submittedAt: request.submittedAt.toISOString(),
+            decidedAt: request.decidedAt?.toISOString() ?? null,
+          }
+        : null,
+    comments: comments.map((c) => ({
+      id: String(c.id),
+      author: { id: String(c.authorId), name: c.authorName, role: c.authorRole },
+      body: c.body,
+      createdAt: c.createdAt.toISOString(),
+    })),
+    events: events.map((e) => ({
+      kind: e.kind,
+      actor: person(e.actorId, e.actorName),
+      reviewer: person(e.reviewerId, e.reviewerName),
+      note: e.note,
+      at: e.at.toISOString(),
+    })),
+    signature: signature
+      ? {
+          summaryId: String(signature.id),
+          signer: { id: String(signature.signerId), name: signature.signerName },
+          signedAt: signature.signedAt.toISOString(),
+          kid: signature.kid,
+          verificationCode: verificationCode(signature.jws),
+        }
+      : null,
+  };
+}
+
+/** POST /api/revisions/:id/submit — an analyst sends a draft (or a returned revision) to a reviewer of the project. */
+export async function submitForReview(
+  ctx: AppContext,
+  user: SessionUser,
+  revisionId: number,
+  body: SubmitReviewInput,
+  ip?: string,
+): Promise<RevisionReviewDto> {
+  const input = submitReviewSchema.parse(body);
+  const { db } = ctx;
+  const revision = await revisionFor(db, user, revisionId, ["analyst"]);
+  const reviewerRole = await findMembershipRole(db, input.reviewerId, revision.projectId);
+  if (reviewerRole !== "reviewer") {
+    throw AppError.badRequest(`User ${input.reviewerId} is not a reviewer of this project: name one of its reviewers.`, {
+      path: "reviewerId",
+    });
+  }
+  if (input.reviewerId === revision.authorId) {
+    throw AppError.badRequest("The reviewer cannot be the revision's author.", { path: "reviewerId" });
+  }
+  try {
+    await db.transaction(async (tx) => {
+      const existing = await findReviewRequest(tx, revisionId, true);
+      if (existing?.state === "in-review") {
+        throw AppError.conflict(`Revision ${revision.number} is already in review.`);
+      }
+      if (existing?.state === "signed") throw AppError.conflict(`Revision ${revision.number} is signed; it cannot be submitted again.`);
+      const values = { requestedBy: user.id, reviewerId: input.reviewerId, note: input.note };
+      if (existing) await resubmitReviewRequest(tx, existing.id, values);
+      else await insertReviewRequest(tx, { revisionId, ...values });
+      await insertReviewEvent(tx, { revisionId, kind: "submitted", actorId: user.id, reviewerId: input.reviewerId, note: input.note });
+      await writeAudit(tx, {
+        actorId: user.id,
+        action: "review.submit",
+        objectType: "revision",
+        objectId: revisionId,
+        ip,
+        details: { reviewerId: input.reviewerId, resubmission: Boolean(existing) },
+      });
+    });
+  } catch (err) {
+    if (isUniqueViolation(err)) throw AppError.conflict(`Revision ${revision.number} was submitted by someone else at the same moment.`);
+    throw err;
+  }
+  const reviewer = await findUserById(db, input.reviewerId);
+  if (reviewer) notifyReviewRequested(ctx, { revision, reviewer, analystName: user.name, note: input.note });
+  return getRevisionReview(db, user, revisionId);
+}
+
+/** POST /api/revisions/:id/return — a reviewer sends the revision back with comments (stored as a comment too). */
+export async function returnRevision(
+  ctx: AppContext,
+  user: SessionUser,
+  revisionId: number,
+  comments: string,
+  ip?: string,
+): Promise<RevisionReviewDto> {
+  const { db } = ctx;
+  const revision = await revisionFor(db, user, revisionId, ["reviewer"]);
+  await assertReviewer(db, user, revision, "return a revision");
+  const now = new Date();
+  const requestedBy = await db.transaction(async (tx) => {
+    const request = await findReviewRequest(tx, revisionId, true);
+    if (!request) throw AppError.conflict(`Revision ${revision.number} has not been submitted for review.`);
+    if (request.state !== "in-review") throw AppError.conflict(`Revision ${revision.number} is ${request.state}, not in review.`);
+    await decideReviewRequest(tx, request.id, "returned", user.id, now);
+    await insertReviewComment(tx, { revisionId, authorId: user.id, body: comments });
+    await insertReviewEvent(tx, { revisionId, kind: "returned", actorId: user.id, note: comments, at: now });
+    await writeAudit(tx, { actorId: user.id, action: "review.return", objectType: "revision", objectId: revisionId, ip });
+    return request.requestedById;
+  });
+  const analyst = await findUserById(db, requestedBy);
+  if (analyst) notifyReturned(ctx, { revision, analyst, reviewerName: user.name, comments });
+  return getRevisionReview(db, user, revisionId);
+}
+
+/** POST /api/revisions/:id/comments — analysts and reviewers of the project comment on a revision. */
+export async function addComment(
+  db: DbOrTx,
+  user: SessionUser,
+  revisionId: number,
+  body: string,
+  ip?: string,
+): Promise<RevisionReviewDto> {
+  await revisionFor(db, user, revisionId, ["analyst", "reviewer"]);
+  await db.transaction(async (tx) => {
+    const { id } = await insertReviewComment(tx, { revisionId, authorId: user.id, body });
+    await insertReviewEvent(tx, { revisionId, kind: "commented", actorId: user.id });
+    await writeAudit(tx, { actorId: user.id, action: "review.comment", objectType: "revision", objectId: revisionId, ip, details: { commentId: id } });
+  });
+  return getRevisionReview(db, user, revisionId);
+}
+
+/** GET /api/review-queue — revisions in review assigned to the caller. */
+export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<ReviewQueueItemDto[]> {
+  const rows = await listReviewQueue(db, user.id);
+  return rows.map((r) => ({
+    revisionId: String(r.revisionId),
+    revisionNumber: r.revisionNumber,
+    latestNumber: r.latestNumber,
+    studyId: String(r.studyId),
+    studyName: r.studyName,
+    alternativeName: r.alternativeName,
+    projectId: String(r.projectId),
+    projectName: r.projectName,
+    author: person(r.authorId, r.authorName),
+    requestedBy: { id: String(r.requestedById), name: r.requestedByName },
+    note: r.note,
+    submittedAt: r.submittedAt.toISOString(),
+    changeNote: r.changeNote,
+    flutterSpeedMps: r.critical.flutter?.speedMps ?? null,
+    divergenceSpeedMps: r.critical.divergenceSpeedMps ?? null,
+    engineVersion: r.engineVersion,
+    documentSha256: r.documentSha256,
+  }));
+}
+
+export { revisionFor };

@@ -1,0 +1,204 @@
+/**
+ * Signing a revision's stability summary, and reading signed summaries. A summary is "current" while no later
+ * revision of the same study has been signed; it also tells when later revisions exist that are not signed.
+ * Viewers (owner's representatives) read the summaries of their projects and nothing else.
+ */
+import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
+import type { AppContext } from "../app-context.js";
+import type { DbOrTx } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import { findCurrentCriteria } from "../db/queries/criteria.js";
+import { findAlternative } from "../db/queries/alternatives.js";
+import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
+import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
+import { findRevision } from "../db/queries/revisions.js";
+import { findSignature, findSignatureByJws, insertSignature, listSignatures, type SignatureRow } from "../db/queries/signatures.js";
+import { findUserById } from "../db/queries/users.js";
+import { AppError } from "../errors.js";
+import { ANY_ROLE, assertRole } from "../middleware/auth.js";
+import { canonicalSha256Hex } from "../lib/hash.js";
+import { renderSummaryPdf } from "../pdf/summary-pdf.js";
+import { verificationCode } from "../signing/verification-code.js";
+import type { SessionUser } from "./auth.js";
+import { assertReviewer, isUniqueViolation, revisionFor } from "./review.js";
+import { notifySigned } from "./review-mail.js";
+import { signStabilitySummary } from "./signing.js";
+import { buildSummaryPayload } from "./summary-payload.js";
+
+export const JWKS_PATH = "/.well-known/jwks.json";
+
+/**
+ * POST /api/revisions/:id/sign — the reviewer's statement, the summary built from the stored revision, signed
+ * (compact JWS over RFC 8785 canonical JSON) and stored with its key id and payload hash, in one transaction
+ * with the review state, the history and the audit event. 409 when already signed.
+ */
+export async function signRevision(
+  ctx: AppContext,
+  user: SessionUser,
+  revisionId: number,
+  statement: string,
+  ip?: string,
+): Promise<{ summaryId: string }> {
+  const { db, config } = ctx;
+  const revision = await revisionFor(db, user, revisionId, ["reviewer"]);
+  await assertReviewer(db, user, revision, "sign a revision");
+  const full = await findRevision(db, revisionId);
+  const [project, alternative, criteria, signer] = await Promise.all([
+    findProjectById(db, revision.projectId, user.id),
+    findAlternative(db, revision.alternativeId),
+    findCurrentCriteria(db, revision.projectId),
+    findUserById(db, user.id),
+  ]);
+  if (!full || !project || !alternative || !signer) throw AppError.notFound("Revision");
+  if (!criteria) {
+    throw AppError.conflict(
+      "The project has no design wind and criteria yet: the summary states the required speeds and margins, so an analyst must save the criteria first.",
+    );
+  }
+  const signedAt = new Date();
+  let summaryId: number;
+  try {
+    summaryId = await db.transaction(async (tx) => {
+      const request = await findReviewRequest(tx, revisionId, true);
+      if (request?.state === "signed") throw AppError.conflict(`Revision ${revision.number} is already signed.`);
+      if (!request || request.state !== "in-review") {
+        throw AppError.conflict(
+          `Revision ${revision.number} is ${request ? request.state : "a draft"}: only a revision in review can be signed.`,
+        );
+      }
+      const payload = await buildSummaryPayload(tx, {
+        revision: full,
+        projectName: project.name,
+        alternativeName: alternative.name,
+        criteria: criteria.criteria,
+        signer: { name: signer.name, email: signer.email },
+        signedAt,
+        statement,
+      });
+      const signed = await signStabilitySummary(config, payload);
+      const id = await insertSignature(tx, {
+        revisionId,
+        signerId: user.id,
+        jws: signed.jws,
+        kid: signed.kid,
+        payload: signed.summary,
+        payloadSha256: canonicalSha256Hex(signed.summary),
+        signedAt,
+      });
+      await decideReviewRequest(tx, request.id, "signed", user.id, signedAt);
+      await insertReviewEvent(tx, { revisionId, kind: "signed", actorId: user.id, note: statement, at: signedAt });
+      await writeAudit(tx, {
+        actorId: user.id,
+        action: "review.sign",
+        objectType: "revision",
+        objectId: revisionId,
+        ip,
+        details: { summaryId: id, kid: signed.kid, criteriaVersion: criteria.version, payloadSha256: canonicalSha256Hex(signed.summary) },
+      });
+      return id;
+    });
+  } catch (err) {
+    if (isUniqueViolation(err)) throw AppError.conflict(`Revision ${revision.number} is already signed.`);
+    throw err;
+  }
+  const row = await findSignature(db, summaryId);
+  if (row) void notifySigned(ctx, row);
+  return { summaryId: String(summaryId) };
+}
+
+function outcome(row: SignatureRow): SummaryListItemDto["outcome"] {
+  const statuses = row.payload.margins.map((m) => m.status);
+  if (statuses.includes("fail")) return "fail";
+  if (statuses.includes("undetermined")) return "undetermined";
+  return "pass";
+}
+
+/** GET /api/summaries — signed summaries of the caller's projects (every project for administrators). */
+export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<SummaryListItemDto[]> {
+  const projectIds = user.isAdmin ? null : (await listProjectsOfMember(db, user.id)).map((p) => p.id);
+  const rows = await listSignatures(db, projectIds);
+  return rows.map((r) => ({
+    id: String(r.id),
+    projectId: String(r.projectId),
+    projectName: r.projectName,
+    alternativeName: r.alternativeName,
+    studyId: String(r.studyId),
+    studyName: r.studyName,
+    revisionNumber: r.revisionNumber,
+    signer: { id: String(r.signerId), name: r.signerName },
+    signedAt: r.signedAt.toISOString(),
+    flutterSpeedMps: r.payload.flutter?.speedMps ?? null,
+    outcome: outcome(r),
+    current: r.currentSignatureId === r.id,
+    newerUnsigned: r.newerUnsigned,
+  }));
+}
+
+export function parseSummaryId(raw: unknown): number {
+  const id = typeof raw === "string" && /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
+  if (!Number.isSafeInteger(id) || id <= 0) throw AppError.notFound("Signed summary");
+  return id;
+}
+
+async function readableSignature(db: DbOrTx, user: SessionUser, id: number): Promise<SignatureRow> {
+  const row = await findSignature(db, id);
+  if (!row) throw AppError.notFound("Signed summary");
+  await assertRole(db, user, row.projectId, ANY_ROLE);
+  return row;
+}
+
+async function currentOf(db: DbOrTx, row: SignatureRow): Promise<SummaryDto["currentSummary"]> {
+  if (row.currentSignatureId === row.id) return null;
+  const current = await findSignature(db, row.currentSignatureId);
+  return current ? { id: String(current.id), revisionNumber: current.revisionNumber, signedAt: current.signedAt.toISOString() } : null;
+}
+
+/** GET /api/summaries/:id — the payload as signed, its JWS, and whether it is still current. */
+export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Promise<SummaryDto> {
+  const row = await readableSignature(db, user, id);
+  const revision = await findRevision(db, row.revisionId);
+  return {
+    id: String(row.id),
+    revisionId: String(row.revisionId),
+    studyId: String(row.studyId),
+    projectId: String(row.projectId),
+    payload: row.payload,
+    jws: row.jws,
+    kid: row.kid,
+    payloadSha256: row.payloadSha256,
+    verificationCode: verificationCode(row.jws),
+    current: row.currentSignatureId === row.id,
+    currentSummary: await currentOf(db, row),
+    newerUnsigned: row.newerUnsigned,
+    newestRevisionNumber: row.newestRevisionNumber,
+    branches: (revision?.result.modes ?? []).map((m) => ({
+      id: m.id,
+      steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
+    })),
+    jwksUrl: JWKS_PATH,
+  };
+}
+
+/** GET /api/summaries/:id/pdf — the PDF copy with the JWS and its verification code. */
+export async function getSummaryPdf(db: DbOrTx, user: SessionUser, id: number): Promise<{ pdf: Buffer; fileName: string }> {
+  const row = await readableSignature(db, user, id);
+  const revision = await findRevision(db, row.revisionId);
+  const current = await currentOf(db, row);
+  const pdf = await renderSummaryPdf({
+    summary: row.payload,
+    jws: row.jws,
+    branches: revision?.result.modes ?? [],
+    supersededBy: current ? { revisionNumber: current.revisionNumber } : null,
+  });
+  const safe = `${row.studyName}-rev${row.revisionNumber}`.replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80);
+  return { pdf, fileName: `stability-summary-${safe || row.id}.pdf` };
+}
+
+/**
+ * For POST /api/signatures/verify: whether a JWS is one of ours and still current. null when this server holds
+ * no summary with exactly this JWS (it may still verify: it is then simply not on record here).
+ */
+export async function summaryCurrency(db: DbOrTx, jws: string): Promise<{ summaryId: string; current: boolean; newerUnsigned: boolean } | null> {
+  const row = await findSignatureByJws(db, jws);
+  return row ? { summaryId: String(row.id), current: row.currentSignatureId === row.id, newerUnsigned: row.newerUnsigned } : null;
+}

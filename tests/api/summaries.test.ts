@@ -1,0 +1,220 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { base64url, compactVerify, createLocalJWKSet, type JSONWebKeySet } from "jose";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { canonicalJson } from "../../shared/canonical-json.js";
+import { SUMMARY_CAUTIONS } from "../../shared/schemas/summary.js";
+import { pdfText } from "../../server/pdf/__tests__/pdf-text.js";
+import { insertUser } from "../../server/db/queries/users.js";
+import { hashPassword } from "../../server/services/passwords.js";
+import { keyStoreFor } from "../../server/services/signing.js";
+import { startTestApp, type TestApp } from "../support/app.js";
+import { createProjectWithMembers, openTestDb, userId } from "../support/db.js";
+import { testEnv } from "../support/env.js";
+import { api, signIn } from "../support/http.js";
+import { addRevision, arrangeStudy, type ArrangedStudy } from "../support/review.js";
+
+const base = () => testEnv.baseUrl;
+const db = openTestDb();
+const suffix = Date.now().toString(36);
+let projectId: number;
+let arranged: ArrangedStudy;
+let cookies: Record<"analyst" | "reviewer" | "viewer", string>;
+let reviewerId: number;
+let firstSummaryId: string;
+
+/** An independent check: jose alone, with nothing but the published JWKS document. */
+async function verifiesWithJwks(jws: string, jwks: JSONWebKeySet): Promise<boolean> {
+  try {
+    await compactVerify(jws, createLocalJWKSet(jwks), { algorithms: ["EdDSA"] });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+async function fetchJwks(origin: string): Promise<JSONWebKeySet> {
+  const res = await fetch(`${origin}/.well-known/jwks.json`);
+  expect(res.status).toBe(200);
+  return (await res.json()) as JSONWebKeySet;
+}
+
+async function submitAndSign(origin: string, revisionId: string, statement: string): Promise<string> {
+  const submitted = await api(origin, `/api/revisions/${revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
+  expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
+  const signed = await api(origin, `/api/revisions/${revisionId}/sign`, { cookie: cookies.reviewer, body: { statement } });
+  expect(signed.status, JSON.stringify(signed.body)).toBe(201);
+  return signed.body.summaryId;
+}
+
+beforeAll(async () => {
+  projectId = await createProjectWithMembers(db, `Summary test crossing ${suffix}`, {
+    "analyst@stillspan.test": "analyst",
+    "reviewer@stillspan.test": "reviewer",
+    "viewer@stillspan.test": "viewer",
+  });
+  const [analyst, reviewer, viewer] = await Promise.all(["analyst", "reviewer", "viewer"].map((r) => signIn(base(), `${r}@stillspan.test`)));
+  cookies = { analyst, reviewer, viewer };
+  reviewerId = await userId(db, "reviewer@stillspan.test");
+  arranged = await arrangeStudy(base(), analyst, projectId, `Summary study ${suffix}`);
+  firstSummaryId = await submitAndSign(base(), arranged.revisionId, "Stable with margin (ζ > 0 up to the sweep end, λ tracked).");
+});
+afterAll(() => db.$client.end());
+
+describe("GET /api/summaries/:id", () => {
+  it("gives the viewer the signed payload built from the stored revision, the criteria and the data set", async () => {
+    const res = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    expect(res.status).toBe(200);
+    const { payload } = res.body;
+    const revision = await api(base(), `/api/revisions/${arranged.revisionId}`, { cookie: cookies.analyst });
+    expect(payload.revision).toMatchObject({ id: arranged.revisionId, number: 1, contentHash: revision.body.documentSha256 });
+    expect(payload.flutter.speedMps).toBe(revision.body.result.flutter.speed);
+    expect(payload.flutter.frequencyHz).toBe(revision.body.result.flutter.frequency);
+    expect(payload.engineVersion).toBe(revision.body.engineVersion);
+    expect(payload.model).toEqual({ kind: "section-model", degreesOfFreedom: 2, aerodynamics: "tabulated" });
+    // The table was copied from the uploaded data set: its file hash and delivered convention are named.
+    const dataset = await api(base(), `/api/datasets/${arranged.datasetId}`, { cookie: cookies.analyst });
+    expect(payload.aerodynamicData).toMatchObject({
+      name: "Twin box, smooth flow, 0° (invented)",
+      origin: "measured",
+      sha256: dataset.body.file.sha256,
+      deliveredConvention: { abscissa: "U/(fB)", normalisation: "½ρU²B, ½ρU²B²", signConvention: "h and L downward" },
+      testedReducedVelocity: [2, 12],
+    });
+    // Required speed = 1.2 × v_m (default flutter factor); v_m by EN 1991-1-4 Expr. (4.3)–(4.5), category 0, 62 m, 28 m/s.
+    const vm = 0.19 * Math.pow(0.003 / 0.05, 0.07) * Math.log(62 / 0.003) * 28;
+    expect(payload.designWind.meanSpeedMps).toBeCloseTo(vm, 9);
+    const flutterCriterion = payload.criteria.find((c: { phenomenon: string }) => c.phenomenon === "flutter");
+    expect(flutterCriterion.requiredSpeedMps).toBeCloseTo(1.2 * vm, 9);
+    const flutterMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "flutter");
+    expect(flutterMargin.margin).toBeCloseTo(payload.flutter.speedMps / (1.2 * vm), 12);
+    expect(payload.signer).toEqual({ name: "Mira Holloway", email: "reviewer@stillspan.test" });
+    expect(payload.statement).toBe("Stable with margin (ζ > 0 up to the sweep end, λ tracked).");
+    expect(res.body.branches.length).toBe(2);
+    expect(res.body).toMatchObject({ current: true, currentSummary: null, newerUnsigned: false, jwksUrl: "/.well-known/jwks.json" });
+  });
+
+  it("verifies with an independent jose check that uses only the JWKS document; the payload is its canonical JSON", async () => {
+    const res = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    const jwks = await fetchJwks(base());
+    const verified = await compactVerify(res.body.jws, createLocalJWKSet(jwks), { algorithms: ["EdDSA"] });
+    expect(verified.protectedHeader).toMatchObject({ alg: "EdDSA", kid: res.body.kid, typ: "stillspan-summary+jws" });
+    const text = new TextDecoder().decode(verified.payload);
+    expect(text).toBe(canonicalJson(res.body.payload));
+  });
+
+  it("fails verification when any field of the payload is changed, or the signature is", async () => {
+    const res = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    const jwks = await fetchJwks(base());
+    const [header, , signature] = res.body.jws.split(".");
+    const payload = res.body.payload as Record<string, unknown>;
+    const tampered = (value: Record<string, unknown>) => `${header}.${base64url.encode(canonicalJson(value))}.${signature}`;
+    expect(await verifiesWithJwks(tampered(payload), jwks), "the untouched payload re-encoded").toBe(true);
+
+    for (const key of Object.keys(payload)) {
+      const changed = structuredClone(payload);
+      const value = changed[key];
+      changed[key] =
+        typeof value === "string" ? `${value}x` : value === null ? { speedMps: 1, frequencyHz: 0 } : Array.isArray(value) ? [...value, value[0] ?? "x"] : { ...(value as object), extra: 1 };
+      expect(await verifiesWithJwks(tampered(changed), jwks), `payload.${key} changed`).toBe(false);
+    }
+    const flutterDown = structuredClone(payload) as { flutter: { speedMps: number } };
+    flutterDown.flutter.speedMps -= 0.001;
+    expect(await verifiesWithJwks(tampered(flutterDown), jwks), "flutter speed lowered by 1 mm/s").toBe(false);
+
+    const bytes = base64url.decode(signature);
+    bytes[10] ^= 0x01;
+    expect(await verifiesWithJwks(`${header}.${res.body.jws.split(".")[1]}.${base64url.encode(bytes)}`, jwks), "one bit of the signature").toBe(false);
+  });
+
+  it("answers 403 to a signed-in user outside the project, 404 to an unknown id, 401 without a session", async () => {
+    const email = `outsider-${suffix}@stillspan.test`;
+    await insertUser(db, { email, name: "Outside Reader (invented)", passwordHash: await hashPassword("outsider-password") });
+    const outsider = await signIn(base(), email, "outsider-password");
+    expect((await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: outsider })).status).toBe(403);
+    expect((await api(base(), `/api/summaries/${firstSummaryId}/pdf`, { cookie: outsider })).status).toBe(403);
+    expect((await api(base(), "/api/summaries", { cookie: outsider })).body).toEqual([]);
+    expect((await api(base(), "/api/summaries/999999999", { cookie: cookies.viewer })).status).toBe(404);
+    expect((await api(base(), "/api/summaries/abc", { cookie: cookies.viewer })).status).toBe(404);
+    expect((await api(base(), `/api/summaries/${firstSummaryId}`)).status).toBe(401);
+  });
+});
+
+describe("current, superseded and newer unsigned revisions", () => {
+  it("stays current but says so when a newer unsigned revision exists; is superseded once a later one is signed", async () => {
+    const second = await addRevision(base(), cookies.analyst, arranged.studyId, 1, 0.0045);
+    const pending = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    expect(pending.body).toMatchObject({ current: true, newerUnsigned: true, newestRevisionNumber: 2, currentSummary: null });
+
+    const secondSummaryId = await submitAndSign(base(), second, "Revision 2 checked.");
+    const old = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    expect(old.body).toMatchObject({ current: false, newerUnsigned: false, currentSummary: { id: secondSummaryId, revisionNumber: 2 } });
+    const latest = await api(base(), `/api/summaries/${secondSummaryId}`, { cookie: cookies.viewer });
+    expect(latest.body).toMatchObject({ current: true, currentSummary: null });
+
+    const list = await api(base(), "/api/summaries", { cookie: cookies.viewer });
+    const mine = list.body.filter((s: { projectId: string }) => s.projectId === String(projectId));
+    expect(mine.map((s: { id: string; current: boolean }) => [s.id, s.current])).toEqual([
+      [secondSummaryId, true],
+      [firstSummaryId, false],
+    ]);
+  });
+
+  it("lists for the viewer only summaries of projects they belong to", async () => {
+    const list = await api(base(), "/api/summaries", { cookie: cookies.viewer });
+    expect(list.status).toBe(200);
+    const viewerProjects = (await api(base(), "/api/projects", { cookie: cookies.viewer })).body.map((p: { id: string }) => p.id);
+    for (const s of list.body) expect(viewerProjects).toContain(s.projectId);
+  });
+});
+
+describe("GET /api/summaries/:id/pdf", () => {
+  it("downloads a PDF attachment whose text carries the flutter speed, the cautions and the verification code", async () => {
+    const summary = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    const res = await fetch(`${base()}/api/summaries/${firstSummaryId}/pdf`, { headers: { Cookie: cookies.viewer } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="stability-summary-.+\.pdf"$/);
+    const { text } = await pdfText(Buffer.from(await res.arrayBuffer()));
+    const flat = text.replace(/\s+/g, " ");
+    expect(flat).toContain(`${summary.body.payload.flutter.speedMps.toFixed(1)} m/s`);
+    expect(flat).toContain(SUMMARY_CAUTIONS[0]);
+    expect(flat).toContain("wind-tunnel verification");
+    expect(flat).toContain(summary.body.verificationCode);
+  });
+});
+
+describe("key rotation", () => {
+  let app: TestApp;
+  let keysDir: string;
+
+  beforeAll(async () => {
+    keysDir = mkdtempSync(path.join(tmpdir(), "stillspan-rotation-keys-"));
+    app = await startTestApp({ env: { STILLSPAN_KEYS_DIR: keysDir } });
+  });
+  afterAll(async () => {
+    await app.close();
+    rmSync(keysDir, { recursive: true, force: true });
+  });
+
+  it("keeps a summary signed before a rotation verifiable with the JWKS published after it", async () => {
+    const third = await addRevision(app.baseUrl, cookies.analyst, arranged.studyId, 2, 0.0043);
+    const before = await submitAndSign(app.baseUrl, third, "Signed before the rotation.");
+    const summary = await api(app.baseUrl, `/api/summaries/${before}`, { cookie: cookies.viewer });
+    const oldKid = summary.body.kid;
+
+    const rotated = await (await keyStoreFor(app.config)).rotate();
+    expect(rotated.kid).not.toBe(oldKid);
+
+    const jwks = await fetchJwks(app.baseUrl);
+    expect(jwks.keys.map((k) => k.kid)).toEqual([rotated.kid, oldKid]);
+    expect(await verifiesWithJwks(summary.body.jws, jwks)).toBe(true);
+
+    const fourth = await addRevision(app.baseUrl, cookies.analyst, arranged.studyId, 3, 0.0044);
+    const after = await submitAndSign(app.baseUrl, fourth, "Signed after the rotation.");
+    const afterSummary = await api(app.baseUrl, `/api/summaries/${after}`, { cookie: cookies.viewer });
+    expect(afterSummary.body.kid).toBe(rotated.kid);
+    expect(await verifiesWithJwks(afterSummary.body.jws, jwks)).toBe(true);
+  });
+});
