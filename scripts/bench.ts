@@ -93,8 +93,10 @@ const runsArg = args.indexOf("--runs");
 const runs = Math.max(20, runsArg >= 0 ? Number(args[runsArg + 1]) || 20 : 20);
 
 for (const c of cases) {
-  let info = c.run(); // warm-up (JIT)
-  for (let i = 0; i < 2; i++) info = c.run();
+  // warm-up until the JIT has settled: at least 3 runs and 2 s (at most 200 runs)
+  let info = c.run();
+  const warmStart = performance.now();
+  for (let i = 1; i < 200 && (i < 3 || performance.now() - warmStart < 2000); i++) info = c.run();
   const times: number[] = [];
   for (let i = 0; i < runs; i++) {
     const t0 = performance.now();

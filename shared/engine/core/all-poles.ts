@@ -46,6 +46,7 @@ export function allPoles(mass: Float64Array, massInverse: Float64Array, work: Po
       start.vecIm[i] = wi[k] > 0 ? v.get(i, k + 1) : 0;
     }
     const polished: Pole = { re: 0, im: 0, vecRe: new Float64Array(n), vecIm: new Float64Array(n) };
+    work.factored = false;
     const ok = refinePole(mass, work, start.re, start.im, start.vecRe, start.vecIm, polished);
     const close = Math.hypot(polished.re - start.re, polished.im - start.im) <= 1e-6 * Math.hypot(start.re, start.im) + 1e-12;
     poles.push(ok && close ? polished : start);

@@ -72,6 +72,7 @@ export function solveBranchPk(
   let prevOmega = Number.NaN;
   let prevG = Number.NaN;
   out.converged = false;
+  work.factored = false; // Jacobian factors from another branch or speed are not reused
   let it = 0;
   let k = 0;
   for (it = 1; it <= PK_MAX_ITERATIONS; it++) {
@@ -84,7 +85,15 @@ export function solveBranchPk(
       pole.vecRe.set(chosen.vecRe);
       pole.vecIm.set(chosen.vecIm);
     } else {
-      refinePole(system.mass, work, lr, li, pole.vecRe, pole.vecIm, pole);
+      const startRe = lr;
+      const startIm = li;
+      if (!refinePole(system.mass, work, lr, li, pole.vecRe, pole.vecIm, pole)) {
+        // Newton failed (e.g. a diverging iterate): keep the last good pole and report no convergence
+        out.converged = false;
+        pole.re = startRe;
+        pole.im = startIm;
+        break;
+      }
       lr = pole.re;
       li = pole.im;
     }

@@ -15,6 +15,12 @@ export interface PoleWorkspace {
   readonly rIm: Float64Array;
   readonly xRe: Float64Array;
   readonly xIm: Float64Array;
+  /** LU factors of the bordered Jacobian, (n+1)×(n+1), reused by chord iterations. */
+  readonly luRe: Float64Array;
+  readonly luIm: Float64Array;
+  readonly pivots: Int32Array;
+  /** True while `luRe/luIm` hold factors usable for the pole being refined; reset per branch solve. */
+  factored: boolean;
 }
 
 export function createPoleWorkspace(n: number): PoleWorkspace {
@@ -31,6 +37,10 @@ export function createPoleWorkspace(n: number): PoleWorkspace {
     rIm: new Float64Array(m),
     xRe: new Float64Array(n),
     xIm: new Float64Array(n),
+    luRe: new Float64Array(m * m),
+    luIm: new Float64Array(m * m),
+    pivots: new Int32Array(m),
+    factored: false,
   };
 }
 

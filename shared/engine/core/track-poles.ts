@@ -4,8 +4,8 @@ import { optimalAssignment } from "./hungarian";
 import { modalAssurance } from "./mac";
 import { assertModalSystem, type ModalSystem } from "./modal-system";
 import { normalizeModeVector } from "./mode-vector";
-import { createPkOutcome, solveBranchPk, type PkOutcome } from "./pk-branch";
-import { createPoleWorkspace } from "./quadratic-operator";
+import { createPkOutcome, solveBranchPk, STATIC_IM_TOLERANCE, type PkOutcome } from "./pk-branch";
+import { assembleQuadratic, createPoleWorkspace } from "./quadratic-operator";
 import type { Pole } from "./refine-pole";
 import { assessStep } from "./tracking-confidence";
 
@@ -56,7 +56,9 @@ const MIN_STEP_CONFIDENCE = 0.5;
  * confidence 0.5 or fails to converge, the step is halved locally, down to `minStepFraction` of the grid step.
  * At the floor the p-k iteration is redone with a full decomposition at every iterate, each branch taking the
  * pole that an optimal assignment (cost 1 − MAC + normalised predictor distance) gives it; the speed is then
- * reported as ambiguous if the verdict stays poor. Branches are never sorted by frequency.
+ * reported as ambiguous if the verdict stays poor. Branches are never sorted by frequency. A branch whose pole
+ * pair reaches the real axis (static branch) continues on the larger of the two real roots it splits into —
+ * the root that can cross zero — and is then followed by continuity.
  * Notes: references for the strategy — Desforges, Cooper & Wright 1996 (Proc. IMechE G 210), Eldred, Venkayya
  * & Anderson 1995 (AIAA J. 33(7)), from memory. Refinement speeds are solved for every branch, so all
  * branches share the same list of speeds.
@@ -116,7 +118,28 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     converged: o.converged,
     extrapolated: system.hasAero && speed > 0 && (system.isExtrapolated?.(o.reducedFrequency) ?? false),
   });
+  // A pole pair that reaches the real axis splits into two real roots; the branch continues on the larger one,
+  // the root that can cross zero (static instability). Newton from the predictor may have landed on either.
+  const settleStatic = (steps: TrackedStep[], prev: Pole[]) => {
+    steps.forEach((s, j) => {
+      if (!(prev[j].im > 0) || s.im !== 0) return;
+      const k = assembleQuadratic(system, s.speedMps, 0, work);
+      const reals = fullPoles()
+        .filter((p) => Math.abs(p.im) <= STATIC_IM_TOLERANCE * Math.hypot(p.re, p.im))
+        .sort((a, b) => Math.hypot(a.re - prev[j].re, a.im - prev[j].im) - Math.hypot(b.re - prev[j].re, b.im - prev[j].im))
+        .slice(0, 2);
+      const right = reals.reduce<Pole | null>((best, p) => (best === null || p.re > best.re ? p : best), null);
+      if (!right || right.re <= s.re) return;
+      s.re = right.re;
+      s.im = 0;
+      s.vecRe = Float64Array.from(right.vecRe);
+      s.vecIm = new Float64Array(n);
+      normalizeModeVector(n, mass, s.vecRe, s.vecIm);
+      s.reducedFrequency = k;
+    });
+  };
   const accept = (steps: TrackedStep[], prev: Pole[], pred: Pole[], forced: boolean): boolean => {
+    settleStatic(steps, prev);
     const verdict = assessStep(n, mass, prev, pred, steps);
     let good = verdict.identity;
     for (let j = 0; j < n; j++) {
