@@ -50,7 +50,11 @@ export const criticalSpeedsSchema = z.object({
     })
     .nullable()
     .describe("null: no flutter up to sweepToMps"),
-  divergenceSpeedMps: z.number().nullable().describe("Torsional divergence speed, m/s; null: none in the sweep"),
+  divergenceSpeedMps: z
+    .number()
+    .nullable()
+    .describe("Torsional divergence speed from its closed form, m/s (also beyond the sweep); null: cannot occur"),
+  divergenceNote: z.string().nullable().describe("Why divergence cannot occur, when divergenceSpeedMps is null"),
   selbergSpeedMps: z.number().nullable().describe("Selberg's estimate, m/s"),
   sweepToMps: z.number().describe("Last speed of the sweep, m/s"),
   warningCodes: z.array(z.string()),

@@ -1,0 +1,251 @@
+import { diffJson } from "../../shared/diff-json.js";
+import { runSweep } from "../../shared/engine/run-sweep.js";
+import { ENGINE_VERSION } from "../../shared/engine/version.js";
+import type {
+  RevisionDiffDto,
+  RevisionDto,
+  RevisionSummaryDto,
+  StaleParentDetails,
+} from "../../shared/schemas/revisions.js";
+import { parseStudy, type StudyDocument } from "../../shared/schemas/study.js";
+import type { Db, DbOrTx } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import {
+  findLatestRevision,
+  findRevision,
+  findRevisionSummary,
+  insertRevision,
+  listRevisions,
+  type RevisionRow,
+  type RevisionSummaryRow,
+} from "../db/queries/revisions.js";
+import { findStudy, lockStudy } from "../db/queries/studies.js";
+import { AppError } from "../errors.js";
+import { criticalSpeeds } from "../lib/critical-speeds.js";
+import { canonicalSha256Hex } from "../lib/hash.js";
+import { loadWithAccess, person } from "./access.js";
+import type { SessionUser } from "./auth.js";
+
+export function toRevisionSummary(row: RevisionSummaryRow): RevisionSummaryDto {
+  return {
+    id: String(row.id),
+    studyId: String(row.studyId),
+    number: row.number,
+    parentNumber: row.parentNumber,
+    author: person(row.authorId, row.authorName),
+    changeNote: row.changeNote,
+    documentSha256: row.documentSha256,
+    engineVersion: row.engineVersion,
+    createdAt: row.createdAt.toISOString(),
+    superseded: row.number < row.latestNumber,
+    critical: row.critical,
+  };
+}
+
+function toRevisionDto(row: RevisionRow): RevisionDto {
+  return {
+    ...toRevisionSummary(row),
+    alternativeId: String(row.alternativeId),
+    projectId: String(row.projectId),
+    studyName: row.studyName,
+    latestNumber: row.latestNumber,
+    study: row.document,
+    result: row.result,
+  };
+}
+
+/** A study document from untrusted JSON, or 400 `invalid_study` listing each problem at its JSON path. */
+export function parseStudyOrThrow(json: unknown, prefix = ""): StudyDocument {
+  const parsed = parseStudy(json);
+  if (parsed.ok) return parsed.study;
+  const details = parsed.issues.map((i) => ({ path: i.path, message: i.message }));
+  const shown = details.slice(0, 5).map((d) => `${d.path} ${d.message}`).join("; ");
+  throw new AppError(
+    400,
+    "invalid_study",
+    `${prefix}The study document is not valid (${details.length} problem${details.length === 1 ? "" : "s"}): ${shown}${details.length > 5 ? "; …" : ""}. Nothing was stored.`,
+    { details },
+  );
+}
+
+export interface SaveRevisionInput {
+  parentRevision: number | null;
+  changeNote: string;
+  study: unknown;
+}
+
+/**
+ * Validates the document, runs the sweep with the current engine and stores document, canonical hash, engine
+ * version and result as the study's next revision, with its audit event, in one transaction.
+ *
+ * Concurrency: the sweep runs before the transaction (no lock is held while computing); inside, the study row
+ * is locked `for update`, so a second save on the same parent waits, then finds the first one's revision and
+ * is refused with 409 `stale_parent` carrying the newer revision and its own rejected document. The unique
+ * (study_id, number) key backs this up; numbers stay gap-free because a refused save inserts nothing.
+ */
+export async function saveRevision(
+  db: Db,
+  user: SessionUser,
+  studyId: number,
+  input: SaveRevisionInput,
+  ip?: string,
+  source: "api" | "import" | "rerun" | "create" | "seed" = "api",
+): Promise<RevisionDto> {
+  await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "write");
+  const study = parseStudyOrThrow(input.study);
+  const changeNote = input.changeNote.trim();
+  if (input.parentRevision !== null && changeNote === "") {
+    throw new AppError(400, "invalid_input", "changeNote: a change note is required from revision 2 on — say what changed and why.", {
+      details: [{ path: "changeNote", rule: "required", message: "is required from revision 2 on" }],
+    });
+  }
+  const { result, sha256 } = compute(study);
+  const id = await db.transaction(async (tx) => {
+    const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, result, sha256);
+    await writeAudit(tx, {
+      actorId: user.id,
+      action: "revision.create",
+      objectType: "revision",
+      objectId: inserted.id,
+      ip,
+      details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: result.engine, source },
+    });
+    return inserted.id;
+  });
+  return toRevisionDto((await findRevision(db, id))!);
+}
+
+function compute(study: StudyDocument) {
+  let result;
+  try {
+    result = runSweep(study);
+  } catch (err) {
+    const message = err instanceof Error ? err.message : String(err);
+    throw new AppError(422, "sweep_failed", `The sweep could not be computed: ${message}. Nothing was stored.`, { cause: err });
+  }
+  return { result, sha256: canonicalSha256Hex(study) };
+}
+
+/** Inside the caller's transaction: lock the study, check the parent, insert the next number. */
+export async function appendRevision(
+  tx: DbOrTx,
+  user: { id: number },
+  studyId: number,
+  input: { parentRevision: number | null; changeNote: string; study: StudyDocument },
+  result: ReturnType<typeof runSweep>,
+  sha256: string,
+): Promise<{ id: number; number: number }> {
+  if (!(await lockStudy(tx, studyId))) throw AppError.notFound("Study");
+  const latest = await findLatestRevision(tx, studyId);
+  const latestNumber = latest?.number ?? null;
+  if (input.parentRevision !== latestNumber) {
+    if (latest && (input.parentRevision === null || input.parentRevision < latest.number)) {
+      const details: StaleParentDetails = {
+        latest: { id: String(latest.id), number: latest.number, author: person(latest.authorId, latest.authorName), createdAt: latest.createdAt.toISOString() },
+        rejected: { parentRevision: input.parentRevision, changeNote: input.changeNote, study: input.study },
+      };
+      const base = input.parentRevision === null ? "a new study" : `revision ${input.parentRevision}`;
+      throw new AppError(
+        409,
+        "stale_parent",
+        `Revision ${latest.number} by ${latest.authorName ?? "a former user"} was saved after ${base}, which your edit started from. ` +
+          `Your document was not stored; it is returned so you can apply your changes on top of revision ${latest.number}.`,
+        { details },
+      );
+    }
+    throw new AppError(400, "invalid_input", `parentRevision: revision ${input.parentRevision} does not exist in this study (latest: ${latestNumber ?? "none"}).`, {
+      details: [{ path: "parentRevision", rule: "not_found", message: `revision ${input.parentRevision} does not exist` }],
+    });
+  }
+  const number = (latestNumber ?? 0) + 1;
+  const id = await insertRevision(tx, {
+    studyId,
+    number,
+    parentNumber: latestNumber,
+    authorId: user.id,
+    changeNote: input.changeNote,
+    document: input.study,
+    documentSha256: sha256,
+    engineVersion: result.engine,
+    result,
+    critical: criticalSpeeds(input.study, result),
+    flutterSpeedMps: result.flutter?.speed ?? null,
+  });
+  return { id, number };
+}
+
+/** Computes and appends revision 1 of a study created in the same transaction (study creation with a document). */
+export async function appendFirstRevision(tx: DbOrTx, user: { id: number }, studyId: number, study: StudyDocument) {
+  const { result, sha256 } = compute(study);
+  const inserted = await appendRevision(tx, user, studyId, { parentRevision: null, changeNote: "", study }, result, sha256);
+  return { ...inserted, sha256, engineVersion: result.engine };
+}
+
+export async function listStudyRevisions(db: Db, user: SessionUser, studyId: number): Promise<RevisionSummaryDto[]> {
+  await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "read");
+  return (await listRevisions(db, studyId)).map(toRevisionSummary);
+}
+
+export async function getRevision(db: Db, user: SessionUser, id: number): Promise<RevisionDto> {
+  return toRevisionDto(await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read"));
+}
+
+/** Field-by-field differences of two revisions' documents (each readable by the caller). */
+export async function diffRevisions(db: Db, user: SessionUser, a: number, b: number): Promise<RevisionDiffDto> {
+  const from = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, a), "read");
+  const to = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, b), "read");
+  return {
+    from: toRevisionSummary(from),
+    to: toRevisionSummary(to),
+    identical: from.documentSha256 === to.documentSha256,
+    changes: diffJson(from.document, to.document),
+  };
+}
+
+/**
+ * Re-runs a stored revision's document with the current engine as the study's next revision. The stored
+ * result is never touched; the new revision's change note names the engine (and the source revision when it
+ * is not the newest).
+ */
+export async function rerunRevision(db: Db, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
+  const source = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "write");
+  const note = `re-run with engine ${ENGINE_VERSION}` + (source.number < source.latestNumber ? ` (document of revision ${source.number})` : "");
+  return saveRevision(db, user, source.studyId, { parentRevision: source.latestNumber, changeNote: note, study: source.document }, ip, "rerun");
+}
+
+/** The document of a revision as a file: pretty JSON, and the canonical hash it was stored with. */
+export async function exportRevision(db: Db, user: SessionUser, id: number) {
+  const row = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read");
+  const slug = row.studyName.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "study";
+  return {
+    fileName: `${slug}-r${row.number}.study.json`,
+    text: `${JSON.stringify(row.document, null, 2)}\n`,
+    sha256: row.documentSha256,
+  };
+}
+
+/** Reads an uploaded study file (UTF-8 JSON) — 400 `invalid_file` with line and column when it is not JSON. */
+export function readStudyFile(bytes: Uint8Array, fileName: string): unknown {
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes).replace(/^\uFEFF/, "");
+  } catch {
+    throw new AppError(400, "invalid_file", `${fileName}: the file is not UTF-8 text. Nothing was stored.`, { details: [{ message: "not UTF-8" }] });
+  }
+  try {
+    return JSON.parse(text);
+  } catch (err) {
+    const message = err instanceof Error ? err.message : String(err);
+    const position = /position (\d+)/.exec(message);
+    let where = "";
+    const details: { row?: number; column?: string; message: string }[] = [{ message }];
+    if (position) {
+      const before = text.slice(0, Number(position[1]));
+      const line = before.split("\n").length;
+      const column = Number(position[1]) - before.lastIndexOf("\n");
+      where = ` at line ${line}, column ${column}`;
+      details[0] = { row: line, column: String(column), message };
+    }
+    throw new AppError(400, "invalid_file", `${fileName}: not valid JSON${where} (${message}). Nothing was stored.`, { details });
+  }
+}

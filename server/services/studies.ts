@@ -1,0 +1,77 @@
+import type { CreateStudy, PatchStudy, StudyDto } from "../../shared/schemas/studies.js";
+import type { Db } from "../db/client.js";
+import { writeAudit } from "../db/queries/audit.js";
+import { latestRevisionsOf, type RevisionSummaryRow } from "../db/queries/revisions.js";
+import { findStudy, insertStudy, listStudies, updateStudy, type StudyRow } from "../db/queries/studies.js";
+import { loadWithAccess, person } from "./access.js";
+import { loadAlternative } from "./alternatives.js";
+import type { SessionUser } from "./auth.js";
+import { appendFirstRevision, parseStudyOrThrow, toRevisionSummary } from "./revisions.js";
+
+function toStudyDto(row: StudyRow, latest: RevisionSummaryRow | undefined): StudyDto {
+  return {
+    id: String(row.id),
+    alternativeId: String(row.alternativeId),
+    alternativeName: row.alternativeName,
+    projectId: String(row.projectId),
+    name: row.name,
+    purpose: row.purpose,
+    revisionCount: row.revisionCount,
+    latestRevision: latest ? toRevisionSummary(latest) : null,
+    createdAt: row.createdAt.toISOString(),
+    createdBy: person(row.createdById, row.createdByName),
+  };
+}
+
+async function studyDto(db: Db, row: StudyRow): Promise<StudyDto> {
+  return toStudyDto(row, (await latestRevisionsOf(db, [row.id])).get(row.id));
+}
+
+export async function listAlternativeStudies(db: Db, user: SessionUser, alternativeId: number): Promise<StudyDto[]> {
+  await loadAlternative(db, user, alternativeId, "read");
+  const rows = await listStudies(db, alternativeId);
+  const latest = await latestRevisionsOf(db, rows.map((r) => r.id));
+  return rows.map((r) => toStudyDto(r, latest.get(r.id)));
+}
+
+export async function getStudy(db: Db, user: SessionUser, id: number): Promise<StudyDto> {
+  return studyDto(db, await loadWithAccess(db, user, "Study", () => findStudy(db, id), "read"));
+}
+
+/** Creates a study; with a document, revision 1 is computed and stored in the same transaction. */
+export async function createStudy(
+  db: Db,
+  user: SessionUser,
+  alternativeId: number,
+  input: Omit<CreateStudy, "study"> & { study?: unknown },
+  ip?: string,
+): Promise<StudyDto> {
+  await loadAlternative(db, user, alternativeId, "write");
+  const document = input.study === undefined ? undefined : parseStudyOrThrow(input.study);
+  const id = await db.transaction(async (tx) => {
+    const studyId = await insertStudy(tx, { alternativeId, name: input.name, purpose: input.purpose, createdBy: user.id });
+    await writeAudit(tx, { actorId: user.id, action: "study.create", objectType: "study", objectId: studyId, ip, details: { alternativeId, name: input.name } });
+    if (document) {
+      const first = await appendFirstRevision(tx, user, studyId, document);
+      await writeAudit(tx, {
+        actorId: user.id,
+        action: "revision.create",
+        objectType: "revision",
+        objectId: first.id,
+        ip,
+        details: { studyId, number: 1, parentNumber: null, documentSha256: first.sha256, engineVersion: first.engineVersion, source: "create" },
+      });
+    }
+    return studyId;
+  });
+  return studyDto(db, (await findStudy(db, id))!);
+}
+
+export async function patchStudy(db: Db, user: SessionUser, id: number, patch: PatchStudy, ip?: string): Promise<StudyDto> {
+  await loadWithAccess(db, user, "Study", () => findStudy(db, id), "write");
+  await db.transaction(async (tx) => {
+    await updateStudy(tx, id, patch);
+    await writeAudit(tx, { actorId: user.id, action: "study.update", objectType: "study", objectId: id, ip, details: { ...patch } });
+  });
+  return studyDto(db, (await findStudy(db, id))!);
+}
