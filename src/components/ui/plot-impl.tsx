@@ -12,7 +12,7 @@ const CONFIG = {
   displaylogo: false,
   responsive: true,
   scrollZoom: false,
-  modeBarButtonsToRemove: ["select2d", "lasso2d", "autoScale2d", "toggleSpikelines"],
+  modeBarButtonsToRemove: ["select2d", "lasso2d", "toggleSpikelines"],
   toImageButtonOptions: { format: "png", scale: 2 },
 };
 

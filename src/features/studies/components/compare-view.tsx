@@ -12,7 +12,7 @@ import { useComparison } from "@/features/studies/api/get-comparison";
 import { useCriteria } from "@/features/studies/api/get-criteria";
 import { useRevisionList } from "@/features/studies/api/get-revision";
 import { ResultPlots } from "@/features/studies/components/result-plots";
-import { criticalSpeedsOf } from "@/features/studies/components/result-summary";
+import { closedFormDivergence, criticalSpeedsOf } from "@/features/studies/components/result-summary";
 import { queryErrorPanel } from "@/features/studies/components/study-workspace";
 import { seriesColour } from "@/components/ui/plot-theme";
 import { WARNING_TITLES } from "@/features/studies/utils/warning-text";
@@ -77,12 +77,16 @@ export function CompareView({ projectId }: { projectId: string }) {
                       const index = selected.indexOf(point.revisionId);
                       return (
                         <li key={point.revisionId}>
-                          <label className="flex items-baseline gap-2 text-sm">
+                          <label className="grid grid-cols-[auto_minmax(0,1fr)] items-baseline gap-x-2 text-sm">
                             <input type="checkbox" checked={index >= 0} onChange={() => toggle(point.revisionId)}
                               aria-label={`${trend.alternativeName} ${trend.studyName} revision ${point.number}`} className="accent-tide-600" />
-                            <span className="num font-semibold" style={index >= 0 ? { color: seriesColour(index) } : undefined}>r{point.number}</span>
-                            <span className="num text-ink-700">{point.flutterSpeedMps !== null ? `${point.flutterSpeedMps.toFixed(1)} m/s` : "no flutter"}</span>
-                            <span className="truncate text-xs text-ink-600" title={point.changeNote}>{point.changeNote}</span>
+                            <span className="num whitespace-nowrap">
+                              <span className="font-semibold" style={index >= 0 ? { color: seriesColour(index) } : undefined}>r{point.number}</span>{" "}
+                              <span className="text-ink-700">{point.flutterSpeedMps !== null ? `${point.flutterSpeedMps.toFixed(1)} m/s` : "no flutter"}</span>
+                            </span>
+                            {point.changeNote ? (
+                              <span className="col-start-2 truncate text-xs text-ink-600" title={point.changeNote}>{point.changeNote}</span>
+                            ) : null}
                           </label>
                         </li>
                       );
@@ -121,7 +125,7 @@ function ComparisonTable({ revisions, comparison, required }: {
   required: Parameters<typeof computeMargins>[1] | null;
 }) {
   const columns = revisions.map((revision) => {
-    const margins = required ? computeMargins(criticalSpeedsOf(revision.result, revision.study.sweep.to), required) : null;
+    const margins = required ? computeMargins(criticalSpeedsOf(revision.result, revision.study), required) : null;
     return { revision, margins };
   });
   const rows: Array<{ label: string; cell: (c: (typeof columns)[number]) => React.ReactNode }> = [
@@ -129,7 +133,7 @@ function ComparisonTable({ revisions, comparison, required }: {
     { label: "Flutter frequency", cell: ({ revision: r }) => r.result.flutter ? `${r.result.flutter.frequency.toFixed(4)} Hz` : "—" },
     { label: "Reduced velocity", cell: ({ revision: r }) => r.result.flutter ? r.result.flutter.reducedVelocity.toFixed(2) : "—" },
     { label: "Kind", cell: ({ revision: r }) => r.result.flutter?.kind ?? "—" },
-    { label: "Divergence", cell: ({ revision: r }) => r.result.divergence ? `${r.result.divergence.speed.toFixed(1)} m/s` : "none in sweep" },
+    { label: "Divergence", cell: ({ revision: r }) => { const u = r.result.divergence?.speed ?? closedFormDivergence(r.study); return u !== null ? `${u.toFixed(1)} m/s${r.result.divergence ? "" : " (beyond sweep)"}` : "not possible"; } },
     { label: "Selberg estimate", cell: ({ revision: r }) => r.result.selberg !== null ? `${r.result.selberg.toFixed(1)} m/s` : "n/a" },
     { label: "Flutter margin", cell: ({ margins }) => <MarginCell margin={margins?.flutter ?? null} /> },
     { label: "Divergence margin", cell: ({ margins }) => <MarginCell margin={margins?.divergence ?? null} /> },

@@ -21,11 +21,12 @@ export function ProjectStudies({ projectId }: { projectId: string }) {
   const comparison = useComparison(projectId);
 
   return (
-    <div className="mt-4 grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_19rem]">
+    <div className="mt-4">
       <section aria-labelledby="alternatives-heading" className="space-y-4">
-        <div className="flex items-baseline justify-between gap-3">
+        <div className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
           <h2 id="alternatives-heading" className="text-lg font-semibold">Deck alternatives</h2>
-          <Link to={paths.app.compare.getHref(projectId)} className="text-sm font-semibold text-tide-700 hover:underline">Compare revisions →</Link>
+          <RequiredLine comparison={comparison.data} />
+          <Link to={paths.app.compare.getHref(projectId)} className="ml-auto text-sm font-semibold text-tide-700 hover:underline">Compare revisions →</Link>
         </div>
         {alternatives.isPending ? (
           <Card><LoadingBlock label="Loading the alternatives…" /></Card>
@@ -41,31 +42,21 @@ export function ProjectStudies({ projectId }: { projectId: string }) {
           ))
         )}
       </section>
-      <RequiredSpeeds comparison={comparison.data} isPending={comparison.isPending} />
     </div>
   );
 }
 
-function RequiredSpeeds({ comparison, isPending }: { comparison: ComparisonDto | undefined; isPending: boolean }) {
-  const criteria = comparison?.criteria ?? null;
+/** The required speeds the margins below are measured against (the design wind panel holds the detail). */
+function RequiredLine({ comparison }: { comparison: ComparisonDto | undefined }) {
+  if (!comparison) return null;
+  const criteria = comparison.criteria;
+  if (!criteria) return <p className="text-sm text-ink-600">No criteria yet: margins appear once the design wind is saved.</p>;
   return (
-    <Card title="Required speeds" subtitle="From the project's design wind at deck level">
-      {isPending ? (
-        <LoadingBlock label="Loading…" />
-      ) : criteria ? (
-        <dl className="grid grid-cols-[1fr_auto] gap-x-3 gap-y-1 text-[0.95rem]">
-          <dt className="text-ink-700">Design mean wind v<sub>m</sub></dt>
-          <dd className="num text-right font-semibold">{criteria.meanSpeedMps.toFixed(1)} m/s</dd>
-          <dt className="text-ink-700">Flutter</dt>
-          <dd className="num text-right font-semibold" data-testid="required-flutter">{criteria.requiredFlutterSpeedMps.toFixed(1)} m/s</dd>
-          <dt className="text-ink-700">Divergence</dt>
-          <dd className="num text-right font-semibold">{criteria.requiredDivergenceSpeedMps.toFixed(1)} m/s</dd>
-          <dt className="col-span-2 text-xs text-ink-600">Criteria version {criteria.version}</dt>
-        </dl>
-      ) : (
-        <p className="text-sm text-ink-700">No design wind saved yet; margins appear once the project's criteria are set.</p>
-      )}
-    </Card>
+    <p className="num text-sm text-ink-700" data-testid="margins-basis">
+      Margins against flutter <b className="text-ink-950">{criteria.requiredFlutterSpeedMps.toFixed(1)} m/s</b> and divergence{" "}
+      <b className="text-ink-950">{criteria.requiredDivergenceSpeedMps.toFixed(1)} m/s</b> (criteria v{criteria.version}, v<sub>m</sub>{" "}
+      {criteria.meanSpeedMps.toFixed(1)} m/s)
+    </p>
   );
 }
 
@@ -127,7 +118,7 @@ function AlternativeCard({ projectId, alternative, rows, comparisonError }: {
                       {critical ? (critical.flutter ? <span className="font-semibold">{critical.flutter.speedMps.toFixed(1)} m/s</span> : <span className="text-ink-700">&gt; {critical.sweepToMps.toFixed(0)} m/s</span>) : "—"}
                     </td>
                     <td className="num px-2 py-1.5 text-right whitespace-nowrap">
-                      {critical ? (critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : <span className="text-ink-700">&gt; {critical.sweepToMps.toFixed(0)} m/s</span>) : "—"}
+                      {critical ? (critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : <span className="text-ink-700" title={critical.divergenceNote ?? undefined}>not possible</span>) : "—"}
                     </td>
                     <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.flutter} /></td>
                     <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.divergence} /></td>

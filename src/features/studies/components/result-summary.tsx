@@ -1,13 +1,16 @@
 import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
 import type { SweepResult } from "@shared/schemas/result";
+import type { StudyDocument } from "@shared/schemas/study";
+import { createAeroModel } from "@shared/engine/aero/create-aero-model";
+import { divergenceSpeed } from "@shared/engine/divergence-speed";
 import { computeMargins, type CriticalSpeed, type Margin } from "@shared/criteria/margins";
 import { cn } from "@/lib/cn";
 import { explainWarning, WARNING_TITLES, warningSpeeds } from "@/features/studies/utils/warning-text";
 
 interface ResultSummaryProps {
   result: SweepResult;
-  /** Last speed of the sweep, m/s: "none found up to". */
-  sweepToMps: number;
+  /** The document the result was computed from. */
+  document: StudyDocument;
   criteria: ProjectCriteriaDto | null;
   showKmh: boolean;
 }
@@ -23,11 +26,33 @@ export function Speed({ mps, showKmh, digits = 1 }: { mps: number; showKmh: bool
   );
 }
 
-/** Critical speeds from a result as the margin bookkeeping reads them (none found → at least the sweep's end). */
-export function criticalSpeedsOf(result: SweepResult, sweepToMps: number): { flutter: CriticalSpeed; divergence: CriticalSpeed } {
+/**
+ * Torsional divergence from its closed form for the document (also beyond the sweep, which the result leaves
+ * out), or null when the static moment slope gives none.
+ */
+export function closedFormDivergence(document: StudyDocument): number | null {
+  try {
+    const torsion = document.structure.modes.find((m) => m.dof === "torsion");
+    const slope = createAeroModel(document.aerodynamics).staticMomentSlope;
+    if (!torsion || slope === null) return null;
+    return divergenceSpeed(document.structure.inertia, torsion.frequency, document.air.density, document.deck.width, slope);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Critical speeds as the margin bookkeeping reads them: flutter found, or none up to the sweep's end;
+ * divergence from its closed form (or impossible).
+ */
+export function criticalSpeedsOf(result: SweepResult, document: StudyDocument): { flutter: CriticalSpeed; divergence: CriticalSpeed } {
+  const divergence = result.divergence?.speed ?? closedFormDivergence(document);
   return {
-    flutter: result.flutter ? { kind: "speed", speedMps: result.flutter.speed } : { kind: "above", speedMps: sweepToMps },
-    divergence: result.divergence ? { kind: "speed", speedMps: result.divergence.speed } : { kind: "above", speedMps: sweepToMps },
+    flutter: result.flutter ? { kind: "speed", speedMps: result.flutter.speed } : { kind: "above", speedMps: document.sweep.to },
+    divergence:
+      divergence !== null
+        ? { kind: "speed", speedMps: divergence }
+        : { kind: "none", reason: "the static moment slope dC_M/dα is not positive." },
   };
 }
 
@@ -35,10 +60,12 @@ export function criticalSpeedsOf(result: SweepResult, sweepToMps: number): { flu
  * The result in words and numbers: flutter (speed, frequency, reduced velocity, kind), divergence, Selberg's
  * estimate, margins against the project's required speeds, and every warning explained with its speeds.
  */
-export function ResultSummary({ result, sweepToMps, criteria, showKmh }: ResultSummaryProps) {
+export function ResultSummary({ result, document, criteria, showKmh }: ResultSummaryProps) {
   const { flutter, divergence, selberg, warnings } = result;
+  const sweepToMps = document.sweep.to;
   const required = criteria?.evaluated?.required ?? null;
-  const margins = required ? computeMargins(criticalSpeedsOf(result, sweepToMps), required) : null;
+  const margins = required ? computeMargins(criticalSpeedsOf(result, document), required) : null;
+  const closedForm = divergence ? null : closedFormDivergence(document);
   return (
     <div className="space-y-3">
       <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-4">
@@ -60,6 +87,11 @@ export function ResultSummary({ result, sweepToMps, criteria, showKmh }: ResultS
           <dd className="text-lg font-semibold">
             {divergence ? <Speed mps={divergence.speed} showKmh={showKmh} /> : <span className="text-base text-ink-700">none in the sweep</span>}
           </dd>
+          {!divergence ? (
+            <dd className="text-xs text-ink-600">
+              {closedForm !== null ? <>closed form <Speed mps={closedForm} showKmh={showKmh} /></> : "not possible (dC_M/dα ≤ 0)"}
+            </dd>
+          ) : null}
         </div>
         <div>
           <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Selberg estimate</dt>

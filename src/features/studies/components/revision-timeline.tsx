@@ -39,7 +39,7 @@ export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, 
                   {critical.flutter ? `Flutter ${critical.flutter.speedMps.toFixed(2)} m/s` : `No flutter up to ${critical.sweepToMps.toFixed(0)} m/s`}
                 </span>
                 {critical.flutter ? <span className="text-ink-700"> · {critical.flutter.frequencyHz.toFixed(3)} Hz · {critical.flutter.kind}</span> : null}
-                <span className="text-ink-700"> · divergence {critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : "none in sweep"}</span>
+                <span className="text-ink-700" title={critical.divergenceNote ?? undefined}> · divergence {critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : "not possible"}</span>
               </p>
               {critical.warningCodes.length > 0 ? (
                 <p className="text-xs text-caution-700">

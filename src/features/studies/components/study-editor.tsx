@@ -22,6 +22,7 @@ import { StructureFields } from "@/features/studies/components/structure-fields"
 import { SweepFields } from "@/features/studies/components/sweep-fields";
 import { useSweepPreview } from "@/features/studies/hooks/use-sweep-preview";
 import type { CellError } from "@/features/studies/utils/derivative-grid";
+import { diffDocuments } from "@/features/studies/utils/document-diff";
 
 interface StudyEditorProps {
   projectId: string;
@@ -39,9 +40,8 @@ interface StudyEditorProps {
 interface ShownResult {
   result: SweepResult;
   /** The document it was computed from (to tell when the inputs have moved on). */
-  documentKey: string;
+  document: StudyDocument;
   source: string;
-  sweepToMps: number;
 }
 
 const keyOf = (value: unknown) => JSON.stringify(value);
@@ -63,9 +63,8 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
   const [showKmh, setShowKmh] = useState(false);
   const [shown, setShown] = useState<ShownResult>(() => ({
     result: revision.result,
-    documentKey: keyOf(revision.study),
+    document: revision.study,
     source: `Stored with revision ${revision.number}`,
-    sweepToMps: revision.study.sweep.to,
   }));
   const runSweep = useRunSweep();
 
@@ -79,7 +78,7 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
         ? null
         : "fix the marked inputs";
   const preview = useSweepPreview(readOnly ? null : document, valuesKey);
-  const resultIsStale = shown.documentKey !== keyOf(document ?? values);
+  const resultIsStale = useMemo(() => diffDocuments(shown.document, document ?? values).length > 0, [shown.document, valuesKey]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const onAerodynamics = (aero: StudyAerodynamics | null, errors: CellError[]) => {
     setGridErrors(errors);
@@ -92,9 +91,8 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
       onSuccess: (result) =>
         setShown({
           result,
-          documentKey: keyOf(document),
+          document,
           source: `Server run at ${formatDateTime(new Date().toISOString())} — not saved`,
-          sweepToMps: document.sweep.to,
         }),
     });
   };
@@ -192,7 +190,7 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
                 The inputs have changed since this result. Run the sweep to update it.
               </p>
             ) : null}
-            <ResultSummary result={shown.result} sweepToMps={shown.sweepToMps} criteria={criteria} showKmh={showKmh} />
+            <ResultSummary result={shown.result} document={shown.document} criteria={criteria} showKmh={showKmh} />
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
           <ResultPlots runs={[{ name: "Result", result: shown.result }]} dimmed={runSweep.isPending} />

@@ -71,7 +71,7 @@ export function polePathFigure(runs: readonly PlotRun[]): PlotFigure {
         name: runs.length > 1 ? `${run.name} · flutter` : "Flutter point",
         x: [0],
         y: [2 * Math.PI * flutter.frequency],
-        marker: { symbol: "x-thin-open", size: 14, line: { width: 2.5, color: token("--color-signal-600") } },
+        marker: { symbol: "x-thin-open", size: 14, color: token("--color-signal-600"), line: { width: 2.5, color: token("--color-signal-600") } },
         hovertemplate: `Flutter ${flutter.speed.toFixed(2)} m/s<br>f ${flutter.frequency.toFixed(4)} Hz<extra></extra>`,
       });
     }
@@ -105,7 +105,7 @@ function flutterAnnotations(runs: readonly PlotRun[]): Record<string, unknown>[]
   return runs.flatMap((run, r) =>
     run.result.flutter
       ? [{
-          x: run.result.flutter.speed, y: 1 - r * 0.08, xref: "x", yref: "paper", yanchor: "top", xanchor: "right",
+          x: run.result.flutter.speed, y: 1 - Math.floor(r / 2) * 0.09, xref: "x", yref: "paper", yanchor: "top", xanchor: r % 2 === 0 ? "right" : "left",
           text: `U<sub>F</sub> ${run.result.flutter.speed.toFixed(1)}${runs.length > 1 ? ` (${run.name})` : ""}`,
           showarrow: false, font: { size: 11, color: token("--color-signal-700") }, bgcolor: "rgba(252,252,250,0.85)",
         }]
@@ -155,8 +155,20 @@ export function frequencyFigure(runs: readonly PlotRun[]): PlotFigure {
 
 /** Damping ratio in % of critical against wind speed; the zero line — where flutter starts — drawn heavy. */
 export function dampingFigure(runs: readonly PlotRun[]): PlotFigure {
+  // Heave damping grows to tens of percent at high speed; the first view keeps the region around zero readable
+  // (the full curves are one "autoscale" click away).
+  let lo = 0;
+  let hi = 0;
+  for (const { result } of runs) for (const m of result.modes) for (const s of m.steps) {
+    lo = Math.min(lo, s.damping * 100);
+    hi = Math.max(hi, s.damping * 100);
+  }
+  const top = Math.min(hi, 12);
+  const bottom = Math.max(lo, -6);
+  const pad = (top - bottom) * 0.06 || 1;
   const figure = versusSpeed(runs, (s) => s.damping * 100, "Damping ratio ζ (%)", "ζ %{y:.2f} %", [
     { type: "line", xref: "paper", yref: "y", x0: 0, x1: 1, y0: 0, y1: 0, line: { color: token("--color-ink-900"), width: 1.6 } },
   ]);
+  (figure.layout.yaxis as Record<string, unknown>).range = [bottom - pad, top + pad];
   return figure;
 }
