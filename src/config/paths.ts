@@ -45,7 +45,8 @@ export const paths = {
     },
     admin: {
       path: "/admin",
-      getHref: () => "/admin",
+      /** `projectId`: the project whose members the page opens on. */
+      getHref: (projectId?: string) => (projectId ? `/admin?project=${encodeURIComponent(projectId)}` : "/admin"),
     },
   },
 } as const;
@@ -62,6 +63,9 @@ export const apiPaths = {
     list: "/api/projects",
     detail: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}`,
     members: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/members`,
+    member: (projectId: string, userId: string) =>
+      `/api/projects/${encodeURIComponent(projectId)}/members/${encodeURIComponent(userId)}`,
+    invitations: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/invitations`,
     alternatives: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/alternatives`,
     comparison: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/comparison`,
     criteria: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/criteria`,
@@ -82,6 +86,10 @@ export const apiPaths = {
     detail: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}`,
     diff: (fromId: string, toId: string) =>
       `/api/revisions/${encodeURIComponent(fromId)}/diff/${encodeURIComponent(toId)}`,
+  },
+  users: {
+    list: "/api/users",
+    detail: (userId: string) => `/api/users/${encodeURIComponent(userId)}`,
   },
   sweep: "/api/sweep",
   screening: "/api/screening",

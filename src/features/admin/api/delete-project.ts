@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { apiPaths } from "@/config/paths";
+import { api } from "@/lib/api-client";
+import { getUsersQueryOptions } from "@/features/admin/api/get-users";
+
+/** Deletes a project that holds no work yet; the server answers 409 (with counts) when it does. */
+export function deleteProject(projectId: string): Promise<void> {
+  return api.delete<void>(apiPaths.projects.detail(projectId));
+}
+
+export function useDeleteProject({ onSuccess }: { onSuccess?: () => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteProject,
+    onSuccess: async (_data, projectId) => {
+      queryClient.removeQueries({ queryKey: ["projects", "detail", projectId] });
+      queryClient.removeQueries({ queryKey: ["projects", "members", projectId] });
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: ["projects", "list"] }),
+        queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey }),
+      ]);
+      onSuccess?.();
+    },
+  });
+}
