@@ -1,0 +1,61 @@
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { describe, expect, it } from "vitest";
+import { sweepResultSchema } from "../../../shared/schemas/result";
+
+const root = path.resolve(__dirname, "../../..");
+const dir = mkdtempSync(path.join(tmpdir(), "stillspan-sweep-cli-"));
+
+function cli(...args: string[]) {
+  const run = spawnSync(process.execPath, ["--import", "tsx", path.join(root, "server/cli/sweep.ts"), ...args], {
+    cwd: root,
+    encoding: "utf8",
+  });
+  return { code: run.status, stdout: run.stdout, stderr: run.stderr };
+}
+
+/** Benchmark deck inputs of the domain guide §5 (IABSE TG 3.1), flat plate. */
+const study = {
+  format: "stillspan.study/1",
+  name: "Benchmark deck",
+  air: { density: 1.22 },
+  deck: { width: 31, depth: 3 },
+  structure: {
+    mass: 22740,
+    inertia: 2.47e6,
+    modes: [
+      { id: "V1", dof: "heave", frequency: 0.1, damping: 0.003 },
+      { id: "T1", dof: "torsion", frequency: 0.278, damping: 0.003 },
+    ],
+  },
+  aerodynamics: { model: "flat-plate" },
+  sweep: { from: 1, to: 150, step: 0.5 },
+};
+
+describe("npm run sweep (server/cli/sweep.ts)", () => {
+  it("prints the result JSON of a valid study, with --from/--to/--step overriding the sweep", () => {
+    const file = path.join(dir, "deck.json");
+    writeFileSync(file, JSON.stringify(study));
+    const run = cli(file, "--from", "60", "--to", "90", "--step", "2");
+    expect(run.code, run.stderr).toBe(0);
+    const result = sweepResultSchema.parse(JSON.parse(run.stdout));
+    expect(result.modes[0].steps.map((s) => s.speed)).toEqual(Array.from({ length: 16 }, (_, i) => 60 + 2 * i));
+    expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3); // domain guide §5, computed
+  });
+
+  it("rejects a bad file with one stderr line per field (JSON path and rule), exit code 2 and empty stdout", () => {
+    const bad = structuredClone(study) as Record<string, any>;
+    bad.structure.modes[1].frequency = -1;
+    bad.sweep.extra = true;
+    const file = path.join(dir, "bad.json");
+    writeFileSync(file, JSON.stringify(bad));
+    const run = cli(file, "--step", "0");
+    expect(run.code).toBe(2);
+    expect(run.stdout).toBe("");
+    expect(run.stderr).toContain("$.structure.modes[1].frequency: must be greater than 0");
+    expect(run.stderr).toContain("$.sweep.extra: is not a field of this format");
+    expect(run.stderr).toContain("$.sweep.step: must be greater than 0");
+  });
+});
