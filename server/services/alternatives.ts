@@ -1,5 +1,5 @@
 import type { AlternativeDto, CreateAlternative, PatchAlternative } from "../../shared/schemas/alternatives.js";
-import type { Db } from "../db/client.js";
+import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
   deleteAlternative,
@@ -43,21 +43,21 @@ export function toAlternativeDto(row: AlternativeRow): AlternativeDto {
 }
 
 /** The alternative once the caller may read or write it (404, then 403). */
-export function loadAlternative(db: Db, user: SessionUser, id: number, access: Access) {
+export function loadAlternative(db: DbOrTx, user: SessionUser, id: number, access: Access) {
   return loadWithAccess(db, user, "Alternative", () => findAlternative(db, id), access);
 }
 
-export async function listProjectAlternatives(db: Db, user: SessionUser, projectId: number): Promise<AlternativeDto[]> {
+export async function listProjectAlternatives(db: DbOrTx, user: SessionUser, projectId: number): Promise<AlternativeDto[]> {
   await assertRole(db, user, projectId, READ_ROLES);
   return (await listAlternatives(db, projectId)).map(toAlternativeDto);
 }
 
-export async function getAlternative(db: Db, user: SessionUser, id: number): Promise<AlternativeDto> {
+export async function getAlternative(db: DbOrTx, user: SessionUser, id: number): Promise<AlternativeDto> {
   return toAlternativeDto(await loadAlternative(db, user, id, "read"));
 }
 
 export async function createAlternative(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   projectId: number,
   input: CreateAlternative,
@@ -79,7 +79,7 @@ export async function createAlternative(
 }
 
 export async function patchAlternative(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   id: number,
   patch: PatchAlternative,
@@ -94,7 +94,7 @@ export async function patchAlternative(
 }
 
 /** Deletes an alternative and its data sets; refused (409) while it has studies, whose revisions are kept forever. */
-export async function removeAlternative(db: Db, user: SessionUser, id: number, ip?: string): Promise<void> {
+export async function removeAlternative(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<void> {
   const row = await loadAlternative(db, user, id, "write");
   if (row.studyCount > 0) {
     throw new AppError(409, "has_studies", `"${row.name}" has ${row.studyCount} stud${row.studyCount === 1 ? "y" : "ies"}; study revisions are kept for good, so it cannot be deleted.`);
@@ -114,7 +114,7 @@ export async function removeAlternative(db: Db, user: SessionUser, id: number, i
 
 /** Stores (or replaces) the cross-section image after checking its type by content type and magic bytes. */
 export async function setImage(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   id: number,
   file: { buffer: Buffer; mimetype: string; originalname: string },
@@ -138,7 +138,7 @@ export async function setImage(
   });
 }
 
-export async function removeImage(db: Db, user: SessionUser, id: number, ip?: string): Promise<void> {
+export async function removeImage(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<void> {
   const row = await loadAlternative(db, user, id, "write");
   if (!row.imageSha256) throw AppError.notFound("Image");
   await db.transaction(async (tx) => {
@@ -147,7 +147,7 @@ export async function removeImage(db: Db, user: SessionUser, id: number, ip?: st
   });
 }
 
-export async function getImage(db: Db, user: SessionUser, id: number): Promise<{ bytes: Buffer; contentType: string; sha256: string }> {
+export async function getImage(db: DbOrTx, user: SessionUser, id: number): Promise<{ bytes: Buffer; contentType: string; sha256: string }> {
   await loadAlternative(db, user, id, "read");
   const image = await findAlternativeImage(db, id);
   if (!image?.bytes || !image.contentType || !image.sha256) throw AppError.notFound("Image");

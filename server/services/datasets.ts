@@ -10,7 +10,7 @@ import {
   type UploadIssue,
 } from "../../shared/schemas/datasets.js";
 import { DERIVATIVE_NAMES } from "../../shared/schemas/study.js";
-import type { Db } from "../db/client.js";
+import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
   deleteDataset,
@@ -53,7 +53,7 @@ export function toDatasetDto(row: DatasetRow): DatasetDto {
   };
 }
 
-function loadDataset(db: Db, user: SessionUser, id: number, access: Access) {
+function loadDataset(db: DbOrTx, user: SessionUser, id: number, access: Access) {
   return loadWithAccess(db, user, "Data set", () => findDataset(db, id), access);
 }
 
@@ -137,7 +137,7 @@ function parseStatic(
 
 /** Validates, converts and stores an uploaded data set with its original file; nothing is written on rejection. */
 export async function uploadDataset(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   alternativeId: number,
   upload: { metaField: unknown; file: { buffer: Buffer; originalname: string } },
@@ -181,21 +181,21 @@ export async function uploadDataset(
   });
 }
 
-export async function listAlternativeDatasets(db: Db, user: SessionUser, alternativeId: number): Promise<DatasetDto[]> {
+export async function listAlternativeDatasets(db: DbOrTx, user: SessionUser, alternativeId: number): Promise<DatasetDto[]> {
   await loadAlternative(db, user, alternativeId, "read");
   return (await listDatasets(db, alternativeId)).map(toDatasetDto);
 }
 
-export async function getDataset(db: Db, user: SessionUser, id: number): Promise<DatasetDto> {
+export async function getDataset(db: DbOrTx, user: SessionUser, id: number): Promise<DatasetDto> {
   return toDatasetDto(await loadDataset(db, user, id, "read"));
 }
 
-export async function getDatasetFile(db: Db, user: SessionUser, id: number) {
+export async function getDatasetFile(db: DbOrTx, user: SessionUser, id: number) {
   await loadDataset(db, user, id, "read");
   return (await findDatasetFile(db, id))!;
 }
 
-export async function patchDataset(db: Db, user: SessionUser, id: number, patch: PatchDataset, ip?: string): Promise<DatasetDto> {
+export async function patchDataset(db: DbOrTx, user: SessionUser, id: number, patch: PatchDataset, ip?: string): Promise<DatasetDto> {
   await loadDataset(db, user, id, "write");
   return db.transaction(async (tx) => {
     await updateDataset(tx, id, patch);
@@ -204,7 +204,7 @@ export async function patchDataset(db: Db, user: SessionUser, id: number, patch:
   });
 }
 
-export async function removeDataset(db: Db, user: SessionUser, id: number, ip?: string): Promise<void> {
+export async function removeDataset(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<void> {
   const row = await loadDataset(db, user, id, "write");
   await db.transaction(async (tx) => {
     await deleteDataset(tx, id);

@@ -8,7 +8,7 @@ import type {
   StaleParentDetails,
 } from "../../shared/schemas/revisions.js";
 import { parseStudy, type StudyDocument } from "../../shared/schemas/study.js";
-import type { Db, DbOrTx } from "../db/client.js";
+import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
   findLatestRevision,
@@ -84,7 +84,7 @@ export interface SaveRevisionInput {
  * (study_id, number) key backs this up; numbers stay gap-free because a refused save inserts nothing.
  */
 export async function saveRevision(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   studyId: number,
   input: SaveRevisionInput,
@@ -181,17 +181,17 @@ export async function appendFirstRevision(tx: DbOrTx, user: { id: number }, stud
   return { ...inserted, sha256, engineVersion: result.engine };
 }
 
-export async function listStudyRevisions(db: Db, user: SessionUser, studyId: number): Promise<RevisionSummaryDto[]> {
+export async function listStudyRevisions(db: DbOrTx, user: SessionUser, studyId: number): Promise<RevisionSummaryDto[]> {
   await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "read");
   return (await listRevisions(db, studyId)).map(toRevisionSummary);
 }
 
-export async function getRevision(db: Db, user: SessionUser, id: number): Promise<RevisionDto> {
+export async function getRevision(db: DbOrTx, user: SessionUser, id: number): Promise<RevisionDto> {
   return toRevisionDto(await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read"));
 }
 
 /** Field-by-field differences of two revisions' documents (each readable by the caller). */
-export async function diffRevisions(db: Db, user: SessionUser, a: number, b: number): Promise<RevisionDiffDto> {
+export async function diffRevisions(db: DbOrTx, user: SessionUser, a: number, b: number): Promise<RevisionDiffDto> {
   const from = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, a), "read");
   const to = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, b), "read");
   return {
@@ -207,14 +207,14 @@ export async function diffRevisions(db: Db, user: SessionUser, a: number, b: num
  * result is never touched; the new revision's change note names the engine (and the source revision when it
  * is not the newest).
  */
-export async function rerunRevision(db: Db, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
+export async function rerunRevision(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
   const source = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "write");
   const note = `re-run with engine ${ENGINE_VERSION}` + (source.number < source.latestNumber ? ` (document of revision ${source.number})` : "");
   return saveRevision(db, user, source.studyId, { parentRevision: source.latestNumber, changeNote: note, study: source.document }, ip, "rerun");
 }
 
 /** The document of a revision as a file: pretty JSON, and the canonical hash it was stored with. */
-export async function exportRevision(db: Db, user: SessionUser, id: number) {
+export async function exportRevision(db: DbOrTx, user: SessionUser, id: number) {
   const row = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read");
   const slug = row.studyName.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "study";
   return {

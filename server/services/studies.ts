@@ -1,5 +1,5 @@
 import type { CreateStudy, PatchStudy, StudyDto } from "../../shared/schemas/studies.js";
-import type { Db } from "../db/client.js";
+import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { latestRevisionsOf, type RevisionSummaryRow } from "../db/queries/revisions.js";
 import { findStudy, insertStudy, listStudies, updateStudy, type StudyRow } from "../db/queries/studies.js";
@@ -23,24 +23,24 @@ function toStudyDto(row: StudyRow, latest: RevisionSummaryRow | undefined): Stud
   };
 }
 
-async function studyDto(db: Db, row: StudyRow): Promise<StudyDto> {
+async function studyDto(db: DbOrTx, row: StudyRow): Promise<StudyDto> {
   return toStudyDto(row, (await latestRevisionsOf(db, [row.id])).get(row.id));
 }
 
-export async function listAlternativeStudies(db: Db, user: SessionUser, alternativeId: number): Promise<StudyDto[]> {
+export async function listAlternativeStudies(db: DbOrTx, user: SessionUser, alternativeId: number): Promise<StudyDto[]> {
   await loadAlternative(db, user, alternativeId, "read");
   const rows = await listStudies(db, alternativeId);
   const latest = await latestRevisionsOf(db, rows.map((r) => r.id));
   return rows.map((r) => toStudyDto(r, latest.get(r.id)));
 }
 
-export async function getStudy(db: Db, user: SessionUser, id: number): Promise<StudyDto> {
+export async function getStudy(db: DbOrTx, user: SessionUser, id: number): Promise<StudyDto> {
   return studyDto(db, await loadWithAccess(db, user, "Study", () => findStudy(db, id), "read"));
 }
 
 /** Creates a study; with a document, revision 1 is computed and stored in the same transaction. */
 export async function createStudy(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   alternativeId: number,
   input: Omit<CreateStudy, "study"> & { study?: unknown },
@@ -67,7 +67,7 @@ export async function createStudy(
   return studyDto(db, (await findStudy(db, id))!);
 }
 
-export async function patchStudy(db: Db, user: SessionUser, id: number, patch: PatchStudy, ip?: string): Promise<StudyDto> {
+export async function patchStudy(db: DbOrTx, user: SessionUser, id: number, patch: PatchStudy, ip?: string): Promise<StudyDto> {
   await loadWithAccess(db, user, "Study", () => findStudy(db, id), "write");
   await db.transaction(async (tx) => {
     await updateStudy(tx, id, patch);

@@ -1,10 +1,12 @@
 import { demoAccounts } from "./accounts.js";
+import { demoAlternatives } from "./alternatives.js";
 import { demoCriteria } from "./criteria.js";
 import { demoProject } from "./projects.js";
+import { demoStudies } from "./studies.js";
 import type { SeedStep } from "./types.js";
 
 /**
  * The demo seed, in order. Later features append their own step files here (studies, revisions, signed
  * summaries); each step reads earlier ids through `ref(ctx, key)`.
  */
-export const DEMO_SEED_STEPS: SeedStep[] = [demoAccounts, demoProject, demoCriteria];
+export const DEMO_SEED_STEPS: SeedStep[] = [demoAccounts, demoProject, demoCriteria, demoAlternatives, demoStudies];
