@@ -1,6 +1,8 @@
+import { Link } from "react-router-dom";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
+import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useProjectMembers } from "@/features/projects/api/get-project-members";
 import { ProjectRoleBadge } from "@/features/projects/components/project-role-badge";
@@ -9,7 +11,17 @@ import { ProjectRoleBadge } from "@/features/projects/components/project-role-ba
 export function ProjectMembers({ projectId }: { projectId: string }) {
   const members = useProjectMembers(projectId);
   return (
-    <Card title="Members" subtitle={members.data ? `${members.data.length} people` : undefined} className="mt-4" flush>
+    <Card
+      title="Members"
+      subtitle={members.data ? `${members.data.length} people` : undefined}
+      actions={
+        <Link to={paths.app.admin.getHref(projectId)} className="text-sm text-tide-700 hover:underline">
+          Manage members and invitations
+        </Link>
+      }
+      className="mt-4"
+      flush
+    >
       {members.isPending ? (
         <LoadingBlock label="Loading the members…" />
       ) : members.isError ? (
