@@ -34,7 +34,9 @@ export const sweepStepSchema = z.object({
   participation: z
     .record(z.string(), z.number())
     .describe("Share of each structural mode in the eigenvector's kinetic energy, summing to 1"),
-  mac: z.number().describe("Mass-weighted MAC with the same branch's previous step, 0–1"),
+  mac: z
+    .number()
+    .describe("Mass-weighted MAC with the same branch's previous step (first speed: with its still-air mode), 0–1"),
   confidence: z.number().describe("Tracker confidence in the assignment, 0–1 (docs/method-and-validation.md)"),
 });
 
