@@ -3,15 +3,17 @@
  * revision of the same study has been signed; it also tells when later revisions exist that are not signed.
  * Viewers (owner's representatives) read the summaries of their projects and nothing else.
  */
+import type { ProjectCriteria } from "../../shared/schemas/criteria.js";
 import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
+import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
 import { findAlternative } from "../db/queries/alternatives.js";
 import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
 import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
-import { findRevision } from "../db/queries/revisions.js";
+import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignature, findSignatureByJws, insertSignature, listSignatures, type SignatureRow } from "../db/queries/signatures.js";
 import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
@@ -26,6 +28,59 @@ import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
 
 export const JWKS_PATH = "/.well-known/jwks.json";
+
+export interface RecordSignatureInput {
+  revision: RevisionRow;
+  /** The revision's review request (in review), set to signed. */
+  requestId: number;
+  projectName: string;
+  alternativeName: string;
+  criteria: { version: number; criteria: ProjectCriteria };
+  signer: { id: number; name: string; email: string };
+  signedAt: Date;
+  statement: string;
+  ip?: string;
+}
+
+/**
+ * Inside the caller's transaction: builds the summary of the stored revision, signs it, stores the signature
+ * (JWS, key id, payload, payload hash), marks the review signed, and records the history and audit events.
+ * Used by the sign route and by the demo seed. Returns the summary id.
+ */
+export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
+  const { revision, signer, signedAt } = input;
+  const payload = await buildSummaryPayload(tx, {
+    revision,
+    projectName: input.projectName,
+    alternativeName: input.alternativeName,
+    criteria: input.criteria.criteria,
+    signer: { name: signer.name, email: signer.email },
+    signedAt,
+    statement: input.statement,
+  });
+  const signed = await signStabilitySummary(config, payload);
+  const payloadSha256 = canonicalSha256Hex(signed.summary);
+  const id = await insertSignature(tx, {
+    revisionId: revision.id,
+    signerId: signer.id,
+    jws: signed.jws,
+    kid: signed.kid,
+    payload: signed.summary,
+    payloadSha256,
+    signedAt,
+  });
+  await decideReviewRequest(tx, input.requestId, "signed", signer.id, signedAt);
+  await insertReviewEvent(tx, { revisionId: revision.id, kind: "signed", actorId: signer.id, note: input.statement, at: signedAt });
+  await writeAudit(tx, {
+    actorId: signer.id,
+    action: "review.sign",
+    objectType: "revision",
+    objectId: revision.id,
+    ip: input.ip,
+    details: { summaryId: id, kid: signed.kid, criteriaVersion: input.criteria.version, payloadSha256 },
+  });
+  return id;
+}
 
 /**
  * POST /api/revisions/:id/sign — the reviewer's statement, the summary built from the stored revision, signed
@@ -66,36 +121,17 @@ export async function signRevision(
           `Revision ${revision.number} is ${request ? request.state : "a draft"}: only a revision in review can be signed.`,
         );
       }
-      const payload = await buildSummaryPayload(tx, {
+      return recordSignature(tx, config, {
         revision: full,
+        requestId: request.id,
         projectName: project.name,
         alternativeName: alternative.name,
-        criteria: criteria.criteria,
-        signer: { name: signer.name, email: signer.email },
+        criteria,
+        signer,
         signedAt,
         statement,
-      });
-      const signed = await signStabilitySummary(config, payload);
-      const id = await insertSignature(tx, {
-        revisionId,
-        signerId: user.id,
-        jws: signed.jws,
-        kid: signed.kid,
-        payload: signed.summary,
-        payloadSha256: canonicalSha256Hex(signed.summary),
-        signedAt,
-      });
-      await decideReviewRequest(tx, request.id, "signed", user.id, signedAt);
-      await insertReviewEvent(tx, { revisionId, kind: "signed", actorId: user.id, note: statement, at: signedAt });
-      await writeAudit(tx, {
-        actorId: user.id,
-        action: "review.sign",
-        objectType: "revision",
-        objectId: revisionId,
         ip,
-        details: { summaryId: id, kid: signed.kid, criteriaVersion: criteria.version, payloadSha256: canonicalSha256Hex(signed.summary) },
       });
-      return id;
     });
   } catch (err) {
     if (isUniqueViolation(err)) throw AppError.conflict(`Revision ${revision.number} is already signed.`);

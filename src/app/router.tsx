@@ -22,6 +22,16 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
       },
     },
     {
+      path: paths.auth.acceptInvite.path,
+      ErrorBoundary: RouteErrorBoundary,
+      lazy: async () => ({ Component: (await import("@/app/routes/accept-invite")).AcceptInviteRoute }),
+    },
+    {
+      path: paths.auth.resetPassword.path,
+      ErrorBoundary: RouteErrorBoundary,
+      lazy: async () => ({ Component: (await import("@/app/routes/reset-password")).ResetPasswordRoute }),
+    },
+    {
       path: paths.home.path,
       ErrorBoundary: RouteErrorBoundary,
       HydrateFallback: () => <LoadingBlock label="Loading Stillspan…" className="min-h-dvh" />,
@@ -83,6 +93,22 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: async () => {
             const { SignedSummariesRoute, clientLoader } = await import("@/app/routes/app/signed-summaries");
             return { Component: SignedSummariesRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.summary.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { SummaryRoute, clientLoader } = await import("@/app/routes/app/summary");
+            return { Component: SummaryRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.app.reviews.path,
+          ErrorBoundary: RouteErrorBoundary,
+          lazy: async () => {
+            const { ReviewsRoute, clientLoader } = await import("@/app/routes/app/reviews");
+            return { Component: ReviewsRoute, loader: clientLoader(queryClient) };
           },
         },
         {

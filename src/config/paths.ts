@@ -8,6 +8,14 @@ export const paths = {
     getHref: () => "/",
   },
   auth: {
+    acceptInvite: {
+      path: "/accept-invite",
+      getHref: (token?: string) => (token ? `/accept-invite?token=${encodeURIComponent(token)}` : "/accept-invite"),
+    },
+    resetPassword: {
+      path: "/reset-password",
+      getHref: (token?: string) => (token ? `/reset-password?token=${encodeURIComponent(token)}` : "/reset-password"),
+    },
     signIn: {
       path: "/sign-in",
       getHref: (redirectTo?: string | null) =>
@@ -42,6 +50,14 @@ export const paths = {
     signedSummaries: {
       path: "/signed-summaries",
       getHref: () => "/signed-summaries",
+    },
+    summary: {
+      path: "/summaries/:summaryId",
+      getHref: (summaryId: string) => `/summaries/${encodeURIComponent(summaryId)}`,
+    },
+    reviews: {
+      path: "/reviews",
+      getHref: () => "/reviews",
     },
     admin: {
       path: "/admin",
@@ -92,6 +108,28 @@ export const apiPaths = {
     detail: (userId: string) => `/api/users/${encodeURIComponent(userId)}`,
   },
   sweep: "/api/sweep",
+  review: {
+    queue: "/api/review-queue",
+    state: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/review`,
+    submit: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/submit`,
+    return: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/return`,
+    sign: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/sign`,
+    comments: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/comments`,
+  },
+  summaries: {
+    list: "/api/summaries",
+    detail: (summaryId: string) => `/api/summaries/${encodeURIComponent(summaryId)}`,
+    pdf: (summaryId: string) => `/api/summaries/${encodeURIComponent(summaryId)}/pdf`,
+  },
+  jwks: "/.well-known/jwks.json",
+  invitations: {
+    create: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/invitations`,
+    accept: "/api/invitations/accept",
+  },
+  passwordReset: {
+    request: "/api/auth/password-reset",
+    confirm: "/api/auth/password-reset/confirm",
+  },
   screening: "/api/screening",
 } as const;
 

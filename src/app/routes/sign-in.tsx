@@ -1,8 +1,8 @@
 import type { QueryClient } from "@tanstack/react-query";
-import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
+import { Link, redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { CautionsLine } from "@/components/ui/cautions";
 import { Wordmark } from "@/components/ui/logo";
-import { safeRedirectTarget } from "@/config/paths";
+import { paths, safeRedirectTarget } from "@/config/paths";
 import { getMeQueryOptions } from "@/features/auth/api/get-me";
 import { SignInFigure } from "@/features/auth/components/sign-in-figure";
 import { SignInForm } from "@/features/auth/components/sign-in-form";
@@ -44,6 +44,11 @@ export function SignInRoute() {
             <h1 className="mb-1 text-2xl font-semibold">Sign in</h1>
             <p className="mb-5 text-ink-700">Use the e-mail address your project administrator registered.</p>
             <SignInForm onSuccess={(user) => navigate(redirectTo ?? homeHref(user), { replace: true })} />
+            <p className="mt-4 text-sm">
+              <Link className="text-tide-700 underline-offset-2 hover:underline" to={paths.auth.resetPassword.getHref()}>
+                Forgot your password?
+              </Link>
+            </p>
           </div>
         </div>
         <footer className="border-t border-ink-200 px-6 py-2">

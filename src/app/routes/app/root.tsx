@@ -4,7 +4,7 @@ import { AppFrame, type NavItem } from "@/components/ui/app-frame";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
-import { canAdminister, canUseWorkspace, standingLabel } from "@/lib/authorization";
+import { canAdminister, canReadSignedSummaries, canUseWorkspace, standingLabel } from "@/lib/authorization";
 import type { User } from "@/types/api";
 import { useMe } from "@/features/auth/api/get-me";
 import { useSignOut } from "@/features/auth/api/sign-out";
@@ -19,14 +19,14 @@ export const clientLoader =
 
 /**
  * The sections a user may open. Analysts and reviewers work in projects (studies and comparison join them);
- * an owner's representative reads signed summaries only; administrators also manage accounts.
+ * an owner's representative reads signed summaries only; reviewers also have their review queue; administrators
+ * also manage accounts.
  */
 export function navigationFor(user: User): NavItem[] {
   const items: NavItem[] = [];
   if (canUseWorkspace(user)) items.push({ to: paths.app.projects.getHref(), label: "Projects" });
-  if (!canUseWorkspace(user) || user.isAdmin) {
-    items.push({ to: paths.app.signedSummaries.getHref(), label: "Signed summaries" });
-  }
+  if (user.memberships.some((m) => m.role === "reviewer")) items.push({ to: paths.app.reviews.getHref(), label: "Review queue" });
+  if (canReadSignedSummaries(user)) items.push({ to: paths.app.signedSummaries.getHref(), label: "Signed summaries" });
   if (canAdminister(user)) items.push({ to: paths.app.admin.getHref(), label: "Admin" });
   return items;
 }

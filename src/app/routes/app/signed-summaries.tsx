@@ -1,14 +1,17 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { LoaderFunctionArgs } from "react-router-dom";
-import { Card } from "@/components/ui/card";
+import { CautionsLine } from "@/components/ui/cautions";
 import { PageHeader } from "@/components/ui/page-header";
 import { canReadSignedSummaries } from "@/lib/authorization";
+import { getSummariesQueryOptions } from "@/features/summaries/api/get-summaries";
+import { SummariesTable } from "@/features/summaries/components/summaries-table";
 import { requireAccess } from "@/app/routes/guards";
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireAccess(queryClient, request, canReadSignedSummaries);
+    void queryClient.prefetchQuery(getSummariesQueryOptions());
     return null;
   };
 
@@ -17,14 +20,10 @@ export function SignedSummariesRoute() {
     <>
       <PageHeader
         title="Signed summaries"
-        description="Stability summaries signed by the project's reviewing engineer, for the projects you are invited to."
+        description="Stability summaries signed by the project's reviewing engineer, for the projects you are invited to. Each one is checked against the published keys when you open it."
       />
-      <Card title="Summaries" subtitle="None yet">
-        <p className="max-w-prose text-ink-700">
-          No summary has been signed yet. When a reviewer signs the stability summary of a study, it appears here
-          with its critical speeds, margins and the signature's details.
-        </p>
-      </Card>
+      <SummariesTable />
+      <CautionsLine className="mt-4" />
     </>
   );
 }

@@ -1,0 +1,105 @@
+import { asc, eq } from "drizzle-orm";
+import { runSweep } from "../../../shared/engine/run-sweep.js";
+import type { StudyDocument } from "../../../shared/schemas/study.js";
+import { canonicalSha256Hex } from "../../lib/hash.js";
+import { appendRevision } from "../../services/revisions.js";
+import { recordSignature } from "../../services/summaries.js";
+import { findAlternative } from "../queries/alternatives.js";
+import { findCurrentCriteria } from "../queries/criteria.js";
+import { insertReviewComment, insertReviewEvent, insertReviewRequest, findReviewRequest } from "../queries/review.js";
+import { findRevision, listRevisions } from "../queries/revisions.js";
+import { findUserById } from "../queries/users.js";
+import { alternatives, projects, studies } from "../schema/index.js";
+import { ref, type SeedStep } from "./types.js";
+
+/** Invented review texts of the demo (fictional people, fictional crossing). */
+const SIGNED_STATEMENT =
+  "Reviewed for the invented Harrowmere demo: the flutter derivatives' conversion to the study convention, the " +
+  "structural properties against the deck model, the speed sweep and the margins against the project's criteria. " +
+  "Stable with margin at this design stage; to be confirmed by section-model tests.";
+const SUBMIT_NOTE = "Second pass with the revised torsional damping — please review the margins.";
+
+/** The demo study: the first study (by id) of the demo crossing with at least one revision. */
+async function demoStudyId(ctx: Parameters<SeedStep["run"]>[0]): Promise<number | undefined> {
+  const rows = await ctx.tx
+    .select({ id: studies.id })
+    .from(studies)
+    .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))
+    .innerJoin(projects, eq(projects.id, alternatives.projectId))
+    .where(eq(projects.id, ref(ctx, "project:harrowmere")))
+    .orderBy(asc(studies.id));
+  for (const { id } of rows) if ((await listRevisions(ctx.tx, id)).length > 0) return id;
+  return undefined;
+}
+
+/**
+ * One signed revision of the demo study (signed by the demo reviewer, so the viewer sees a summary on first
+ * start) and one later revision in review assigned to the demo reviewer. Runs after the studies' steps; when the
+ * demo study has a single revision, the later one is computed here (a change of torsional damping). The signing
+ * key exists before the seed runs (server/main.ts, scripts/test.ts).
+ */
+export const demoReview: SeedStep = {
+  name: "demo review and signed summary",
+  async run(ctx) {
+    const { tx, config, log } = ctx;
+    const studyId = await demoStudyId(ctx);
+    if (studyId === undefined) {
+      log.warn("demo review: the demo crossing has no study with a revision yet; no summary seeded");
+      return;
+    }
+    const analystId = ref(ctx, "user:analyst");
+    const reviewerId = ref(ctx, "user:reviewer");
+    let revisions = await listRevisions(tx, studyId);
+    if (revisions.length === 1) {
+      const first = (await findRevision(tx, revisions[0].id))!;
+      const study: StudyDocument = structuredClone(first.document);
+      const torsion = study.structure.modes.find((m) => m.dof === "torsion")!;
+      torsion.damping = Math.round(torsion.damping * 0.8 * 1e6) / 1e6;
+      const result = runSweep(study);
+      await appendRevision(
+        tx,
+        { id: analystId },
+        studyId,
+        { parentRevision: first.number, changeNote: `Torsional damping ratio lowered to ${torsion.damping} (measured on the invented deck model)`, study },
+        result,
+        canonicalSha256Hex(study),
+      );
+      revisions = await listRevisions(tx, studyId);
+    }
+    const toSign = (await findRevision(tx, revisions[revisions.length - 2].id))!;
+    const inReview = revisions[revisions.length - 1];
+    const [criteria, alternative, reviewer] = await Promise.all([
+      findCurrentCriteria(tx, toSign.projectId),
+      findAlternative(tx, toSign.alternativeId),
+      findUserById(tx, reviewerId),
+    ]);
+    if (!criteria || !alternative || !reviewer) throw new Error("seed: demo review needs the criteria, the alternative and the reviewer");
+    const [{ name: projectName }] = await tx.select({ name: projects.name }).from(projects).where(eq(projects.id, toSign.projectId));
+
+    const signedAt = new Date();
+    const submittedAt = new Date(signedAt.getTime() - 26 * 3600_000);
+    await insertReviewRequest(tx, { revisionId: toSign.id, requestedBy: analystId, reviewerId, note: "First full sweep of the twin box." });
+    await insertReviewEvent(tx, { revisionId: toSign.id, kind: "submitted", actorId: analystId, reviewerId, note: "First full sweep of the twin box.", at: submittedAt });
+    await insertReviewComment(tx, {
+      revisionId: toSign.id,
+      authorId: reviewerId,
+      body: "Derivatives are within the tested range up to flutter; the extrapolation warning above it does not affect the critical speed.",
+    });
+    const request = (await findReviewRequest(tx, toSign.id))!;
+    const summaryId = await recordSignature(tx, config, {
+      revision: toSign,
+      requestId: request.id,
+      projectName,
+      alternativeName: alternative.name,
+      criteria,
+      signer: reviewer,
+      signedAt,
+      statement: SIGNED_STATEMENT,
+    });
+    ctx.refs.set("summary:demo", summaryId);
+
+    await insertReviewRequest(tx, { revisionId: inReview.id, requestedBy: analystId, reviewerId, note: SUBMIT_NOTE });
+    await insertReviewEvent(tx, { revisionId: inReview.id, kind: "submitted", actorId: analystId, reviewerId, note: SUBMIT_NOTE });
+    ctx.refs.set("revision:in-review", inReview.id);
+  },
+};

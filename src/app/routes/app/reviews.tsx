@@ -1,0 +1,27 @@
+import type { QueryClient } from "@tanstack/react-query";
+import type { LoaderFunctionArgs } from "react-router-dom";
+import { PageHeader } from "@/components/ui/page-header";
+import { CautionsLine } from "@/components/ui/cautions";
+import { canUseWorkspace } from "@/lib/authorization";
+import { ReviewQueue } from "@/features/review/components/review-queue";
+import { requireAccess } from "@/app/routes/guards";
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireAccess(queryClient, request, canUseWorkspace);
+    return null;
+  };
+
+export function ReviewsRoute() {
+  return (
+    <>
+      <PageHeader
+        title="Review queue"
+        description="Study revisions submitted to you. Sign the stability summary with your statement, or return the revision with comments."
+      />
+      <ReviewQueue />
+      <CautionsLine className="mt-4" />
+    </>
+  );
+}

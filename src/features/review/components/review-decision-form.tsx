@@ -1,0 +1,85 @@
+import { useState } from "react";
+import { Link } from "react-router-dom";
+import { Button } from "@/components/ui/button";
+import { TextAreaField } from "@/components/ui/textarea-field";
+import { paths } from "@/config/paths";
+import { useReturnRevision } from "@/features/review/api/return-revision";
+import { useSignRevision } from "@/features/review/api/sign-revision";
+
+/**
+ * A reviewer's decision on one revision: sign the stability summary with a statement, or return it with
+ * comments. Both texts are required by the server; the form says so before sending.
+ */
+export function ReviewDecisionForm({ revisionId, revisionNumber }: { revisionId: string; revisionNumber: number }) {
+  const [statement, setStatement] = useState("");
+  const [comments, setComments] = useState("");
+  const [problem, setProblem] = useState<string | null>(null);
+  const sign = useSignRevision(revisionId);
+  const ret = useReturnRevision(revisionId);
+  const busy = sign.isPending || ret.isPending;
+
+  if (sign.isSuccess) {
+    return (
+      <p role="status" className="rounded-md border border-steady-100 bg-steady-100 px-3 py-2 text-steady-700">
+        Revision {revisionNumber} is signed.{" "}
+        <Link className="font-semibold underline" to={paths.app.summary.getHref(sign.data.summaryId)}>
+          Open the signed summary
+        </Link>
+      </p>
+    );
+  }
+  if (ret.isSuccess) {
+    return (
+      <p role="status" className="rounded-md border border-ink-200 bg-ink-50 px-3 py-2 text-ink-700">
+        Revision {revisionNumber} was returned to the analyst with your comments.
+      </p>
+    );
+  }
+
+  const onSign = () => {
+    setProblem(null);
+    if (!statement.trim()) return setProblem("Write your statement before signing: it is signed with the summary.");
+    sign.mutate({ statement }, { onError: (e) => setProblem(e.message) });
+  };
+  const onReturn = () => {
+    setProblem(null);
+    if (!comments.trim()) return setProblem("Write what the analyst should change before returning the revision.");
+    ret.mutate({ comments }, { onError: (e) => setProblem(e.message) });
+  };
+
+  return (
+    <div className="grid gap-4 md:grid-cols-2">
+      <div className="space-y-2">
+        <TextAreaField
+          label="Reviewer's statement"
+          hint="Signed with the summary, word for word; the owner's representative reads it."
+          rows={4}
+          maxLength={4000}
+          value={statement}
+          onChange={(e) => setStatement(e.target.value)}
+        />
+        <Button variant="accent" onClick={onSign} isLoading={sign.isPending} disabled={busy}>
+          Sign the summary
+        </Button>
+      </div>
+      <div className="space-y-2">
+        <TextAreaField
+          label="Comments for the analyst"
+          hint="Returned unsigned; the analyst addresses them in a new revision."
+          rows={4}
+          maxLength={8000}
+          value={comments}
+          onChange={(e) => setComments(e.target.value)}
+        />
+        <Button variant="secondary" onClick={onReturn} isLoading={ret.isPending} disabled={busy}>
+          Return with comments
+        </Button>
+      </div>
+      {problem ? (
+        <p role="alert" className="text-sm font-semibold text-signal-700 md:col-span-2">
+          {problem}
+        </p>
+      ) : null}
+    </div>
+  );
+}
