@@ -47,9 +47,9 @@ export function runSweep(study: StudyDocument, options: SweepOptions = {}): Swee
   const modes = study.structure.modes;
   const ids = modes.map((m) => m.id);
   const share = new Float64Array(2);
-  const participationOf = (s: TrackedStep) => {
+  const participationOf = (s: TrackedStep): Record<string, number> => {
     kineticParticipation(2, system.mass, s.vecRe, s.vecIm, share);
-    return Object.fromEntries(ids.map((id, i) => [id, share[i]]));
+    return { [ids[0]]: share[0], [ids[1]]: share[1] };
   };
 
   const critical = locateFlutter(system, track);

@@ -12,6 +12,10 @@
  */
 export function optimalAssignment(cost: Float64Array, n: number, m: number): Int32Array {
   if (m < n) throw new Error(`optimalAssignment: need at least as many columns (${m}) as rows (${n})`);
+  if (n === 2 && m === 2) {
+    // the two possible assignments, compared directly (the tracker's 2-mode hot path)
+    return cost[0] + cost[3] <= cost[1] + cost[2] ? Int32Array.of(0, 1) : Int32Array.of(1, 0);
+  }
   const u = new Float64Array(n + 1);
   const v = new Float64Array(m + 1);
   const p = new Int32Array(m + 1); // p[col] = row assigned (1-based), 0 = free
