@@ -18,13 +18,30 @@ import {
   type TabulatedAerodynamics,
 } from "@/features/studies/utils/derivative-grid";
 
-type Choice = "flat-plate" | "quasi-steady" | "tabulated";
+type Choice = "flat-plate" | "quasi-steady" | "dataset" | "tabulated";
 
 const CHOICES: Array<{ value: Choice; label: string; hint: string }> = [
-  { value: "tabulated", label: "Measured table", hint: "Flutter derivatives from section-model tests" },
   { value: "flat-plate", label: "Thin plate", hint: "Theodorsen's flat plate; a first estimate" },
   { value: "quasi-steady", label: "Quasi-steady", hint: "From static coefficient slopes; not for flutter" },
+  { value: "dataset", label: "Data set", hint: "Derivatives from one of the alternative's uploaded test data sets" },
+  { value: "tabulated", label: "Own table", hint: "Flutter derivatives typed, pasted or loaded from a CSV file" },
 ];
+
+type DerivativeSet = DatasetDto & { converted: { reducedVelocity: number[] } & Record<"H1" | "H2" | "H3" | "H4" | "A1" | "A2" | "A3" | "A4", number[]> };
+
+const isDerivativeSet = (d: DatasetDto): d is DerivativeSet => d.kind === "flutter-derivatives" && "reducedVelocity" in d.converted;
+
+/** The data set whose converted table the block holds, if any (the study format stores the numbers, not a link). */
+function matchingDataset(value: StudyAerodynamics, sets: readonly DerivativeSet[]): DerivativeSet | null {
+  if (value.model !== "tabulated") return null;
+  const zeros = value.reducedVelocity.map(() => 0);
+  const same = (a: readonly number[] | undefined, b: readonly number[]) => {
+    const column = a ?? zeros;
+    return column.length === b.length && b.every((x, i) => column[i] === x);
+  };
+  return sets.find((d) => same(value.reducedVelocity, d.converted.reducedVelocity) &&
+    (["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const).every((n) => same(value[n], d.converted[n]))) ?? null;
+}
 
 const DEFAULT_QS = { model: "quasi-steady", liftSlope: 2 * Math.PI, dragCoefficient: 0, momentSlope: Math.PI / 2 } as const;
 
@@ -54,6 +71,12 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
   const [importMessage, setImportMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
   const [convention, setConvention] = useState<DerivativeConvention>({ abscissa: "Ur", normalisation: "B", sign: "h-down" });
   const fileInput = useRef<HTMLInputElement>(null);
+  const derivativeSets = useMemo(() => datasets.filter(isDerivativeSet), [datasets]);
+  const staticSets = useMemo(() => datasets.filter((d) => d.kind === "static-coefficients" && d.slopes), [datasets]);
+  const [choice, setChoice] = useState<Choice>(() =>
+    value.model === "tabulated" ? (matchingDataset(value, derivativeSets) ? "dataset" : "tabulated") : value.model,
+  );
+  const activeSet = choice === "dataset" ? matchingDataset(value, derivativeSets) : null;
 
   const gridParse = useMemo(() => parseGrid(rows), [rows]);
   const gridErrors = gridParse.ok ? [] : gridParse.errors;
@@ -68,11 +91,15 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
     }
   };
 
-  const choose = (choice: Choice) => {
-    if (choice === value.model) return;
-    if (choice === "flat-plate") onChange({ model: "flat-plate" }, []);
-    else if (choice === "quasi-steady") onChange({ ...DEFAULT_QS }, []);
-    else emitTable(rows);
+  const choose = (next: Choice) => {
+    if (next === choice) return;
+    setChoice(next);
+    if (next === "flat-plate") onChange({ model: "flat-plate" }, []);
+    else if (next === "quasi-steady") onChange(value.model === "quasi-steady" ? value : { ...DEFAULT_QS }, []);
+    else if (next === "dataset") {
+      if (derivativeSets[0]) copyDataset(derivativeSets[0].id);
+      else onChange(null, [{ row: 0, column: null, message: "This alternative has no flutter-derivative data set yet." }]);
+    } else emitTable(rows);
   };
 
   const editRows = (next: GridRow[]) => {
@@ -113,18 +140,18 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
     loadCsv(await file.text(), file.name);
   };
 
-  const copyDataset = (datasetId: string) => {
-    const dataset = datasets.find((d) => d.id === datasetId);
-    if (!dataset || !("reducedVelocity" in dataset.converted)) return;
+  function copyDataset(datasetId: string) {
+    const dataset = derivativeSets.find((d) => d.id === datasetId);
+    if (!dataset) return;
     const converted = dataset.converted;
     const table: TabulatedAerodynamics = { model: "tabulated", interpolation, reducedVelocity: converted.reducedVelocity };
     for (const name of ["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const) table[name] = converted[name];
     const next = gridFromTable(table);
     setRows(next);
     setRowNotes([]);
-    setImportMessage({ tone: "info", text: `Copied from data set “${dataset.name}” (already in the study convention).` });
+    setImportMessage(null);
     emitTable(next, interpolation, []);
-  };
+  }
 
   const figure = useMemo(() => {
     try {
@@ -135,62 +162,60 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
     }
   }, [value, gridParse, interpolation]);
 
-  const flutterSets = datasets.filter((d) => d.kind === "flutter-derivatives");
-
   return (
     <div className="space-y-3">
       <fieldset>
         <legend className="mb-1 text-sm font-semibold text-ink-800">Model</legend>
-        <div className="grid grid-cols-3 gap-1 rounded-md bg-ink-50 p-1" role="radiogroup" aria-label="Aerodynamic model">
-          {CHOICES.map((choice) => {
-            const checked = value.model === choice.value;
+        <div className="grid grid-cols-2 gap-1 rounded-md bg-ink-50 p-1 sm:grid-cols-4" role="radiogroup" aria-label="Aerodynamic model">
+          {CHOICES.map((option) => {
+            const checked = choice === option.value;
             return (
               <label
-                key={choice.value}
+                key={option.value}
                 className={cn(
                   "cursor-pointer rounded-sm px-2 py-1 text-center text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-tide-600",
                   checked ? "bg-surface font-semibold text-ink-950 shadow-panel" : "text-ink-700 hover:bg-ink-100",
                   readOnly && !checked && "opacity-60",
                 )}
-                title={choice.hint}
+                title={option.hint}
               >
                 <input
                   type="radio"
                   name={`${groupId}-model`}
-                  value={choice.value}
+                  value={option.value}
                   checked={checked}
                   disabled={readOnly}
-                  onChange={() => choose(choice.value)}
+                  onChange={() => choose(option.value)}
                   className="sr-only"
                 />
-                {choice.label}
+                {option.label}
               </label>
             );
           })}
         </div>
       </fieldset>
 
-      {value.model === "quasi-steady" ? (
-        <QuasiSteadyFields value={value} readOnly={readOnly} onChange={(next) => onChange(next, [])} />
+      {choice === "quasi-steady" && value.model === "quasi-steady" ? (
+        <QuasiSteadyFields value={value} readOnly={readOnly} onChange={(next) => onChange(next, [])}
+          staticSets={staticSets} />
       ) : null}
-      {value.model === "flat-plate" ? (
+      {choice === "dataset" ? (
+        <DatasetPicker sets={derivativeSets} active={activeSet} readOnly={readOnly} onPick={copyDataset} />
+      ) : null}
+      {choice === "flat-plate" ? (
         <p className="text-sm text-ink-700">
           Theodorsen's thin plate in the study convention (no inputs). Bluff decks usually flutter lower: use it as a
           first estimate until section-model derivatives exist.
         </p>
       ) : null}
 
-      {value.model === "tabulated" || (value.model !== "flat-plate" && value.model !== "quasi-steady") ? (
+      {choice === "tabulated" ? (
         <div className="space-y-2">
           {!readOnly ? (
             <div className="flex flex-wrap items-end gap-2 text-sm">
               <SelectField label="Interpolation" value={interpolation}
                 onChange={(v) => { setInterpolation(v as typeof interpolation); emitTable(rows, v as typeof interpolation); }}
                 options={[["monotone-cubic", "Monotone cubic"], ["linear", "Linear"]]} />
-              {flutterSets.length > 0 ? (
-                <SelectField label="Copy from data set" value="" onChange={copyDataset}
-                  options={[["", "Choose…"], ...flutterSets.map((d) => [d.id, d.name] as [string, string])]} />
-              ) : null}
             </div>
           ) : (
             <p className="text-sm text-ink-700">Interpolation: {interpolation === "linear" ? "linear" : "monotone cubic"}</p>
@@ -243,6 +268,37 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
   );
 }
 
+function DatasetPicker({ sets, active, readOnly, onPick }: {
+  sets: readonly DerivativeSet[]; active: DerivativeSet | null; readOnly: boolean; onPick: (id: string) => void;
+}) {
+  if (sets.length === 0) {
+    return <p className="text-sm text-caution-700">This alternative has no flutter-derivative data set yet. Upload one on the project page, or type your own table.</p>;
+  }
+  return (
+    <div className="space-y-2">
+      {readOnly ? null : (
+        <SelectField label="Data set" value={active?.id ?? ""} onChange={onPick}
+          options={[...(active ? [] : [["", "Choose…"] as [string, string]]), ...sets.map((d) => [d.id, d.name] as [string, string])]} />
+      )}
+      {active ? (
+        <dl className="grid grid-cols-[auto_1fr] gap-x-3 text-sm">
+          <dt className="text-ink-600">Set</dt><dd className="font-semibold">{active.name}</dd>
+          <dt className="text-ink-600">Tested</dt>
+          <dd className="num">Ur {active.testedRange.min}–{active.testedRange.max} · {active.provenance.flow} flow{active.provenance.facility ? ` · ${active.provenance.facility}` : ""}{active.provenance.modelScale ? ` · 1:${active.provenance.modelScale}` : ""}</dd>
+          <dt className="text-ink-600">Delivered as</dt>
+          <dd>{active.convention ? `${active.convention.abscissa}, forces on ${active.convention.normalisation}, heave ${active.convention.sign === "h-down" ? "down" : "up"}` : "—"}; converted to the study convention</dd>
+          <dt className="text-ink-600">File</dt><dd className="truncate font-mono text-xs leading-5" title={active.file.sha256}>{active.file.name}</dd>
+        </dl>
+      ) : (
+        <p className="text-sm text-ink-700">The study's table differs from every data set; pick one to copy its derivatives in.</p>
+      )}
+      {active?.warnings.length ? (
+        <ul className="text-sm text-caution-700">{active.warnings.map((w, i) => <li key={i}>{w.column ? `${w.column}: ` : ""}{w.message}</li>)}</ul>
+      ) : null}
+    </div>
+  );
+}
+
 function SelectField({ label, value, options, onChange }: {
   label: string; value: string; options: ReadonlyArray<readonly [string, string]>; onChange: (value: string) => void;
 }) {
@@ -258,19 +314,33 @@ function SelectField({ label, value, options, onChange }: {
   );
 }
 
-function QuasiSteadyFields({ value, readOnly, onChange }: {
+function QuasiSteadyFields({ value, readOnly, onChange, staticSets }: {
   value: Extract<StudyAerodynamics, { model: "quasi-steady" }>; readOnly: boolean; onChange: (v: StudyAerodynamics) => void;
+  staticSets: readonly DatasetDto[];
 }) {
   const fields = [
     ["liftSlope", "Lift slope dC_L/dα", "1/rad"],
     ["dragCoefficient", "Drag coefficient C_D (on B)", "–"],
     ["momentSlope", "Moment slope dC_M/dα", "1/rad"],
   ] as const;
+  // Filling from a data set replaces the typed texts: a new generation remounts the inputs.
+  const [generation, setGeneration] = useState(0);
+  const fill = (id: string) => {
+    const slopes = staticSets.find((d) => d.id === id)?.slopes;
+    if (slopes) {
+      setGeneration((g) => g + 1);
+      onChange({ model: "quasi-steady", liftSlope: slopes.liftSlopePerRad, dragCoefficient: Math.max(0, slopes.dragCoefficientOnB), momentSlope: slopes.momentSlopePerRad });
+    }
+  };
   return (
     <div className="space-y-2">
+      {!readOnly && staticSets.length > 0 ? (
+        <SelectField label="Fill from a static-coefficient data set (slopes at 0°)" value="" onChange={fill}
+          options={[["", "Choose…"], ...staticSets.map((d) => [d.id, d.name] as [string, string])]} />
+      ) : null}
       <div className="grid grid-cols-3 gap-2">
         {fields.map(([key, label, unit]) => (
-          <NumberInput key={key} label={label} unit={unit} value={value[key]} readOnly={readOnly}
+          <NumberInput key={`${key}-${generation}`} label={label} unit={unit} value={value[key]} readOnly={readOnly}
             onChange={(n) => onChange({ ...value, [key]: n })} />
         ))}
       </div>
@@ -289,11 +359,19 @@ function NumberInput({ label, unit, value, readOnly, onChange }: {
   const [text, setText] = useState(String(Number(value.toPrecision(6))));
   const parsed = Number(text);
   const invalid = text.trim() === "" || !Number.isFinite(parsed);
+  if (readOnly) {
+    return (
+      <div>
+        <span className="block text-sm font-semibold text-ink-700">{label}</span>
+        <span className="num block">{text} <span className="text-sm text-ink-600">{unit}</span></span>
+      </div>
+    );
+  }
   return (
     <div className="space-y-0.5">
       <label htmlFor={id} className="block text-sm font-semibold text-ink-800">{label}</label>
       <div className="relative">
-        <input id={id} value={text} readOnly={readOnly} inputMode="decimal" aria-invalid={invalid || undefined}
+        <input id={id} value={text} inputMode="decimal" aria-invalid={invalid || undefined}
           onChange={(e) => { setText(e.target.value); const n = Number(e.target.value); if (e.target.value.trim() !== "" && Number.isFinite(n)) onChange(n); }}
           className={cn("num h-8 w-full rounded-md border bg-white px-2 pr-10 text-right", invalid ? "border-signal-600" : "border-ink-300")} />
         <span className="pointer-events-none absolute inset-y-0 right-2 flex items-center text-xs text-ink-600">{unit}</span>

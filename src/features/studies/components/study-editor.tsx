@@ -23,6 +23,7 @@ import { SweepFields } from "@/features/studies/components/sweep-fields";
 import { useSweepPreview } from "@/features/studies/hooks/use-sweep-preview";
 import type { CellError } from "@/features/studies/utils/derivative-grid";
 import { diffDocuments } from "@/features/studies/utils/document-diff";
+import { StudyChecks } from "@/features/criteria/components/study-checks";
 
 interface StudyEditorProps {
   projectId: string;
@@ -185,14 +186,15 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
             subtitle={<span data-testid="result-source">{shown.source}</span>}
             aria-busy={runSweep.isPending || undefined}
           >
-            {resultIsStale && !readOnly ? (
-              <p className="mb-2 rounded-sm bg-caution-100 px-2 py-1 text-sm text-caution-700">
-                The inputs have changed since this result. Run the sweep to update it.
+            {!readOnly ? (
+              <p className={resultIsStale ? "mb-2 rounded-sm bg-caution-100 px-2 py-1 text-sm text-caution-700" : "mb-2 rounded-sm bg-ink-50 px-2 py-1 text-sm text-ink-700"}>
+                {resultIsStale ? "The inputs have changed since this result. Run the sweep to update it." : "This result belongs to the inputs as they are now."}
               </p>
             ) : null}
             <ResultSummary result={shown.result} document={shown.document} criteria={criteria} showKmh={showKmh} />
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
+          <StudyChecks projectId={projectId} study={shown.document} result={shown.result} />
           <ResultPlots runs={[{ name: "Result", result: shown.result }]} dimmed={runSweep.isPending} />
         </div>
       </div>

@@ -86,18 +86,18 @@ export function aeroFigure(aerodynamics: StudyAerodynamics): PlotFigure {
       text: `${name}*`,
       xref: `${xaxis} domain`,
       yref: `${yaxis} domain`,
-      x: 0.03,
-      y: 0.97,
+      x: 0,
+      y: 1,
       xanchor: "left",
-      yanchor: "top",
+      yanchor: "bottom",
       showarrow: false,
       font: { size: 12, color: token("--color-ink-900") },
     });
   });
 
   const layout: Record<string, unknown> = baseLayout({
-    grid: { rows: 2, columns: 4, pattern: "independent", xgap: 0.12, ygap: 0.22 },
-    margin: { l: 36, r: 8, t: 6, b: 30 },
+    grid: { rows: 2, columns: 4, pattern: "independent", xgap: 0.14, ygap: 0.3 },
+    margin: { l: 36, r: 8, t: 18, b: 30 },
     shapes,
     annotations,
     hovermode: "closest",
