@@ -1,0 +1,39 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { ProjectCriteria, ProjectCriteriaDto } from "@shared/schemas/criteria";
+import { apiPaths } from "@/config/paths";
+import { api } from "@/lib/api-client";
+import { getCriteriaHistoryQueryOptions } from "@/features/criteria/api/get-criteria-history";
+import { getCriteriaQueryOptions } from "@/features/criteria/api/get-criteria";
+
+export interface UpdateCriteriaInput {
+  criteria: ProjectCriteria;
+  /** The version the edit started from (null: none saved yet); a newer saved version answers 409. */
+  baseVersion: number | null;
+}
+
+/** Saves the criteria as the project's next version. */
+export function updateCriteria(projectId: string, input: UpdateCriteriaInput): Promise<ProjectCriteriaDto> {
+  return api.put<ProjectCriteriaDto>(apiPaths.projects.criteria(projectId), {
+    criteria: input.criteria,
+    baseVersion: input.baseVersion,
+  });
+}
+
+/**
+ * On success the answer becomes the cached current version; the history and everything else keyed under
+ * `['criteria']` (screenings read the required speeds) is refetched.
+ */
+export function useUpdateCriteria(projectId: string, options: { onSuccess?: (saved: ProjectCriteriaDto) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdateCriteriaInput) => updateCriteria(projectId, input),
+    onSuccess: async (saved) => {
+      queryClient.setQueryData(getCriteriaQueryOptions(projectId).queryKey, saved);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: getCriteriaHistoryQueryOptions(projectId).queryKey }),
+        queryClient.invalidateQueries({ queryKey: ["criteria", "screening"] }),
+      ]);
+      options.onSuccess?.(saved);
+    },
+  });
+}

@@ -1,0 +1,284 @@
+/**
+ * The design wind and acceptance criteria in the browser: the project page shows v_m at deck level and the
+ * required speeds; an analyst edits the basic wind speed and sees v_m follow, saves, and meets a stale-version
+ * conflict with a way to reload; a reviewer reads without an editor.
+ *
+ * Expected numbers come from shared/criteria (the module the server uses) applied to what GET returns, and the
+ * headline one also from EN 1991-1-4:2005 Expr. (4.3)–(4.5) written out by hand.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
+import { screenStudy } from "../../shared/criteria/screen-study.js";
+import { sweepMargins } from "../../shared/criteria/sweep-margins.js";
+import type { SweepResult } from "../../shared/schemas/result.js";
+import inventedStudy from "../../shared/schemas/__tests__/fixtures/invented-deck-study.json";
+import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
+import { PHENOMENA, type ProjectCriteria, type ProjectCriteriaDto } from "../../shared/schemas/criteria.js";
+import { createProjectWithMembers, openTestDb } from "../support/db.js";
+import { DEMO_PASSWORD } from "../support/http.js";
+import { launchBrowser, type BrowserSession } from "../support/browser.js";
+
+const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
+const db = openTestDb();
+let analyst: BrowserSession;
+let ownProjectId: string;
+const problems: string[] = [];
+
+function watchProblems(session: BrowserSession, who: string) {
+  session.page.on("pageerror", (error) => problems.push(`${who} uncaught: ${error.message}`));
+  session.page.on("console", (message) => {
+    const expectedRefusal = /Failed to load resource: the server responded with a status of 40[149]/;
+    if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
+      problems.push(`${who} ${message.type()}: ${message.text()}`);
+    }
+  });
+}
+
+async function signIn(session: BrowserSession, email: string) {
+  const { page } = session;
+  // Open a page of the app first (as a visitor would): the guard sends the browser to the sign-in page.
+  await page.goto(session.url("/projects"));
+  await page.waitForURL((url) => url.pathname === "/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => url.pathname !== "/sign-in");
+}
+
+/** A JSON request from inside the page, with the page's session (as another tab of the same user would). */
+async function pageApi<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
+  return page.evaluate(
+    async ({ method, path, body }) => {
+      const res = await fetch(path, {
+        method,
+        headers: body === undefined ? {} : { "Content-Type": "application/json" },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
+      return { status: res.status, body: await res.json() };
+    },
+    { method, path, body },
+  );
+}
+
+const mps = (value: number) => `${value.toFixed(2)} m/s`;
+const panel = (page: Page) => page.getByRole("region", { name: "Design wind and acceptance criteria" });
+
+const ownCriteria = (basicSpeed: number): ProjectCriteria => ({
+  wind: {
+    basicSpeed,
+    probability: { kind: "return-period", years: 100 },
+    terrain: { kind: "category", category: "II" },
+    deckHeight: 60,
+    orographyFactor: 1,
+  },
+  requirements: structuredClone(DEFAULT_REQUIREMENTS),
+});
+
+beforeAll(async () => {
+  const suffix = Date.now().toString(36);
+  ownProjectId = String(
+    await createProjectWithMembers(db, `Criteria browser crossing ${suffix}`, {
+      "analyst@stillspan.test": "analyst",
+      "reviewer@stillspan.test": "reviewer",
+    }),
+  );
+  analyst = await launchBrowser();
+  watchProblems(analyst, "analyst");
+  await signIn(analyst, "analyst@stillspan.test");
+});
+
+afterAll(async () => {
+  await analyst?.close();
+  await db.$client.end();
+});
+
+describe("design wind and criteria on the project page", () => {
+  it("the demo crossing's page shows v_m at deck level, its factors and every required speed of the seeded criteria", async () => {
+    const { page } = analyst;
+    await page.goto(analyst.url("/projects"));
+    await page.getByRole("link", { name: DEMO_PROJECT }).click();
+    await page.waitForURL((url) => /^\/projects\/\d+$/.test(url.pathname));
+    const demoId = new URL(page.url()).pathname.split("/").pop() as string;
+    const designSpeed = panel(page).getByTestId("design-speed");
+    await designSpeed.waitFor();
+
+    const { body: dto } = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${demoId}/criteria`);
+    expect(dto.criteria).not.toBeNull();
+    const expected = evaluateCriteria(dto.criteria as ProjectCriteria);
+    const { wind } = dto.criteria as ProjectCriteria;
+    expect(wind.terrain).toEqual({ kind: "category", category: "0" });
+    // EN 1991-1-4:2005 Expr. (4.5), (4.4), (4.3) by hand for category 0 (z0 = 0.003 m, Table 4.1), c_prob = 1 at 50 years.
+    const byHand = 0.19 * Math.pow(0.003 / 0.05, 0.07) * Math.log(wind.deckHeight / 0.003) * wind.basicSpeed;
+    expect(expected.designWind.meanSpeedMps).toBeCloseTo(byHand, 9);
+
+    expect(await designSpeed.textContent()).toBe(mps(expected.designWind.meanSpeedMps));
+    expect(await panel(page).getByTestId("factor-k_r").textContent()).toBe(expected.designWind.terrainFactor.toFixed(4));
+    expect(await panel(page).getByTestId("factor-c_r").textContent()).toBe(expected.designWind.roughnessFactor.toFixed(4));
+    for (const phenomenon of PHENOMENA) {
+      const shown = await panel(page).getByTestId(`required-${phenomenon}`).textContent();
+      expect(shown, phenomenon).toBe(mps(expected.required[phenomenon].requiredSpeedMps));
+    }
+    // The defaults' clauses are recalled, and the screen says so beside them.
+    expect(await panel(page).getByText("from memory", { exact: true }).count()).toBeGreaterThanOrEqual(3);
+    expect(await panel(page).getByText(/§4\.3\.2, Expr\. \(4\.5\)/).count()).toBeGreaterThan(0);
+    await analyst.screenshot("criteria-project-page");
+  });
+
+  it("the analyst edits the basic wind speed, sees v_m follow before saving, and saves a new version", async () => {
+    const { page } = analyst;
+    const saved = await pageApi<ProjectCriteriaDto>(page, "PUT", `/api/projects/${ownProjectId}/criteria`, {
+      criteria: ownCriteria(26),
+      baseVersion: null,
+    });
+    expect(saved.status).toBe(200);
+    await page.goto(analyst.url(`/projects/${ownProjectId}`));
+    await panel(page).getByTestId("design-speed").waitFor();
+    expect(await panel(page).getByTestId("design-speed").textContent()).toBe(
+      mps(evaluateCriteria(ownCriteria(26)).designWind.meanSpeedMps),
+    );
+
+    await panel(page).getByRole("button", { name: "Edit criteria" }).click();
+    const basicSpeed = page.getByLabel("Basic wind speed v_b");
+    await basicSpeed.waitFor();
+    expect(await basicSpeed.evaluate((element) => element === document.activeElement)).toBe(true);
+    await basicSpeed.fill("30.5");
+
+    const preview = page.getByRole("region", { name: "Preview of the design wind" });
+    const expected = evaluateCriteria(ownCriteria(30.5));
+    await expect.poll(() => preview.getByTestId("design-speed").textContent()).toBe(mps(expected.designWind.meanSpeedMps));
+    expect(await preview.getByTestId("required-flutter").textContent()).toBe(mps(expected.required.flutter.requiredSpeedMps));
+    await analyst.screenshot("criteria-editor");
+
+    await page.getByRole("button", { name: "Save as version 2" }).click();
+    await panel(page).getByRole("status").filter({ hasText: "Saved as version 2." }).waitFor();
+    expect(await panel(page).getByTestId("design-speed").textContent()).toBe(mps(expected.designWind.meanSpeedMps));
+    const after = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    expect(after.body.version).toBe(2);
+    expect(after.body.criteria?.wind.basicSpeed).toBe(30.5);
+    // Focus returns to the button that opened the editor.
+    await expect
+      .poll(() => panel(page).getByRole("button", { name: "Edit criteria" }).evaluate((b) => b === document.activeElement))
+      .toBe(true);
+  });
+
+  it("a bad input is named at its field and pauses the preview; nothing is saved", async () => {
+    const { page } = analyst;
+    await panel(page).getByRole("button", { name: "Edit criteria" }).click();
+    const deckHeight = page.getByLabel("Deck height z");
+    await deckHeight.fill("250");
+    await deckHeight.blur();
+    await page.getByText("must be at most 200 (z_max of EN 1991-1-4 §4.3.2)", { exact: true }).waitFor();
+    expect(await deckHeight.getAttribute("aria-invalid")).toBe("true");
+    await page.getByText(/Preview paused: wind\.deckHeight must be at most 200/).waitFor();
+    await page.getByRole("button", { name: "Cancel" }).click();
+    const after = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    expect(after.body.version).toBe(2);
+  });
+
+  it("a save on a stale version is refused with a way to load the newer version", async () => {
+    const { page } = analyst;
+    await panel(page).getByRole("button", { name: "Edit criteria" }).click();
+    await page.getByLabel("Deck height z").fill("65");
+    // Someone else saves version 3 meanwhile.
+    const other = await pageApi<ProjectCriteriaDto>(page, "PUT", `/api/projects/${ownProjectId}/criteria`, {
+      criteria: ownCriteria(27),
+      baseVersion: 2,
+    });
+    expect(other.status).toBe(200);
+
+    await page.getByRole("button", { name: "Save as version 3" }).click();
+    const alert = panel(page).getByRole("alert");
+    await alert.waitFor();
+    expect(await alert.textContent()).toContain("Someone saved the criteria meanwhile");
+    await analyst.screenshot("criteria-conflict");
+    await alert.getByRole("button", { name: /Load the latest version/ }).click();
+
+    await page.getByRole("button", { name: "Save as version 4" }).waitFor();
+    expect(await page.getByLabel("Basic wind speed v_b").inputValue()).toBe("27");
+    await page.getByRole("button", { name: "Cancel" }).click();
+    const after = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    expect(after.body.version).toBe(3);
+    expect(after.body.criteria?.wind.deckHeight).toBe(60);
+  });
+
+  it("a reviewer reads the criteria and their history but gets no editor", async () => {
+    const reviewer = await launchBrowser();
+    watchProblems(reviewer, "reviewer");
+    try {
+      await signIn(reviewer, "reviewer@stillspan.test");
+      await reviewer.page.goto(reviewer.url(`/projects/${ownProjectId}`));
+      const reviewerPanel = panel(reviewer.page);
+      await reviewerPanel.getByTestId("design-speed").waitFor();
+      expect(await reviewerPanel.getByTestId("design-speed").textContent()).toBe(
+        mps(evaluateCriteria(ownCriteria(27)).designWind.meanSpeedMps),
+      );
+      expect(await reviewerPanel.getByRole("button", { name: "Edit criteria" }).count()).toBe(0);
+      await reviewerPanel.getByText("Read-only: the project's analysts edit the criteria.").waitFor();
+
+      await reviewerPanel.getByRole("button", { name: "History" }).click();
+      const rows = reviewerPanel.getByRole("table", { name: /Saved versions/ }).getByRole("row");
+      await expect.poll(() => rows.count()).toBe(4); // header + versions 3, 2, 1
+      expect(await rows.nth(1).getByRole("rowheader").textContent()).toBe("3");
+      await reviewer.screenshot("criteria-reviewer-history");
+    } finally {
+      await reviewer.close();
+    }
+  });
+
+  it("the study workspace shows the margins per phenomenon and the screening table of the shown result", async () => {
+    const { page } = analyst;
+    const alternative = await pageApi<{ id: string }>(page, "POST", `/api/projects/${ownProjectId}/alternatives`, {
+      name: "Twin box (screening test)",
+      deckWidthM: inventedStudy.deck.width,
+      deckDepthM: inventedStudy.deck.depth,
+    });
+    expect(alternative.status).toBe(201);
+    const study = await pageApi<{ id: string; latestRevision: { id: string } }>(
+      page,
+      "POST",
+      `/api/alternatives/${alternative.body.id}/studies`,
+      { name: "Screening baseline", study: inventedStudy },
+    );
+    expect(study.status).toBe(201);
+    const revision = await pageApi<{ result: SweepResult }>(page, "GET", `/api/revisions/${study.body.latestRevision.id}`);
+    const { body: dto } = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    const criteria = dto.criteria as ProjectCriteria;
+    const screening = screenStudy(inventedStudy as Parameters<typeof screenStudy>[0], criteria);
+    const margins = sweepMargins(revision.body.result, evaluateCriteria(criteria).required, screening);
+
+    await page.goto(analyst.url(`/projects/${ownProjectId}/studies/${study.body.id}`));
+    const screeningRegion = page.getByRole("region", { name: "Screening" });
+    await screeningRegion.getByTestId("vortex-table").waitFor();
+    for (const mode of screening.vortexShedding.modes) {
+      expect(await screeningRegion.getByTestId(`onset-${mode.modeId}`).textContent()).toBe(mps(mode.onsetSpeedMps as number));
+      expect(await screeningRegion.getByTestId(`scruton-${mode.modeId}`).textContent()).toBe(mode.scruton.value.toFixed(2));
+    }
+    // Heave Scruton number by hand, EN 1991-1-4 E.1.3.3 Expr. (E.4): Sc = 2 δ_s m / (ρ D²), δ_s = 2πζ.
+    const heave = inventedStudy.structure.modes[0];
+    const scByHand = (2 * (2 * Math.PI * heave.damping) * inventedStudy.structure.mass) / (inventedStudy.air.density * inventedStudy.deck.depth ** 2);
+    expect(await screeningRegion.getByTestId(`scruton-${heave.id}`).textContent()).toBe(scByHand.toFixed(2));
+    expect(await screeningRegion.getByTestId("galloping-standard").textContent()).toBe(mps(screening.galloping.standard.onsetSpeedMps));
+    expect(await screeningRegion.getByTestId("divergence-closed-form").textContent()).toBe(mps(screening.divergence.speedMps as number));
+    const engineDivergence = revision.body.result.divergence;
+    expect(await screeningRegion.getByTestId("divergence-engine").textContent()).toBe(
+      engineDivergence ? mps(engineDivergence.speed) : "none within the sweep",
+    );
+    expect(await screeningRegion.getByText(/Results are indicative/).count()).toBeGreaterThan(0);
+
+    const marginsRegion = page.getByRole("region", { name: "Margins" });
+    for (const phenomenon of PHENOMENA) {
+      const margin = margins[phenomenon];
+      const row = marginsRegion.getByRole("row").filter({ has: page.locator(`[data-testid="margin-${phenomenon}"]`) });
+      const expectedRatio = margin.margin === null ? "—" : `${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}`;
+      expect(await marginsRegion.getByTestId(`margin-${phenomenon}`).textContent(), phenomenon).toBe(expectedRatio);
+      expect(await row.textContent(), phenomenon).toContain(margin.statement);
+    }
+    await screeningRegion.scrollIntoViewIfNeeded();
+    await analyst.screenshot("criteria-workspace-screening");
+  });
+
+  it("the visits logged no uncaught error and no console error or warning", () => {
+    expect(problems).toEqual([]);
+  });
+});
