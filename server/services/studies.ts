@@ -38,7 +38,10 @@ export async function getStudy(db: DbOrTx, user: SessionUser, id: number): Promi
   return studyDto(db, await loadWithAccess(db, user, "Study", () => findStudy(db, id), "read"));
 }
 
-/** Creates a study; with a document, revision 1 is computed and stored in the same transaction. */
+/**
+ * Creates a study; with a document, revision 1 is computed and stored in the same transaction, and recorded in
+ * the one `study.create` audit event.
+ */
 export async function createStudy(
   db: DbOrTx,
   user: SessionUser,
@@ -50,18 +53,20 @@ export async function createStudy(
   const document = input.study === undefined ? undefined : parseStudyOrThrow(input.study);
   const id = await db.transaction(async (tx) => {
     const studyId = await insertStudy(tx, { alternativeId, name: input.name, purpose: input.purpose, createdBy: user.id });
-    await writeAudit(tx, { actorId: user.id, action: "study.create", objectType: "study", objectId: studyId, ip, details: { alternativeId, name: input.name } });
-    if (document) {
-      const first = await appendFirstRevision(tx, user, studyId, document);
-      await writeAudit(tx, {
-        actorId: user.id,
-        action: "revision.create",
-        objectType: "revision",
-        objectId: first.id,
-        ip,
-        details: { studyId, number: 1, parentNumber: null, documentSha256: first.sha256, engineVersion: first.engineVersion, source: "create" },
-      });
-    }
+    // One write, one audit event: revision 1 (when given) is recorded in the study's creation event.
+    const first = document ? await appendFirstRevision(tx, user, studyId, document) : null;
+    await writeAudit(tx, {
+      actorId: user.id,
+      action: "study.create",
+      objectType: "study",
+      objectId: studyId,
+      ip,
+      details: {
+        alternativeId,
+        name: input.name,
+        firstRevision: first && { id: first.id, number: 1, documentSha256: first.sha256, engineVersion: first.engineVersion },
+      },
+    });
     return studyId;
   });
   return studyDto(db, (await findStudy(db, id))!);

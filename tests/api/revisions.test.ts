@@ -1,0 +1,266 @@
+import { sql } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { canonicalJson } from "../../shared/canonical-json.js";
+import { ENGINE_VERSION } from "../../shared/engine/version.js";
+import { canonicalSha256Hex } from "../../server/lib/hash.js";
+import { createProjectWithMembers, openTestDb, userId } from "../support/db.js";
+import { testEnv } from "../support/env.js";
+import { api, signIn } from "../support/http.js";
+import { auditSince, createAlternativeAndStudy, inventedStudy, lastAuditId, rowCounts, upload } from "../support/workspace.js";
+
+const base = () => testEnv.baseUrl;
+const db = openTestDb();
+let projectId: number;
+let analyst: string;
+let admin: string;
+let reviewer: string;
+
+beforeAll(async () => {
+  projectId = await createProjectWithMembers(db, `Revisions test ${Date.now().toString(36)}`, {
+    "analyst@stillspan.test": "analyst",
+    "reviewer@stillspan.test": "reviewer",
+  });
+  [analyst, admin, reviewer] = await Promise.all(
+    ["analyst", "admin", "reviewer"].map((r) => signIn(base(), `${r}@stillspan.test`)),
+  );
+});
+afterAll(() => db.$client.end());
+
+const post = (studyId: string, cookie: string, body: unknown) =>
+  api(base(), `/api/studies/${studyId}/revisions`, { cookie, body });
+
+describe("POST /api/studies/:id/revisions", () => {
+  it("stores revision 2 with its canonical hash, engine version and computed result, and marks revision 1 superseded", async () => {
+    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const study = inventedStudy();
+    study.structure.modes[1].frequency = 0.31;
+
+    const res = await post(studyId, analyst, { parentRevision: 1, changeNote: "Torsional frequency 0.342 → 0.31 Hz", study });
+
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ number: 2, parentNumber: 1, superseded: false, engineVersion: ENGINE_VERSION, author: { name: "Tomas Reedwell" } });
+    expect(res.body.documentSha256).toBe(canonicalSha256Hex(study));
+    expect(res.body.study).toEqual(study);
+    expect(res.body.result.engine).toBe(ENGINE_VERSION);
+    expect(res.body.result.flutter.speed).toBeGreaterThan(0);
+    expect(res.body.critical.flutter.speedMps).toBe(res.body.result.flutter.speed);
+    const first = await api(base(), `/api/revisions/${revision1Id}`, { cookie: reviewer });
+    expect(first.status).toBe(200);
+    expect(first.body).toMatchObject({ number: 1, superseded: true, latestNumber: 2 });
+    // A lower torsional frequency lowers the flutter speed: the two stored results differ.
+    expect(res.body.result.flutter.speed).toBeLessThan(first.body.result.flutter.speed);
+  });
+
+  it("refuses revision 2 without a change note (400) and writes nothing", async () => {
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const before = await rowCounts(db);
+    const res = await post(studyId, analyst, { parentRevision: 1, changeNote: "  ", study: inventedStudy() });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toMatch(/change note is required/);
+    expect(await rowCounts(db)).toEqual(before);
+  });
+
+  it("refuses an invalid document with 400 invalid_study naming each JSON path, and writes nothing", async () => {
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const study = inventedStudy();
+    study.structure.modes[0].frequency = "fast";
+    study.sweep.colour = "red";
+    const before = await rowCounts(db);
+    const res = await post(studyId, analyst, { parentRevision: 1, changeNote: "broken", study });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("invalid_study");
+    expect(res.body.error.details).toEqual(
+      expect.arrayContaining([
+        { path: "$.structure.modes[0].frequency", message: "must be a number" },
+        { path: "$.sweep.colour", message: "is not a field of this format" },
+      ]),
+    );
+    expect(await rowCounts(db)).toEqual(before);
+  });
+
+  it("answers 409 on a stale parent, naming the newer revision and its author, returning the rejected document, storing nothing", async () => {
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const byAdmin = inventedStudy();
+    byAdmin.structure.mass = 16000;
+    expect((await post(studyId, admin, { parentRevision: 1, changeNote: "mass 16 000 kg/m", study: byAdmin })).status).toBe(201);
+    const mine = inventedStudy();
+    mine.structure.modes[0].damping = 0.006;
+    const before = await rowCounts(db);
+
+    const res = await post(studyId, analyst, { parentRevision: 1, changeNote: "heave damping 0.6 %", study: mine });
+
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe("stale_parent");
+    expect(res.body.error.message).toContain("Revision 2 by Ada Quillfeather");
+    expect(res.body.error.details.latest).toMatchObject({ number: 2, author: { name: "Ada Quillfeather" } });
+    expect(res.body.error.details.rejected).toEqual({ parentRevision: 1, changeNote: "heave damping 0.6 %", study: mine });
+    expect(await rowCounts(db)).toEqual(before);
+  });
+
+  it("gives exactly one 201 and one 409 to two saves on the same parent fired together, with no gaps in the numbers", async () => {
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    for (let round = 1; round <= 3; round++) {
+      const a = inventedStudy();
+      a.structure.mass = 15000 + round;
+      const b = inventedStudy();
+      b.structure.mass = 15500 + round;
+      const bodyA = { parentRevision: round, changeNote: `analyst round ${round}`, study: a };
+      const bodyB = { parentRevision: round, changeNote: `admin round ${round}`, study: b };
+
+      const results = await Promise.all([post(studyId, analyst, bodyA), post(studyId, admin, bodyB)]);
+
+      const statuses = results.map((r) => r.status).sort();
+      expect(statuses, `round ${round}`).toEqual([201, 409]);
+      const winner = results.find((r) => r.status === 201)!;
+      const loser = results.find((r) => r.status === 409)!;
+      expect(winner.body.number).toBe(round + 1);
+      const loserBody = loser === results[0] ? bodyA : bodyB;
+      expect(loser.body.error.details.rejected).toEqual(loserBody);
+      expect(loser.body.error.details.latest.number).toBe(round + 1);
+    }
+    const list = await api(base(), `/api/studies/${studyId}/revisions`, { cookie: reviewer });
+    expect(list.body.map((r: { number: number }) => r.number)).toEqual([1, 2, 3, 4]);
+    expect(list.body.map((r: { superseded: boolean }) => r.superseded)).toEqual([true, true, true, false]);
+  });
+});
+
+describe("reading, diffing and re-running revisions", () => {
+  it("diffs two revisions field by field with JSON paths and old and new values", async () => {
+    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const study = inventedStudy();
+    study.structure.modes[1].frequency = 0.3;
+    study.aerodynamics.A2[5] = -1.2;
+    study.name = "Revised";
+    const second = await post(studyId, analyst, { parentRevision: 1, changeNote: "three edits", study });
+
+    const res = await api(base(), `/api/revisions/${revision1Id}/diff/${second.body.id}`, { cookie: reviewer });
+
+    expect(res.status).toBe(200);
+    expect(res.body.identical).toBe(false);
+    expect(res.body.changes).toEqual([
+      { path: "$.aerodynamics.A2[5]", kind: "changed", old: -1.06, new: -1.2 },
+      { path: "$.name", kind: "changed", old: inventedStudy().name, new: "Revised" },
+      { path: "$.structure.modes[1].frequency", kind: "changed", old: 0.342, new: 0.3 },
+    ]);
+  });
+
+  it("re-runs a revision with the current engine as a new revision, leaving the stored one untouched", async () => {
+    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const before = await api(base(), `/api/revisions/${revision1Id}`, { cookie: analyst });
+
+    const res = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, method: "POST" });
+
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ number: 2, changeNote: `re-run with engine ${ENGINE_VERSION}`, documentSha256: before.body.documentSha256 });
+    const after = await api(base(), `/api/revisions/${revision1Id}`, { cookie: analyst });
+    expect(after.body.result).toEqual(before.body.result);
+    expect(after.body.createdAt).toBe(before.body.createdAt);
+    expect((await api(base(), `/api/studies/${studyId}/revisions`, { cookie: analyst })).body).toHaveLength(2);
+  });
+
+  it("round-trips export → import → export to the identical canonical JSON and hash", async () => {
+    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const first = await fetch(`${base()}/api/revisions/${revision1Id}/export`, { headers: { Cookie: analyst } });
+    expect(first.status).toBe(200);
+    expect(first.headers.get("content-disposition")).toMatch(/^attachment; filename="?[a-z0-9-]+-r1\.study\.json"?$/);
+    const text1 = await first.text();
+    const hash1 = first.headers.get("x-content-sha256");
+
+    const imported = await upload(base(), `/api/studies/${studyId}/import`, {
+      cookie: analyst,
+      field: "file",
+      file: { name: "exported.study.json", bytes: new TextEncoder().encode(text1), type: "application/json" },
+      fields: { parentRevision: "1", changeNote: "imported back" },
+    });
+    expect(imported.status).toBe(201);
+    const second = await fetch(`${base()}/api/revisions/${imported.body.id}/export`, { headers: { Cookie: analyst } });
+    const text2 = await second.text();
+
+    expect(canonicalJson(JSON.parse(text2))).toBe(canonicalJson(JSON.parse(text1)));
+    expect(second.headers.get("x-content-sha256")).toBe(hash1);
+    expect(imported.body.documentSha256).toBe(hash1);
+    expect(canonicalSha256Hex(JSON.parse(text2))).toBe(hash1);
+  });
+});
+
+describe("study_revisions is append-only in PostgreSQL", () => {
+  it("refuses a raw UPDATE and a raw DELETE with the trigger's message", async () => {
+    const { revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const id = Number(revision1Id);
+    // Through pg directly: the error is PostgreSQL's own, raised by the trigger of migration 0003.
+    await expect(db.$client.query("update study_revisions set change_note = 'tampered' where id = $1", [id])).rejects.toThrow(
+      /append-only: UPDATE refused/,
+    );
+    await expect(db.$client.query("delete from study_revisions where id = $1", [id])).rejects.toThrow(/append-only: DELETE refused/);
+    const { rows } = await db.execute<{ change_note: string }>(sql`select change_note from study_revisions where id = ${id}`);
+    expect(rows).toEqual([{ change_note: "" }]);
+  });
+});
+
+describe("audit trail", () => {
+  it("records exactly one audit event with the right actor for each write", async () => {
+    const analystId = await userId(db, "analyst@stillspan.test");
+    const adminId = await userId(db, "admin@stillspan.test");
+    const steps: { label: string; actor: number; action: string; run: () => Promise<{ status: number }> }[] = [];
+    let altId = "";
+    let studyId = "";
+    let revisionId = "";
+    steps.push({
+      label: "create alternative",
+      actor: analystId,
+      action: "alternative.create",
+      run: async () => {
+        const r = await api(base(), `/api/projects/${projectId}/alternatives`, { cookie: analyst, body: { name: "Audit deck", deckWidthM: 30, deckDepthM: 3 } });
+        altId = r.body.id;
+        return r;
+      },
+    });
+    steps.push({
+      label: "edit alternative",
+      actor: adminId,
+      action: "alternative.update",
+      run: () => api(base(), `/api/alternatives/${altId}`, { cookie: admin, method: "PATCH", body: { description: "edited by the admin" } }),
+    });
+    steps.push({
+      label: "create study with a document",
+      actor: analystId,
+      action: "study.create",
+      run: async () => {
+        const r = await api(base(), `/api/alternatives/${altId}/studies`, { cookie: analyst, body: { name: "Audit study", study: inventedStudy() } });
+        studyId = r.body.id;
+        return r;
+      },
+    });
+    steps.push({
+      label: "save revision",
+      actor: adminId,
+      action: "revision.create",
+      run: async () => {
+        const s = inventedStudy();
+        s.structure.mass = 15900;
+        const r = await post(studyId, admin, { parentRevision: 1, changeNote: "mass", study: s });
+        revisionId = r.body.id;
+        return r;
+      },
+    });
+    steps.push({
+      label: "re-run",
+      actor: analystId,
+      action: "revision.create",
+      run: () => api(base(), `/api/revisions/${revisionId}/rerun`, { cookie: analyst, method: "POST" }),
+    });
+    steps.push({
+      label: "rename study",
+      actor: analystId,
+      action: "study.update",
+      run: () => api(base(), `/api/studies/${studyId}`, { cookie: analyst, method: "PATCH", body: { purpose: "audited" } }),
+    });
+    for (const step of steps) {
+      const from = await lastAuditId(db);
+      const res = await step.run();
+      expect(res.status, step.label).toBeLessThan(300);
+      const events = await auditSince(db, from);
+      expect(events.map((e) => [e.action, e.actor_id]), step.label).toEqual([[step.action, step.actor]]);
+    }
+  });
+});
