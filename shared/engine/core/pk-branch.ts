@@ -7,6 +7,8 @@ import { refinePole, type Pole } from "./refine-pole";
 export const PK_TOLERANCE = 1e-9;
 /** Iteration cap of the p-k loop; hitting it is reported as `no-convergence`. */
 export const PK_MAX_ITERATIONS = 60;
+/** From this iteration on, a bracketed p-k iteration bisects (guaranteed progress where g(ω) has kinks). */
+const BISECT_AFTER = 12;
 /** |Im λ| below this fraction of |λ| counts as a real pole (static branch). */
 export const STATIC_IM_TOLERANCE = 1e-10;
 
@@ -38,8 +40,10 @@ export function createPkOutcome(n: number): PkOutcome {
  *
  * Method: the fixed point ω = Im λ(K(ω)) of the p-k method (Hassig 1971, "An approximate true damping solution
  * of the flutter equation by determinant iteration", J. Aircraft 8(11)), accelerated by the secant method on
- * g(ω) = Im λ(ω) − ω once two iterates exist (falling back to the plain fixed-point update when the secant step
- * leaves the bracket of plausible values). Each iterate's pole comes either from a warm-started Newton
+ * g(ω) = Im λ(ω) − ω once two iterates exist (falling back to the plain fixed-point update when the secant step is
+ * implausible); once iterates on both sides of g = 0 exist the update stays inside that bracket (regula falsi)
+ * and, from the 12th iteration, bisects it — so kinks of g (table ends, interpolation knots) cannot make the
+ * iteration cycle. Each iterate's pole comes either from a warm-started Newton
  * refinement (`refinePole`, fast path) or from a full decomposition filtered by `select` (robust path).
  * Notes: the iteration stops when |Δω| ≤ 1e-9·|λ| (|λ| keeps the test meaningful on static branches, where
  * ω → 0 and K sits at the floor); after 60 iterations `converged` is false.
@@ -71,6 +75,11 @@ export function solveBranchPk(
   let omega = Math.abs(li);
   let prevOmega = Number.NaN;
   let prevG = Number.NaN;
+  // the latest frequencies with g = Im λ − ω above and below zero (a bracket of the fixed point once both exist)
+  let lowOmega = Number.NaN;
+  let lowG = Number.NaN;
+  let highOmega = Number.NaN;
+  let highG = Number.NaN;
   out.converged = false;
   work.factored = false; // Jacobian factors from another branch or speed are not reused
   let it = 0;
@@ -103,10 +112,24 @@ export function solveBranchPk(
       out.converged = true;
       break;
     }
+    if (g > 0) {
+      lowOmega = omega;
+      lowG = g;
+    } else {
+      highOmega = omega;
+      highG = g;
+    }
     let next = omegaNew;
     if (Number.isFinite(prevG) && g !== prevG) {
       const secant = omega - (g * (omega - prevOmega)) / (g - prevG);
       if (secant > 0 && Math.abs(secant - omegaNew) <= 0.5 * Math.max(omegaNew, omega)) next = secant;
+    }
+    if (Number.isFinite(lowOmega) && Number.isFinite(highOmega)) {
+      // a sign change of g is bracketed: stay inside it (regula falsi), and bisect once the secant lingers
+      const a = Math.min(lowOmega, highOmega);
+      const b = Math.max(lowOmega, highOmega);
+      if (it >= BISECT_AFTER) next = 0.5 * (a + b);
+      else if (!(next > a && next < b)) next = lowOmega - (lowG * (highOmega - lowOmega)) / (highG - lowG);
     }
     prevOmega = omega;
     prevG = g;

@@ -30,7 +30,9 @@ export interface StepAssessment {
  * with λ̂_j the predicted pole and δ_j the distance from λ_j to the nearest other branch's new pole. A branch is
  * certain when its shape is distinct from every other new shape (s_mac = 1), or when the predictor landed
  * well inside its own half of the gap to the nearest pole (s_pred ≈ 1); close poles with similar shapes
- * (veering) and predictor misses lower it; a shape jump lowers it through MAC_jj.
+ * (veering) and predictor misses lower it; a shape jump lowers it through MAC_jj. For a branch whose pole pair
+ * has just reached the real axis (where the p-k solution can jump to a real root at a fold of its fixed point)
+ * s_pred is 1 when the real root is nearer to the branch's own previous pole than to any other branch's, else 0.
  * Notes: with a single branch c = MAC_11.
  * @param n degrees of freedom (and branches)
  * @param mass M (n×n)
@@ -65,7 +67,17 @@ export function assessStep(
     }
     const sMac = b === 1 ? 1 : clamp01((self - other) / 0.5);
     const miss = Math.hypot(next[j].re - predicted[j].re, next[j].im - predicted[j].im);
-    const sPred = b === 1 ? 1 : gap > 0 ? clamp01(1 - miss / (0.5 * gap)) : 0;
+    let sPred = b === 1 ? 1 : gap > 0 ? clamp01(1 - miss / (0.5 * gap)) : 0;
+    if (b > 1 && previous[j].im > 0 && next[j].im === 0) {
+      // the pair has just reached the real axis, where the p-k solution may jump (a fold of the fixed point):
+      // judged by nearest previous pole instead of by the predictor
+      const own = Math.hypot(next[j].re - previous[j].re, previous[j].im);
+      let nearest = true;
+      for (let k = 0; k < b; k++) {
+        if (k !== j && Math.hypot(next[j].re - previous[k].re, previous[k].im) <= own) nearest = false;
+      }
+      sPred = nearest ? 1 : 0;
+    }
     mac[j] = self;
     confidence[j] = self * Math.max(sMac, sPred);
   }
