@@ -116,6 +116,18 @@ describe("administration in the browser", () => {
     expect(await ownRow.getByText("another administrator can remove it").isVisible()).toBe(true);
   });
 
+  it("the administration page has no sideways scroll at tablet width", async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 820, height: 1180 });
+
+    await page.getByRole("heading", { name: `Members of ${PROJECT_NAME}` }).waitFor();
+
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await browser.screenshot("admin-tablet");
+    await page.setViewportSize({ width: 1280, height: 900 });
+  });
+
   it("the whole visit logged no uncaught error and no console error or warning", () => {
     expect(problems).toEqual([]);
   });

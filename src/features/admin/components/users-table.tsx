@@ -144,18 +144,18 @@ function UserRow({ user, isSelf, isBusy, isRenaming, onRename, onStartRename, on
         {user.memberships.length === 0 ? (
           <span className="text-sm text-ink-600">No project</span>
         ) : (
-          <ul className="flex flex-wrap gap-x-3 gap-y-1 text-sm">
+          <ul className="flex min-w-72 flex-wrap gap-x-3 gap-y-1 text-sm">
             {user.memberships.map((m) => (
-              <li key={m.projectId} className="flex items-center gap-1.5">
-                <span className="max-w-72 truncate" title={m.projectName}>{m.projectName}</span>
+              <li key={m.projectId} className="flex items-baseline gap-1.5">
+                <span>{m.projectName}</span>
                 <RoleBadge tone={m.role}>{roleLabel(m.role)}</RoleBadge>
               </li>
             ))}
           </ul>
         )}
       </td>
-      <td className="px-4 py-2 whitespace-nowrap">
-        <span className="flex items-center gap-2">
+      <td className="px-4 py-2">
+        <span className="flex flex-wrap items-center gap-x-2 gap-y-1">
           {user.isAdmin ? <RoleBadge tone="admin">Administrator</RoleBadge> : <span className="text-sm text-ink-600">No</span>}
           {user.isAdmin && isSelf ? (
             <span className="text-xs text-ink-600">another administrator can remove it</span>
