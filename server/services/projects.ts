@@ -74,6 +74,10 @@ export async function getProjectMembers(db: Db, user: SessionUser, projectId: nu
   return rows.map((m) => ({ ...m, userId: String(m.userId) }));
 }
 
+const FOREIGN_KEY_VIOLATION = "23503";
+const pgCode = (err: unknown): string | undefined =>
+  (err as { code?: string }).code ?? (err as { cause?: { code?: string } }).cause?.code;
+
 /** Administrators only; the services repeat the route guard so no other caller can skip it. */
 export function assertAdmin(user: SessionUser): void {
   if (!user.isAdmin) throw AppError.forbidden("Only an administrator can do this.");
@@ -125,7 +129,15 @@ export async function deleteProject(db: Db, user: SessionUser, projectId: number
         content,
       );
     }
-    await deleteProjectRow(tx, projectId);
+    try {
+      await deleteProjectRow(tx, projectId);
+    } catch (err) {
+      // Anything else that keeps a restricting reference to the project (a later table) refuses the same way.
+      if (pgCode(err) === FOREIGN_KEY_VIOLATION) {
+        throw AppError.conflict(`"${project.name}" is still referred to by other records and cannot be deleted.`, content);
+      }
+      throw err;
+    }
     await writeAudit(tx, {
       actorId: user.id,
       action: "project.delete",
