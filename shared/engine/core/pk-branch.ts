@@ -25,6 +25,7 @@ export interface PkOutcome {
 /** Picks this branch's pole among all poles of the eigenproblem at the current iterate (robust mode). */
 export type PoleSelector = (poles: Pole[]) => Pole;
 
+/** Allocates a reusable outcome record for n degrees of freedom. */
 export function createPkOutcome(n: number): PkOutcome {
   return {
     pole: { re: 0, im: 0, vecRe: new Float64Array(n), vecIm: new Float64Array(n) },

@@ -23,6 +23,7 @@ export interface PoleWorkspace {
   factored: boolean;
 }
 
+/** Allocates the buffers of one n-mode p-k solve (reuse it for every branch and speed of a sweep). */
 export function createPoleWorkspace(n: number): PoleWorkspace {
   const m = n + 1;
   return {

@@ -1,0 +1,164 @@
+import { factorComplexLu, solveComplexLu } from "./complex-lu";
+import { frequencyScale, NEWTON_MAX_ITERATIONS, NEWTON_STAGNATION, NEWTON_TOLERANCE } from "./newton-settings";
+import type { PoleWorkspace } from "./quadratic-operator";
+import type { Pole } from "./refine-pole";
+
+/** Accept when the estimated remaining error step·q/(1 − q) (q = observed contraction) is below this (relative). */
+const CHORD_ERROR_TOLERANCE = 1e-13;
+/** A correction from reused factors larger than this (relative) is discarded and the Jacobian refactored. */
+const CHORD_MAX_STEP = 1e-3;
+/** A refinement that moves λ further than this (relative to the start) has left the branch: reported as failed. */
+const NEWTON_MAX_DRIFT = 2;
+
+/**
+ * Refines one eigenpair of an n-mode quadratic pencil Q(λ) = λ²M + λC + K (C = `work.dampTot`, K = `work.stiffTot`)
+ * from a warm start.
+ *
+ * Method: Newton's method on the bordered system [Q(λ)x = 0, vᴴx = 1], v the starting vector (Ruhe 1973,
+ * "Algorithms for the nonlinear eigenvalue problem", SIAM J. Numer. Anal. 10(4); Güttel & Tisseur 2017, Acta
+ * Numerica 26, §4.3), run as chord iterations: the LU factors of the (n+1)×(n+1) complex Jacobian
+ * [[Q(λ), Q′(λ)x], [vᴴ, 0]] stay in the workspace and are reused (within one branch's p-k solve λ and K move very
+ * little) while corrections stay below 1e-3·|λ| and contract at least 4:1; otherwise the Jacobian is refactored
+ * at the current point. Most iterations then cost one O(n²) substitution instead of an O(n³) factorisation.
+ * Notes: tolerances are relative to the start |λ₀| (floored at 1e-3 of the system's frequency scale), so a
+ * diverging iterate cannot loosen them; stops at |Δλ| ≤ 1e-13·|λ₀|, or when |Δλ|·q/(1 − q) ≤ 1e-13·|λ₀| with q
+ * the observed contraction, or at the rounding floor; fails (false) after 40 iterations, on a singular
+ * Jacobian, or when λ drifts more than 2|λ₀| from its start.
+ * @param mass M (n×n row-major)
+ * @param work workspace with the assembled pencil and (maybe) reusable factors (`work.factored`)
+ * @param guessRe real part of the starting λ, rad/s
+ * @param guessIm imaginary part of the starting λ, rad/s
+ * @param startRe real part of the starting eigenvector v
+ * @param startIm imaginary part of v
+ * @param out receives λ and the (unnormalised) eigenvector
+ * @returns true when converged
+ */
+export function refinePoleBordered(
+  mass: Float64Array,
+  work: PoleWorkspace,
+  guessRe: number,
+  guessIm: number,
+  startRe: Float64Array,
+  startIm: Float64Array,
+  out: Pole,
+): boolean {
+  const n = work.n;
+  const m = n + 1;
+  const { luRe, luIm, pivots, rRe, rIm, xRe, xIm } = work;
+  const c = work.dampTot;
+  const k = work.stiffTot;
+  // v = start; x0 = v / (vᴴv) so that vᴴx0 = 1
+  let vv = 0;
+  for (let i = 0; i < n; i++) vv += startRe[i] * startRe[i] + startIm[i] * startIm[i];
+  if (!(vv > 0)) return false;
+  for (let i = 0; i < n; i++) {
+    xRe[i] = startRe[i] / vv;
+    xIm[i] = startIm[i] / vv;
+  }
+  let lr = guessRe;
+  let li = guessIm;
+  let converged = false;
+  let lastStep = Number.POSITIVE_INFINITY;
+  let refactor = !work.factored;
+  // tolerances relative to the warm start (floored by the system's own frequency scale, for real roots passing
+  // through zero), so that a diverging iterate cannot loosen them
+  const scale = Math.max(Math.hypot(guessRe, guessIm), 1e-3 * frequencyScale(mass, work), 1e-300);
+  let applied = 0;
+  for (let it = 0; it < NEWTON_MAX_ITERATIONS; it++) {
+    const reused = !refactor;
+    const l2r = lr * lr - li * li;
+    const l2i = 2 * lr * li;
+    let lastRe = 0;
+    let lastIm = 0;
+    for (let i = 0; i < n; i++) {
+      let qxr = 0, qxi = 0, dxr = 0, dxi = 0;
+      const row = i * n;
+      const jrow = i * m;
+      for (let j = 0; j < n; j++) {
+        const mm = mass[row + j];
+        const cc = c[row + j];
+        const qr = l2r * mm + lr * cc + k[row + j];
+        const qi = l2i * mm + li * cc;
+        if (refactor) {
+          luRe[jrow + j] = qr;
+          luIm[jrow + j] = qi;
+        }
+        const ar = xRe[j];
+        const ai = xIm[j];
+        qxr += qr * ar - qi * ai;
+        qxi += qr * ai + qi * ar;
+        if (refactor) {
+          const pr = 2 * lr * mm + cc;
+          const pi = 2 * li * mm;
+          dxr += pr * ar - pi * ai;
+          dxi += pr * ai + pi * ar;
+        }
+      }
+      if (refactor) {
+        luRe[jrow + n] = dxr;
+        luIm[jrow + n] = dxi;
+      }
+      rRe[i] = -qxr;
+      rIm[i] = -qxi;
+      // vᴴx for the last residual
+      lastRe += startRe[i] * xRe[i] + startIm[i] * xIm[i];
+      lastIm += startRe[i] * xIm[i] - startIm[i] * xRe[i];
+    }
+    if (refactor) {
+      const lrow = n * m;
+      for (let j = 0; j < n; j++) {
+        luRe[lrow + j] = startRe[j];
+        luIm[lrow + j] = -startIm[j];
+      }
+      luRe[lrow + n] = 0;
+      luIm[lrow + n] = 0;
+      work.factored = factorComplexLu(m, luRe, luIm, pivots);
+      if (!work.factored) break;
+      refactor = false;
+    }
+    rRe[n] = -(lastRe - 1);
+    rIm[n] = -lastIm;
+    solveComplexLu(m, luRe, luIm, pivots, rRe, rIm);
+    const dr = rRe[n];
+    const di = rIm[n];
+    const step = Math.hypot(dr, di);
+    const rate = step / lastStep; // 0 on the first applied iteration
+    // reused factors are trusted only for small, contracting corrections: otherwise refactor here and retry
+    if (reused && (!(step <= CHORD_MAX_STEP * scale) || rate >= 1)) {
+      refactor = true;
+      continue;
+    }
+    if (!Number.isFinite(step)) {
+      work.factored = false;
+      break;
+    }
+    for (let i = 0; i < n; i++) {
+      xRe[i] += rRe[i];
+      xIm[i] += rIm[i];
+    }
+    lr += dr;
+    li += di;
+    applied++;
+    if (!(Math.hypot(lr - guessRe, li - guessIm) <= NEWTON_MAX_DRIFT * scale)) {
+      work.factored = false;
+      break; // wandered off: not this branch's pole
+    }
+    if (
+      step <= NEWTON_TOLERANCE * scale ||
+      (applied > 1 && rate < 0.5 && (step * rate) / (1 - rate) <= CHORD_ERROR_TOLERANCE * scale) ||
+      (step >= lastStep && step <= NEWTON_STAGNATION * scale)
+    ) {
+      converged = true;
+      break;
+    }
+    // slow contraction: refresh the Jacobian
+    if (applied > 1 && rate > 0.25) refactor = true;
+    lastStep = step;
+  }
+  out.re = lr;
+  out.im = li;
+  out.vecRe.set(xRe);
+  out.vecIm.set(xIm);
+  return converged;
+}
+
