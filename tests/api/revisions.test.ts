@@ -31,7 +31,9 @@ const post = (studyId: string, cookie: string, body: unknown) =>
 
 describe("POST /api/studies/:id/revisions", () => {
   it("stores revision 2 with its canonical hash, engine version and computed result, and marks revision 1 superseded", async () => {
-    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const { alternativeId, studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const alternative = await api(base(), `/api/alternatives/${alternativeId}`, { cookie: reviewer });
+    expect(alternative.body).toMatchObject({ studyCount: 1, datasetCount: 0, deckWidthM: 27.5, image: null });
     const study = inventedStudy();
     study.structure.modes[1].frequency = 0.31;
 
@@ -44,6 +46,8 @@ describe("POST /api/studies/:id/revisions", () => {
     expect(res.body.result.engine).toBe(ENGINE_VERSION);
     expect(res.body.result.flutter.speed).toBeGreaterThan(0);
     expect(res.body.critical.flutter.speedMps).toBe(res.body.result.flutter.speed);
+    const study2 = await api(base(), `/api/studies/${studyId}`, { cookie: reviewer });
+    expect(study2.body).toMatchObject({ revisionCount: 2, latestRevision: { number: 2 } });
     const first = await api(base(), `/api/revisions/${revision1Id}`, { cookie: reviewer });
     expect(first.status).toBe(200);
     expect(first.body).toMatchObject({ number: 1, superseded: true, latestNumber: 2 });

@@ -16,8 +16,10 @@ const summaryColumns = {
   imageUploadedAt: alternatives.imageUploadedAt,
   createdAt: alternatives.createdAt,
   updatedAt: alternatives.updatedAt,
-  studyCount: sql<number>`(select count(*)::int from ${studies} where ${studies.alternativeId} = ${alternatives.id})`,
-  datasetCount: sql<number>`(select count(*)::int from ${aeroDatasets} where ${aeroDatasets.alternativeId} = ${alternatives.id})`,
+  // Outer columns written out qualified: in a single-table select drizzle renders ${alternatives.id} as a bare
+  // "id", which inside the subquery would bind to the inner table.
+  studyCount: sql<number>`(select count(*)::int from ${studies} s where s.alternative_id = "alternatives"."id")`,
+  datasetCount: sql<number>`(select count(*)::int from ${aeroDatasets} d where d.alternative_id = "alternatives"."id")`,
 };
 
 export type AlternativeRow = Awaited<ReturnType<typeof listAlternatives>>[number];

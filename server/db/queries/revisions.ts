@@ -2,7 +2,9 @@ import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
 import { alternatives, studies, studyRevisions, users, type NewStudyRevision } from "../schema/index.js";
 
-const latestNumber = sql<number>`(select max(r2.number)::int from ${studyRevisions} r2 where r2.study_id = ${studyRevisions.studyId})`;
+// Outer column qualified by hand: drizzle renders ${studyRevisions.studyId} bare in single-table selects, where it
+// would bind to r2 and give the maximum over every study.
+const latestNumber = sql<number>`(select max(r2.number)::int from ${studyRevisions} r2 where r2.study_id = "study_revisions"."study_id")`;
 
 /** A revision without its document and result. */
 const summaryColumns = {

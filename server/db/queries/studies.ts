@@ -12,7 +12,8 @@ const columns = {
   createdAt: studies.createdAt,
   createdById: studies.createdBy,
   createdByName: users.name,
-  revisionCount: sql<number>`(select count(*)::int from ${studyRevisions} where ${studyRevisions.studyId} = ${studies.id})`,
+  // Outer column qualified by hand (drizzle leaves it bare in single-table selects).
+  revisionCount: sql<number>`(select count(*)::int from ${studyRevisions} r where r.study_id = "studies"."id")`,
 };
 
 function selectStudies(db: DbOrTx) {
