@@ -4,6 +4,7 @@ import { canUseWorkspace, roleInProject } from "@/lib/authorization";
 import { useMe } from "@/features/auth/api/get-me";
 import { getStudyQueryOptions } from "@/features/studies/api/get-study";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
+import { StudyChecks } from "@/features/criteria/components/study-checks";
 import { StudyWorkspace } from "@/features/studies/components/study-workspace";
 import { requireAccess } from "@/app/routes/guards";
 
@@ -22,5 +23,13 @@ export function StudyRoute() {
   const { projectId = "", studyId = "" } = useParams();
   const me = useMe();
   const canEdit = me.data ? roleInProject(me.data, projectId) === "analyst" : false;
-  return <StudyWorkspace key={studyId} projectId={projectId} studyId={studyId} readOnly={!canEdit} />;
+  return (
+    <StudyWorkspace
+      key={studyId}
+      projectId={projectId}
+      studyId={studyId}
+      readOnly={!canEdit}
+      renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
+    />
+  );
 }

@@ -1,5 +1,5 @@
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useMemo, useState } from "react";
+import { useMemo, useState, type ReactNode } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
 import type { DatasetDto } from "@shared/schemas/datasets";
@@ -23,9 +23,8 @@ import { SweepFields } from "@/features/studies/components/sweep-fields";
 import { useSweepPreview } from "@/features/studies/hooks/use-sweep-preview";
 import type { CellError } from "@/features/studies/utils/derivative-grid";
 import { diffDocuments } from "@/features/studies/utils/document-diff";
-import { StudyChecks } from "@/features/criteria/components/study-checks";
 
-interface StudyEditorProps {
+export interface StudyEditorProps {
   projectId: string;
   studyId: string;
   /** The revision the edit starts from (its document and stored result). */
@@ -36,6 +35,8 @@ interface StudyEditorProps {
   criteria: ProjectCriteriaDto | null;
   datasets: readonly DatasetDto[];
   onRebased: (draft: RebasedDraft) => void;
+  /** Further checks of the shown result (screening, all margins), composed in by the route. */
+  renderChecks?: (document: StudyDocument, result: SweepResult) => ReactNode;
 }
 
 interface ShownResult {
@@ -51,7 +52,8 @@ const keyOf = (value: unknown) => JSON.stringify(value);
  * The study workspace proper: structure, aerodynamics and sweep inputs on the left, the browser preview and the
  * server's result on the right. Run asks the server for an unsaved result; Save stores a new revision.
  */
-export function StudyEditor({ projectId, studyId, revision, draft, readOnly, criteria, datasets, onRebased }: StudyEditorProps) {
+export function StudyEditor(props: StudyEditorProps) {
+  const { projectId, studyId, revision, draft, readOnly, criteria, datasets, onRebased, renderChecks } = props;
   const startDocument = draft?.document ?? revision.study;
   const form = useForm<StudyDocument>({
     resolver: zodResolver(studyDocumentSchema),
@@ -194,8 +196,8 @@ export function StudyEditor({ projectId, studyId, revision, draft, readOnly, cri
             <ResultSummary result={shown.result} document={shown.document} criteria={criteria} showKmh={showKmh} />
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
-          <StudyChecks projectId={projectId} study={shown.document} result={shown.result} />
           <ResultPlots runs={[{ name: "Result", result: shown.result }]} dimmed={runSweep.isPending} />
+          {renderChecks?.(shown.document, shown.result)}
         </div>
       </div>
       <Card title="Steps" subtitle="Every tracked pole at every speed, including locally refined steps" flush>

@@ -13,13 +13,14 @@ import { useRevision } from "@/features/studies/api/get-revision";
 import { useRevisions } from "@/features/studies/api/get-revisions";
 import { useStudy } from "@/features/studies/api/get-study";
 import type { RebasedDraft } from "@/features/studies/components/save-revision-panel";
-import { StudyEditor } from "@/features/studies/components/study-editor";
+import { StudyEditor, type StudyEditorProps } from "@/features/studies/components/study-editor";
 
 interface StudyWorkspaceProps {
   projectId: string;
   studyId: string;
   /** Reviewers (and administrators who are not the project's analysts) see everything, edit nothing. */
   readOnly: boolean;
+  renderChecks?: StudyEditorProps["renderChecks"];
 }
 
 export function queryErrorPanel(title: string, error: Error, retry: () => void, isRetrying: boolean) {
@@ -36,7 +37,7 @@ export function queryErrorPanel(title: string, error: Error, retry: () => void, 
 }
 
 /** Loads the study, the revision to start from (the latest, or `?revision=N`), the criteria and the data sets. */
-export function StudyWorkspace({ projectId, studyId, readOnly }: StudyWorkspaceProps) {
+export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks }: StudyWorkspaceProps) {
   const [search] = useSearchParams();
   const wanted = Number(search.get("revision")) || null;
   const study = useStudy(studyId);
@@ -130,6 +131,7 @@ export function StudyWorkspace({ projectId, studyId, readOnly }: StudyWorkspaceP
         criteria={criteria.data?.criteria ? criteria.data : null}
         datasets={datasets.data ?? []}
         onRebased={setDraft}
+        renderChecks={renderChecks}
       />
     </>
   );

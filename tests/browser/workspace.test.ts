@@ -1,0 +1,251 @@
+/**
+ * The study workspace in a real browser, as the analyst uses it on the demo crossing: open the demo study,
+ * change the torsional frequency, run the sweep on the server and read the new flutter speed (checked against
+ * the engine run here on the same document), save it as a revision, find it in the timeline and its diff,
+ * compare two revisions, and load a broken derivative CSV whose row error shows in place. One browser, few
+ * page loads; a screenshot of each main screen goes to test-artifacts/.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { runSweep } from "../../shared/engine/run-sweep";
+import type { RevisionDto } from "../../shared/schemas/revisions";
+import { parseStudy, type StudyDocument } from "../../shared/schemas/study";
+import { launchBrowser, type BrowserSession } from "../support/browser";
+
+const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
+const DEMO_PASSWORD = "stillspan-demo";
+
+describe("the analyst's study workspace", () => {
+  let browser: BrowserSession;
+  let studyPath = "";
+  let startRevision: RevisionDto;
+  let savedNumber = 0;
+  const problems: string[] = [];
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
+    browser.page.on("console", (message) => {
+      // 401 (session probe), 404, and the 409 / 403 answers this file provokes on purpose.
+      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[1349]/;
+      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
+        problems.push(`${message.type()}: ${message.text()}`);
+      }
+    });
+    const { page } = browser;
+    await page.goto(browser.url("/projects"));
+    await signIn("analyst@stillspan.test", "/projects");
+  });
+
+  /** Fills the sign-in form the browser is on and waits for the landing page. */
+  async function signIn(email: string, landing: string) {
+    const { page } = browser;
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill(DEMO_PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((url) => url.pathname === landing);
+  }
+
+  async function signOut() {
+    await browser.page.getByRole("button", { name: "Sign out" }).click();
+    await browser.page.waitForURL((url) => url.pathname === "/sign-in");
+  }
+
+  /** POSTs JSON from the page (with its session cookie); returns the status and body. */
+  function post(url: string, body: unknown) {
+    return browser.page.evaluate(
+      async ({ url, body }) => {
+        const res = await fetch(url, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(body) });
+        return { status: res.status, body: await res.json().catch(() => null) };
+      },
+      { url, body },
+    );
+  }
+
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("the project page lists the alternatives with their studies, critical speeds and the required speeds", async () => {
+    const { page } = browser;
+
+    await page.getByRole("link", { name: DEMO_PROJECT }).click();
+
+    await page.getByRole("heading", { name: "Deck alternatives" }).waitFor();
+    const studies = page.getByRole("table", { name: /^Studies of / });
+    await studies.first().waitFor();
+    expect(await studies.first().textContent()).toMatch(/\d+\.\d m\/s/);
+    expect(await page.getByTestId("margins-basis").textContent()).toMatch(/Margins against flutter \d+\.\d m\/s/);
+    await browser.screenshot("project-studies");
+  });
+
+  it("opening the demo study shows its inputs, derived quantities and the stored result", async () => {
+    const { page } = browser;
+
+    await page.getByRole("table", { name: /^Studies of / }).first().getByRole("link").first().click();
+
+    await page.waitForURL((url) => /\/studies\/[^/]+$/.test(url.pathname));
+    studyPath = new URL(page.url()).pathname;
+    await page.getByTestId("flutter-speed").waitFor();
+    const studyId = studyPath.split("/").pop()!;
+    startRevision = await page.evaluate(async (id) => {
+      const study = await (await fetch(`/api/studies/${id}`)).json();
+      return (await fetch(`/api/revisions/${study.latestRevision.id}`)).json();
+    }, studyId);
+    const stored = startRevision.result.flutter;
+    expect(await page.getByTestId("flutter-speed").textContent()).toContain(stored ? stored.speed.toFixed(2) : "None up to");
+    const torsion = startRevision.study.structure.modes.find((m) => m.dof === "torsion")!;
+    const heave = startRevision.study.structure.modes.find((m) => m.dof === "heave")!;
+    expect(await page.getByTestId("frequency-ratio").textContent()).toBe((torsion.frequency / heave.frequency).toFixed(3));
+    await page.getByRole("figure", { name: /Pole paths/ }).locator(".main-svg").first().waitFor();
+    await browser.screenshot("workspace");
+  });
+
+  it("a changed torsional frequency, run on the server, gives the engine's flutter speed for that document", async () => {
+    const { page } = browser;
+    const torsion = startRevision.study.structure.modes.find((m) => m.dof === "torsion")!;
+    const newFrequency = Number((torsion.frequency * 1.12).toFixed(4));
+    const changed: StudyDocument = structuredClone(startRevision.study);
+    changed.structure.modes.find((m) => m.dof === "torsion")!.frequency = newFrequency;
+    const parsed = parseStudy(changed);
+    if (!parsed.ok) throw new Error(`test document invalid: ${JSON.stringify(parsed.issues)}`);
+    const expected = runSweep(parsed.study).flutter;
+    expect(expected, "the changed demo deck must still flutter within its sweep").not.toBeNull();
+    expect(expected!.speed.toFixed(2)).not.toBe(startRevision.result.flutter?.speed.toFixed(2));
+
+    await page.getByLabel("Torsional frequency").fill(String(newFrequency));
+    await page.getByTestId("preview-flutter").filter({ hasText: expected!.speed.toFixed(2) }).waitFor();
+    await page.getByRole("button", { name: "Run sweep" }).click();
+
+    await page.getByTestId("result-source").filter({ hasText: "Server run" }).waitFor();
+    expect(await page.getByTestId("flutter-speed").textContent()).toContain(`${expected!.speed.toFixed(2)} m/s`);
+    await browser.screenshot("workspace-after-run");
+  });
+
+  it("saving with a change note stores a new revision that the timeline and the diff show", async () => {
+    const { page } = browser;
+    const note = "Torsional frequency raised 12 % after the stiffened-tower global model";
+
+    await page.getByLabel("Change note").fill(note);
+    await page.getByRole("button", { name: "Save revision" }).click();
+
+    savedNumber = startRevision.latestNumber + 1;
+    await page.waitForURL((url) => url.searchParams.get("revision") === String(savedNumber));
+    await page.getByText(`Revision ${savedNumber} (latest)`).waitFor();
+    await page.getByRole("link", { name: /^Revisions/ }).click();
+    const timeline = page.getByRole("list", { name: "Revisions, newest first" });
+    await timeline.waitFor();
+    const newest = timeline.getByRole("listitem").first();
+    expect(await newest.textContent()).toContain(note);
+    expect(await newest.textContent()).toContain(`r${savedNumber}`);
+    const diff = page.getByRole("table", { name: `Changes from revision ${startRevision.number} to revision ${savedNumber}` });
+    await diff.waitFor();
+    const torsionIndex = startRevision.study.structure.modes.findIndex((m) => m.dof === "torsion");
+    expect(await diff.textContent()).toContain(`$.structure.modes[${torsionIndex}].frequency`);
+    await page.getByRole("figure", { name: "Critical speeds by revision" }).locator(".main-svg").first().waitFor();
+    await browser.screenshot("revisions");
+  });
+
+  it("comparing the two revisions overlays them and lists both flutter speeds side by side", async () => {
+    const { page } = browser;
+
+    await page.getByRole("link", { name: "Compare the picked two" }).click();
+
+    const table = page.getByRole("table", { name: "Critical speeds and margins side by side" });
+    await table.waitFor();
+    const heads = await table.getByRole("columnheader").allTextContents();
+    expect(heads.slice(1).map((h) => h.replace(/.* r(\d+)$/, "$1")).sort()).toEqual([String(startRevision.number), String(savedNumber)].sort());
+    const flutterRow = await table.getByRole("row", { name: /Flutter speed/ }).textContent();
+    expect(flutterRow?.match(/\d+\.\d\d m\/s/g)?.length).toBe(2);
+    await page.getByRole("figure", { name: /Damping ratio against wind speed/ }).locator(".main-svg").first().waitFor();
+    await browser.screenshot("compare");
+  });
+
+  it("a derivative CSV with a bad value shows the row error in place and blocks the run", async () => {
+    const { page } = browser;
+    await page.goto(browser.url(studyPath));
+    await page.getByRole("radio", { name: "Own table" }).check({ force: true });
+    const csv = ["Ur,H1,H2,H3,H4,A1,A2,A3,A4", "2,-0.6,-0.1,-0.3,0.3,0.15,-0.03,0.06,0.02", "4,-1.9,-0.5,-1.4,0.6,0.49,abc,0.38,0.09", "6,-3.3,-0.8,-3.3,0.5,0.84,-0.33,0.88,0.18"].join("\n");
+
+    await page.getByTestId("derivative-csv-input").setInputFiles({ name: "delivered.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+
+    await page.getByText('Row 2: A2* "abc" is not a number').waitFor();
+    expect(await page.getByLabel("Row 2, A2*").getAttribute("aria-invalid")).toBe("true");
+    expect(await page.getByRole("button", { name: "Run sweep" }).isDisabled()).toBe(true);
+    await browser.screenshot("workspace-csv-error");
+    await page.setViewportSize({ width: 820, height: 1180 });
+    // Plots follow the resize a moment later; the page must settle without sideways scrolling.
+    await expect
+      .poll(() => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth), { timeout: 5000 })
+      .toBeLessThanOrEqual(0);
+    await browser.screenshot("workspace-tablet");
+    await page.setViewportSize({ width: 1280, height: 800 });
+  });
+
+  it("a save that meets a newer revision is refused with a way to re-base, and the re-applied edit saves", async () => {
+    const { page } = browser;
+    const studyId = studyPath.split("/").pop()!;
+    await page.goto(browser.url(studyPath));
+    await page.getByText(`Revision ${savedNumber} (latest)`).waitFor();
+    await page.getByLabel("Torsional damping ratio").fill("0.006");
+    const latest: RevisionDto = await page.evaluate(async (id) => {
+      const study = await (await fetch(`/api/studies/${id}`)).json();
+      return (await fetch(`/api/revisions/${study.latestRevision.id}`)).json();
+    }, studyId);
+    const theirs = structuredClone(latest.study);
+    theirs.air.density = 1.25;
+    const background = await post(`/api/studies/${studyId}/revisions`, { parentRevision: savedNumber, changeNote: "Winter air density", study: theirs });
+    expect(background.status).toBe(201);
+
+    await page.getByLabel("Change note").fill("Torsional damping from the decay records");
+    await page.getByRole("button", { name: "Save revision" }).click();
+
+    await page.getByText(`Revision ${savedNumber + 1} was saved meanwhile`).waitFor();
+    await page.getByRole("button", { name: `Load revision ${savedNumber + 1} and re-apply my edits` }).click();
+    await page.getByText(`Your 1 edit re-applied on revision ${savedNumber + 1}.`).waitFor();
+    expect(await page.getByLabel("Air density ρ").inputValue()).toBe("1.25");
+    expect(await page.getByLabel("Torsional damping ratio").inputValue()).toBe("0.006");
+    await page.getByLabel("Change note").fill("Torsional damping from the decay records");
+    await page.getByRole("button", { name: "Save revision" }).click();
+    await page.waitForURL((url) => url.searchParams.get("revision") === String(savedNumber + 2));
+    await page.getByText(`Revision ${savedNumber + 2} (latest)`).waitFor();
+  });
+
+  it("a reviewer sees the study read-only, and the API refuses a revision from them", async () => {
+    const { page } = browser;
+    await signOut();
+    await page.goto(browser.url(studyPath));
+    await signIn("reviewer@stillspan.test", studyPath);
+
+    await page.getByTestId("flutter-speed").waitFor();
+    await page.getByText("Read-only:").waitFor();
+    const form = page.getByRole("form", { name: "Study inputs" });
+    // Only the km/h display toggle remains; the model choice is shown but disabled.
+    expect(await form.locator("input:not([type=radio]):not([type=checkbox]), textarea, select").count()).toBe(0);
+    expect(await form.getByRole("radio", { disabled: false }).count()).toBe(0);
+    expect(await page.getByRole("button", { name: /Run sweep|Save revision|Upload CSV/ }).count()).toBe(0);
+    const refused = await post(`/api/studies/${studyPath.split("/").pop()}/revisions`, { parentRevision: savedNumber + 2, changeNote: "x", study: startRevision.study });
+    expect(refused.status).toBe(403);
+    await browser.screenshot("workspace-reviewer");
+  });
+
+  it("a viewer never reaches the workspace and gets 403 when forcing an edit through the API", async () => {
+    const { page } = browser;
+    await signOut();
+    await signIn("viewer@stillspan.test", "/signed-summaries");
+
+    await page.goto(browser.url(studyPath));
+
+    await page.waitForURL((url) => url.pathname === "/signed-summaries");
+    expect(await page.getByRole("button", { name: /Run sweep|Save revision/ }).count()).toBe(0);
+    expect(await page.getByRole("form", { name: "Study inputs" }).count()).toBe(0);
+    const studyId = studyPath.split("/").pop()!;
+    const save = await post(`/api/studies/${studyId}/revisions`, { parentRevision: savedNumber + 2, changeNote: "forced", study: startRevision.study });
+    expect(save.status).toBe(403);
+    const sweep = await post("/api/sweep", startRevision.study);
+    expect(sweep.status).toBe(403);
+  });
+
+  it("the visit logged no uncaught error and no console error or warning", () => {
+    expect(problems).toEqual([]);
+  });
+});
