@@ -17,7 +17,8 @@ import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements
 import { PHENOMENA, type ProjectCriteria, type ProjectCriteriaDto } from "../../shared/schemas/criteria.js";
 import { createProjectWithMembers, openTestDb } from "../support/db.js";
 import { DEMO_PASSWORD } from "../support/http.js";
-import { launchBrowser, type BrowserSession } from "../support/browser.js";
+import path from "node:path";
+import { artifactsDir, launchBrowser, type BrowserSession } from "../support/browser.js";
 
 const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
 const db = openTestDb();
@@ -242,7 +243,11 @@ describe("design wind and criteria on the project page", () => {
     );
     expect(study.status).toBe(201);
     const revision = await pageApi<{ result: SweepResult }>(page, "GET", `/api/revisions/${study.body.latestRevision.id}`);
-    const { body: dto } = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    let { body: dto } = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    if (dto.criteria === null) {
+      // Run on its own (-t), the earlier tests have not saved criteria for this project yet.
+      dto = (await pageApi<ProjectCriteriaDto>(page, "PUT", `/api/projects/${ownProjectId}/criteria`, { criteria: ownCriteria(27) })).body;
+    }
     const criteria = dto.criteria as ProjectCriteria;
     const screening = screenStudy(inventedStudy as Parameters<typeof screenStudy>[0], criteria);
     const margins = sweepMargins(revision.body.result, evaluateCriteria(criteria).required, screening);
@@ -274,8 +279,9 @@ describe("design wind and criteria on the project page", () => {
       expect(await marginsRegion.getByTestId(`margin-${phenomenon}`).textContent(), phenomenon).toBe(expectedRatio);
       expect(await row.textContent(), phenomenon).toContain(margin.statement);
     }
-    await screeningRegion.scrollIntoViewIfNeeded();
     await analyst.screenshot("criteria-workspace-screening");
+    await marginsRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-margins.png") });
+    await screeningRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-screening-table.png") });
   });
 
   it("the visits logged no uncaught error and no console error or warning", () => {

@@ -254,7 +254,7 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
 
       <fieldset className="space-y-3">
         <legend className="mb-2 text-sm font-semibold tracking-wide text-ink-600 uppercase">
-          Required speeds: factor on v_m per phenomenon
+          Required speeds: a factor on the design speed per phenomenon
         </legend>
         <div className="grid gap-3 xl:grid-cols-2">
           {PHENOMENA.map((phenomenon) => (

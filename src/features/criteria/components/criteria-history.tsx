@@ -48,7 +48,7 @@ export function CriteriaHistory({ projectId }: { projectId: string }) {
             <th scope="col" className="py-1 pr-3 font-semibold">Saved</th>
             <th scope="col" className="py-1 pr-3 font-semibold">By</th>
             <th scope="col" className="py-1 pr-3 font-semibold">Wind inputs</th>
-            <th scope="col" className="py-1 pr-3 text-right font-semibold">v_m</th>
+            <th scope="col" className="py-1 pr-3 text-right font-semibold normal-case">v_m</th>
             <th scope="col" className="py-1 text-right font-semibold">Flutter required</th>
           </tr>
         </thead>
