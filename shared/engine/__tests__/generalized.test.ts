@@ -1,3 +1,4 @@
+import { EigenvalueDecomposition, Matrix } from "ml-matrix";
 import { describe, expect, it } from "vitest";
 import { createAeroModel } from "../aero/create-aero-model";
 import { locateFlutter } from "../core/locate-critical";
@@ -65,5 +66,36 @@ describe("generalized (multimode) system", () => {
     // the antisymmetric branch alone: 98.86 m/s
     const second = locateFlutter(system, { ...track, branches: [track.branches[3]] });
     expect(Math.abs(second!.speedMps - 98.86) / 98.86, `${second?.speedMps}`).toBeLessThan(1e-3);
+  });
+
+  it("every tracked pole is an eigenvalue of the state matrix at its own K = Bω/U (checked by ml-matrix EVD)", () => {
+    const { system, track } = sweep(
+      [vertical("V1", 1, 0.1), torsional("T1", 1, 0.278), vertical("V2", 2, 0.14), torsional("T2", 2, 0.36)],
+      110,
+    );
+    const n = system.size;
+    const kae = new Float64Array(n * n);
+    const cae = new Float64Array(n * n);
+    for (const steps of track.branches) {
+      for (const s of steps.filter((_, k) => k % 7 === 0)) {
+        const k = Math.max((31 * s.im) / s.speedMps, system.minReducedFrequency);
+        expect(Math.abs(k - s.reducedFrequency)).toBeLessThan(1e-8 * k);
+        system.aero(s.speedMps, k, kae, cae);
+        const a = Matrix.zeros(2 * n, 2 * n);
+        for (let i = 0; i < n; i++) {
+          a.set(i, n + i, 1);
+          const mi = system.mass[i * n + i];
+          for (let j = 0; j < n; j++) {
+            a.set(n + i, j, -(system.stiffness[i * n + j] - kae[i * n + j]) / mi);
+            a.set(n + i, n + j, -(system.damping[i * n + j] - cae[i * n + j]) / mi);
+          }
+        }
+        const evd = new EigenvalueDecomposition(a);
+        const distance = Math.min(
+          ...evd.realEigenvalues.map((re, e) => Math.hypot(re - s.re, evd.imaginaryEigenvalues[e] - s.im)),
+        );
+        expect(distance, `pole ${s.re} + ${s.im}i at ${s.speedMps} m/s`).toBeLessThan(1e-8 * Math.hypot(s.re, s.im));
+      }
+    }
   });
 });

@@ -20,10 +20,10 @@ const NEWTON_MAX_DRIFT = 2;
  * [[Q(λ), Q′(λ)x], [vᴴ, 0]] stay in the workspace and are reused (within one branch's p-k solve λ and K move very
  * little) while corrections stay below 1e-3·|λ| and contract at least 4:1; otherwise the Jacobian is refactored
  * at the current point. Most iterations then cost one O(n²) substitution instead of an O(n³) factorisation.
- * Notes: tolerances are relative to the start |λ₀| (floored at 1e-3 of the system's frequency scale), so a
- * diverging iterate cannot loosen them; stops at |Δλ| ≤ 1e-13·|λ₀|, or when |Δλ|·q/(1 − q) ≤ 1e-13·|λ₀| with q
- * the observed contraction, or at the rounding floor; fails (false) after 40 iterations, on a singular
- * Jacobian, or when λ drifts more than 2|λ₀| from its start.
+ * Notes: the size of a correction is max(|Δλ|/|λ₀|, ‖Δx‖/‖x‖), |λ₀| the start's modulus floored at 1e-3 of the
+ * system's frequency scale (so a diverging iterate cannot loosen the test); stops when it is ≤ 1e-13, or when
+ * size·q/(1 − q) ≤ 1e-13 with q the observed contraction, or at the rounding floor; fails (false) after 40
+ * iterations, on a singular Jacobian, or when λ drifts more than 2|λ₀| from its start.
  * @param mass M (n×n row-major)
  * @param work workspace with the assembled pencil and (maybe) reusable factors (`work.factored`)
  * @param guessRe real part of the starting λ, rad/s
@@ -121,10 +121,18 @@ export function refinePoleBordered(
     solveComplexLu(m, luRe, luIm, pivots, rRe, rIm);
     const dr = rRe[n];
     const di = rIm[n];
-    const step = Math.hypot(dr, di);
+    // size of the correction, relative: the eigenvalue against the start's scale and the eigenvector against
+    // itself (a tiny Δλ from stale factors with a large Δx is not convergence)
+    let dxx = 0;
+    let xx = 0;
+    for (let i = 0; i < n; i++) {
+      dxx += rRe[i] * rRe[i] + rIm[i] * rIm[i];
+      xx += xRe[i] * xRe[i] + xIm[i] * xIm[i];
+    }
+    const step = Math.max(Math.hypot(dr, di) / scale, xx > 0 ? Math.sqrt(dxx / xx) : Number.POSITIVE_INFINITY);
     const rate = step / lastStep; // 0 on the first applied iteration
     // reused factors are trusted only for small, contracting corrections: otherwise refactor here and retry
-    if (reused && (!(step <= CHORD_MAX_STEP * scale) || rate >= 1)) {
+    if (reused && (!(step <= CHORD_MAX_STEP) || rate >= 1)) {
       refactor = true;
       continue;
     }
@@ -144,9 +152,9 @@ export function refinePoleBordered(
       break; // wandered off: not this branch's pole
     }
     if (
-      step <= NEWTON_TOLERANCE * scale ||
-      (applied > 1 && rate < 0.5 && (step * rate) / (1 - rate) <= CHORD_ERROR_TOLERANCE * scale) ||
-      (step >= lastStep && step <= NEWTON_STAGNATION * scale)
+      step <= NEWTON_TOLERANCE ||
+      (applied > 1 && rate < 0.5 && (step * rate) / (1 - rate) <= CHORD_ERROR_TOLERANCE) ||
+      (step >= lastStep && step <= NEWTON_STAGNATION)
     ) {
       converged = true;
       break;
