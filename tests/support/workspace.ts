@@ -30,7 +30,7 @@ export async function upload<T = any>(
 ): Promise<ApiResponse<T>> {
   const form = new FormData();
   for (const [k, v] of Object.entries(options.fields ?? {})) form.append(k, v);
-  form.append(options.field, new Blob([options.file.bytes], { type: options.file.type }), options.file.name);
+  form.append(options.field, new Blob([new Uint8Array(options.file.bytes)], { type: options.file.type }), options.file.name);
   const headers: Record<string, string> = { Accept: "application/json" };
   if (options.cookie) headers.Cookie = options.cookie;
   const res = await fetch(`${baseUrl}${urlPath}`, { method: options.method ?? "POST", headers, body: form });
