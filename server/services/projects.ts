@@ -75,6 +75,7 @@ export async function getProjectMembers(db: Db, user: SessionUser, projectId: nu
 }
 
 const FOREIGN_KEY_VIOLATION = "23503";
+const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 const pgCode = (err: unknown): string | undefined =>
   (err as { code?: string }).code ?? (err as { cause?: { code?: string } }).cause?.code;
 
@@ -124,8 +125,8 @@ export async function deleteProject(db: Db, user: SessionUser, projectId: number
     const content = await countProjectContent(tx, projectId);
     if (content.alternatives > 0) {
       throw AppError.conflict(
-        `"${project.name}" holds ${content.alternatives} deck alternative(s), ${content.studies} stud${content.studies === 1 ? "y" : "ies"} and ${content.datasets} data set(s); ` +
-          "a project with work in it cannot be deleted (study revisions are kept for good).",
+        `"${project.name}" holds ${count(content.alternatives, "deck alternative")}, ${count(content.studies, "study", "studies")} ` +
+          `and ${count(content.datasets, "data set")}; a project with work in it cannot be deleted (study revisions are kept for good).`,
         content,
       );
     }

@@ -140,7 +140,7 @@ describe("DELETE /api/projects/:id", () => {
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe("conflict");
     expect(res.body.error.details).toEqual({ alternatives: 1, studies: 1, datasets: 0 });
-    expect(res.body.error.message).toMatch(/1 deck alternative/);
+    expect(res.body.error.message).toMatch(/holds 1 deck alternative, 1 study and 0 data sets/);
     const { rows } = await db.execute(sql`select 1 from memberships where project_id = ${projectId}`);
     expect(rows).toHaveLength(3);
     expect(await auditRows("project", projectId)).toEqual([]);

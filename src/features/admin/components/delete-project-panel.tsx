@@ -21,7 +21,7 @@ export function DeleteProjectPanel({ projectId, projectName, onDeleted }: { proj
         </p>
         {confirming ? (
           <span className="flex items-center gap-1.5">
-            <Button variant="danger" size="sm" isLoading={remove.isPending} onClick={() => remove.mutate(projectId)}>
+            <Button variant="danger" size="sm" isLoading={remove.isPending} onClick={() => remove.mutate(projectId, { onError: () => setConfirming(false) })}>
               Delete {projectName}
             </Button>
             <Button variant="ghost" size="sm" onClick={() => setConfirming(false)}>
