@@ -1,4 +1,6 @@
+import { EigenvalueDecomposition, Matrix } from "ml-matrix";
 import { describe, expect, it } from "vitest";
+import { createAeroModel } from "../aero/create-aero-model";
 import { runSweep } from "../run-sweep";
 import { benchmarkDeck, relativeError } from "./support/benchmark-deck";
 
@@ -54,5 +56,34 @@ describe("benchmark deck of the IABSE TG 3.1 2-DOF benchmark (inputs from domain
     [0.25, 48.13],
   ])("with f_h = %s Hz flutters at %s m/s", (heaveHz, expected) => {
     expectClose(runSweep(benchmarkDeck({ heaveHz })).flutter?.speed, expected, `f_h = ${heaveHz} Hz`);
+  });
+
+  it("reports at every speed poles of the state matrix at the branch's own K = Bω/U (ml-matrix EVD)", () => {
+    const study = benchmarkDeck({ step: 2 });
+    const result = runSweep(study);
+    const aero = createAeroModel(study.aerodynamics);
+    const [m, I, rho, B] = [22740, 2.47e6, 1.22, 31];
+    for (const mode of result.modes) {
+      for (const s of mode.steps) {
+        const k = Math.max((B * s.im) / s.speed, 1e-3);
+        const p = aero.products(k);
+        const q = 0.5 * rho * s.speed ** 2;
+        const c = 0.5 * rho * s.speed * B;
+        const wh = 2 * Math.PI * 0.1;
+        const wa = 2 * Math.PI * 0.278;
+        // x = [h, α]; domain guide §1 matrix form
+        const kt = [m * wh * wh - q * p.k2H4, -q * B * p.k2H3, -q * B * p.k2A4, I * wa * wa - q * B * B * p.k2A3];
+        const ct = [2 * m * 0.003 * wh - c * p.kH1, -c * B * p.kH2, -c * B * p.kA1, 2 * I * 0.003 * wa - c * B * B * p.kA2];
+        const a = new Matrix([
+          [0, 0, 1, 0],
+          [0, 0, 0, 1],
+          [-kt[0] / m, -kt[1] / m, -ct[0] / m, -ct[1] / m],
+          [-kt[2] / I, -kt[3] / I, -ct[2] / I, -ct[3] / I],
+        ]);
+        const evd = new EigenvalueDecomposition(a);
+        const distance = Math.min(...evd.realEigenvalues.map((re, e) => Math.hypot(re - s.re, evd.imaginaryEigenvalues[e] - s.im)));
+        expect(distance, `${mode.id} at ${s.speed} m/s`).toBeLessThan(1e-8 * Math.hypot(s.re, s.im));
+      }
+    }
   });
 });
