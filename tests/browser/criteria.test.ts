@@ -279,6 +279,21 @@ describe("design wind and criteria on the project page", () => {
       expect(await marginsRegion.getByTestId(`margin-${phenomenon}`).textContent(), phenomenon).toBe(expectedRatio);
       expect(await row.textContent(), phenomenon).toContain(margin.statement);
     }
+    // A measured Strouhal number replaces the table's: it must name its source, then every onset follows D n / St.
+    await screeningRegion.getByText("Measured values for the screening").click();
+    const optionsForm = screeningRegion.getByRole("form", { name: "Measured values for the screening" });
+    await optionsForm.getByLabel("Strouhal number St").fill("0.11");
+    await optionsForm.getByRole("button", { name: "Screen with these values" }).click();
+    await optionsForm.getByText("say where the Strouhal number comes from (test report, reference)").waitFor();
+    await optionsForm.getByLabel("Source of St").fill("Section-model test, smooth flow (invented for this test)");
+    await optionsForm.getByRole("button", { name: "Screen with these values" }).click();
+    await expect.poll(() => screeningRegion.getByTestId("strouhal").textContent()).toBe("0.11");
+    for (const mode of inventedStudy.structure.modes) {
+      // EN 1991-1-4 E.1.3.1, Expr. (E.2) by hand: v_crit = b n / St with b = D.
+      const byHand = (inventedStudy.deck.depth * mode.frequency) / 0.11;
+      await expect.poll(() => screeningRegion.getByTestId(`onset-${mode.id}`).textContent()).toBe(mps(byHand));
+    }
+    expect(await screeningRegion.getByText(/Section-model test, smooth flow \(invented for this test\)/).count()).toBeGreaterThan(0);
     await analyst.screenshot("criteria-workspace-screening");
     await marginsRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-margins.png") });
     await screeningRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-screening-table.png") });

@@ -20,8 +20,8 @@ export function updateCriteria(projectId: string, input: UpdateCriteriaInput): P
 }
 
 /**
- * On success the answer becomes the cached current version; the history and everything else keyed under
- * `['criteria']` (screenings read the required speeds) is refetched.
+ * On success the answer becomes the cached current version; the history, the screenings (they read the
+ * required speeds) and the project's comparison (its margins) are refetched.
  */
 export function useUpdateCriteria(projectId: string, options: { onSuccess?: (saved: ProjectCriteriaDto) => void } = {}) {
   const queryClient = useQueryClient();
@@ -32,6 +32,8 @@ export function useUpdateCriteria(projectId: string, options: { onSuccess?: (sav
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: getCriteriaHistoryQueryOptions(projectId).queryKey }),
         queryClient.invalidateQueries({ queryKey: ["criteria", "screening"] }),
+        // The project's comparison carries margins computed against the criteria (studies feature's key).
+        queryClient.invalidateQueries({ queryKey: ["comparison", projectId] }),
       ]);
       options.onSuccess?.(saved);
     },

@@ -43,6 +43,7 @@ export function RequirementFields({ phenomenon, control, register, errors }: Req
               Basis of the {label.toLowerCase()} factor <SourceBadge text={values?.basis ?? ""} />
             </>
           }
+          rows={3}
           error={fieldErrors?.basis?.message}
           {...register(`${name}.basis`)}
         />
