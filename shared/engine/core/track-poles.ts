@@ -119,20 +119,30 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     extrapolated: system.hasAero && speed > 0 && (system.isExtrapolated?.(o.reducedFrequency) ?? false),
   });
   // A pole pair that reaches the real axis splits into two real roots; the branch continues on the larger one,
-  // the root that can cross zero (static instability). Newton from the predictor may have landed on either.
+  // the root that can cross zero (static instability). Newton from the predictor may have landed on either, or
+  // on another branch's real root: candidates are the real poles not held by another branch whose shape matches
+  // the branch's last one (MAC at least half the best), and the largest of them is taken.
   const settleStatic = (steps: TrackedStep[], prev: Pole[]) => {
     steps.forEach((s, j) => {
       if (!(prev[j].im > 0) || s.im !== 0) return;
       const k = assembleQuadratic(system, s.speedMps, 0, work);
-      const reals = fullPoles()
-        .filter((p) => Math.abs(p.im) <= STATIC_IM_TOLERANCE * Math.hypot(p.re, p.im))
-        .sort((a, b) => Math.hypot(a.re - prev[j].re, a.im - prev[j].im) - Math.hypot(b.re - prev[j].re, b.im - prev[j].im))
-        .slice(0, 2);
-      const right = reals.reduce<Pole | null>((best, p) => (best === null || p.re > best.re ? p : best), null);
-      if (!right || right.re <= s.re) return;
-      s.re = right.re;
+      const held = (p: Pole) =>
+        steps.some((o, i) => i !== j && Math.hypot(o.re - p.re, o.im - p.im) <= 1e-6 * Math.hypot(p.re, p.im) + 1e-300);
+      const reals = fullPoles().filter(
+        (p) => Math.abs(p.im) <= STATIC_IM_TOLERANCE * Math.hypot(p.re, p.im) && !held(p),
+      );
+      if (reals.length === 0) return;
+      const macs = reals.map((p) => modalAssurance(n, mass, prev[j].vecRe, prev[j].vecIm, p.vecRe, p.vecIm));
+      const best = Math.max(...macs);
+      let right: Pole | null = null;
+      reals.forEach((p, i) => {
+        if (macs[i] >= 0.5 * best && (right === null || p.re > right.re)) right = p;
+      });
+      if (right === null) return;
+      const chosen: Pole = right;
+      s.re = chosen.re;
       s.im = 0;
-      s.vecRe = Float64Array.from(right.vecRe);
+      s.vecRe = Float64Array.from(chosen.vecRe);
       s.vecIm = new Float64Array(n);
       normalizeModeVector(n, mass, s.vecRe, s.vecIm);
       s.reducedFrequency = k;
