@@ -66,6 +66,13 @@ export async function getComparison(db: Db, user: SessionUser, projectId: number
             author: person(latest.authorId, latest.authorName),
             engineVersion: latest.engineVersion,
             critical: latest.critical,
+            deck: { widthM: latest.deck.width, depthM: latest.deck.depth },
+            structure: {
+              massKgPerM: latest.structure.mass,
+              inertiaKgM2PerM: latest.structure.inertia,
+              modes: latest.structure.modes.map((m) => ({ id: m.id, dof: m.dof, frequencyHz: m.frequency, damping: m.damping })),
+            },
+            aerodynamicModel: latest.aerodynamicModel,
           }
         : null,
       margins,

@@ -29,6 +29,21 @@ export const comparisonRowSchema = z.object({
       author: personSchema.nullable(),
       engineVersion: z.string(),
       critical: criticalSpeedsSchema,
+      /** What was computed: the revision document's deck and structure. */
+      deck: z.object({ widthM: z.number().describe("Deck width B, m"), depthM: z.number().describe("Deck depth D, m") }),
+      structure: z.object({
+        massKgPerM: z.number().describe("Mass per unit length, kg/m"),
+        inertiaKgM2PerM: z.number().describe("Mass moment of inertia per unit length, kg·m²/m"),
+        modes: z.array(
+          z.object({
+            id: z.string(),
+            dof: z.enum(["heave", "torsion"]),
+            frequencyHz: z.number().describe("Still-air natural frequency, Hz"),
+            damping: z.number().describe("Structural damping ratio, dimensionless"),
+          }),
+        ),
+      }),
+      aerodynamicModel: z.enum(["tabulated", "flat-plate", "quasi-steady"]),
     })
     .nullable(),
   /** Null when the project has no criteria yet or the study has no revision. */

@@ -41,6 +41,12 @@ describe("GET /api/projects/:id/comparison on the demo crossing", () => {
       const revision = await api(base(), `/api/revisions/${row.latest.revisionId}`, { cookie: reviewer });
       expect(revision.body.result.flutter.speed).toBe(flutter.speedMps);
       expect(revision.body.result.flutter.frequency).toBe(flutter.frequencyHz);
+      expect(row.latest.deck).toEqual({ widthM: revision.body.study.deck.width, depthM: revision.body.study.deck.depth });
+      expect(row.latest.structure.massKgPerM).toBe(revision.body.study.structure.mass);
+      expect(row.latest.structure.modes.map((m: { frequencyHz: number }) => m.frequencyHz)).toEqual(
+        revision.body.study.structure.modes.map((m: { frequency: number }) => m.frequency),
+      );
+      expect(row.latest.aerodynamicModel).toBe("tabulated");
     }
     const trendB = trends.find((t: { alternativeName: string }) => t.alternativeName.startsWith("B"));
     expect(trendB.points.length).toBeGreaterThanOrEqual(3);

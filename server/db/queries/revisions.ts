@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import type { StudyDocument } from "../../../shared/schemas/study.js";
 import type { DbOrTx } from "../client.js";
 import { alternatives, studies, studyRevisions, users, type NewStudyRevision } from "../schema/index.js";
 
@@ -104,6 +105,10 @@ export async function listProjectRevisions(db: DbOrTx, projectId: number) {
       studyName: studies.name,
       alternativeId: alternatives.id,
       alternativeName: alternatives.name,
+      // Only the small parts of the document a comparison shows (joined select: columns come out qualified).
+      deck: sql<StudyDocument["deck"]>`${studyRevisions.document}->'deck'`,
+      structure: sql<StudyDocument["structure"]>`${studyRevisions.document}->'structure'`,
+      aerodynamicModel: sql<StudyDocument["aerodynamics"]["model"]>`${studyRevisions.document}->'aerodynamics'->>'model'`,
     })
     .from(studyRevisions)
     .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
