@@ -160,7 +160,7 @@ describe("the analyst's study workspace", () => {
     await browser.screenshot("compare");
   });
 
-  it("a derivative CSV with a bad value shows the row error in place and blocks the run", async () => {
+  it("a derivative CSV with a bad value shows the row error in place, blocks the run and guards against leaving", async () => {
     const { page } = browser;
     await page.goto(browser.url(studyPath));
     await page.getByRole("radio", { name: "Own table" }).check({ force: true });
@@ -172,6 +172,10 @@ describe("the analyst's study workspace", () => {
     expect(await page.getByLabel("Row 2, A2*").getAttribute("aria-invalid")).toBe("true");
     expect(await page.getByRole("button", { name: "Run sweep" }).isDisabled()).toBe(true);
     await browser.screenshot("workspace-csv-error");
+    await page.getByRole("link", { name: "← Project" }).click();
+    const guard = page.getByRole("alertdialog", { name: "Leave without saving?" });
+    await guard.getByRole("button", { name: "Stay and keep editing" }).click();
+    expect(new URL(page.url()).pathname).toBe(studyPath);
     await page.setViewportSize({ width: 820, height: 1180 });
     // Plots follow the resize a moment later; the page must settle without sideways scrolling.
     await expect
@@ -179,6 +183,8 @@ describe("the analyst's study workspace", () => {
       .toBeLessThanOrEqual(0);
     await browser.screenshot("workspace-tablet");
     await page.setViewportSize({ width: 1280, height: 800 });
+    // The broken table is an unsaved change: leaving the page asks first (the browser's own question here).
+    page.once("dialog", (dialog) => void dialog.accept());
   });
 
   it("a save that meets a newer revision is refused with a way to re-base, and the re-applied edit saves", async () => {

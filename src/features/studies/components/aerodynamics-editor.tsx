@@ -50,6 +50,7 @@ interface AerodynamicsEditorProps {
   readOnly: boolean;
   /** Flutter-derivative data sets of the study's deck alternative. */
   datasets: readonly DatasetDto[];
+  datasetsError: string | null;
   /** A valid block, or null with the grid's errors while the table cannot be read. */
   onChange: (value: StudyAerodynamics | null, errors: CellError[]) => void;
 }
@@ -59,7 +60,7 @@ interface AerodynamicsEditorProps {
  * convention, or copied from one of the alternative's data sets), Theodorsen's thin plate, or quasi-steady
  * slopes; the derivatives are drawn against Ur as the engine will interpolate them.
  */
-export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: AerodynamicsEditorProps) {
+export function AerodynamicsEditor({ value, readOnly, datasets, datasetsError, onChange }: AerodynamicsEditorProps) {
   const groupId = useId();
   const [rows, setRows] = useState<GridRow[]>(() =>
     value.model === "tabulated" ? gridFromTable(value) : [emptyRow(), emptyRow()],
@@ -198,6 +199,9 @@ export function AerodynamicsEditor({ value, readOnly, datasets, onChange }: Aero
       {choice === "quasi-steady" && value.model === "quasi-steady" ? (
         <QuasiSteadyFields value={value} readOnly={readOnly} onChange={(next) => onChange(next, [])}
           staticSets={staticSets} />
+      ) : null}
+      {datasetsError ? (
+        <p className="text-sm text-signal-700">The alternative's data sets could not be loaded ({datasetsError}); reload to pick one.</p>
       ) : null}
       {choice === "dataset" ? (
         <DatasetPicker sets={derivativeSets} active={activeSet} readOnly={readOnly} onPick={copyDataset} />

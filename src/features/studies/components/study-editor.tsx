@@ -13,6 +13,7 @@ import { ApiError } from "@/lib/api-client";
 import { formatDateTime } from "@/lib/format";
 import { useRunSweep } from "@/features/studies/api/run-sweep";
 import { AerodynamicsEditor } from "@/features/studies/components/aerodynamics-editor";
+import { LeaveGuard } from "@/features/studies/components/leave-guard";
 import { LivePreview } from "@/features/studies/components/live-preview";
 import { ResultPlots } from "@/features/studies/components/result-plots";
 import { ResultSummary } from "@/features/studies/components/result-summary";
@@ -34,6 +35,8 @@ export interface StudyEditorProps {
   readOnly: boolean;
   criteria: ProjectCriteriaDto | null;
   datasets: readonly DatasetDto[];
+  /** Why the alternative's data sets could not be loaded, if they could not. */
+  datasetsError: string | null;
   onRebased: (draft: RebasedDraft) => void;
   /** Further checks of the shown result (screening, all margins), composed in by the route. */
   renderChecks?: (document: StudyDocument, result: SweepResult) => ReactNode;
@@ -53,7 +56,7 @@ const keyOf = (value: unknown) => JSON.stringify(value);
  * server's result on the right. Run asks the server for an unsaved result; Save stores a new revision.
  */
 export function StudyEditor(props: StudyEditorProps) {
-  const { projectId, studyId, revision, draft, readOnly, criteria, datasets, onRebased, renderChecks } = props;
+  const { projectId, studyId, revision, draft, readOnly, criteria, datasets, datasetsError, onRebased, renderChecks } = props;
   const startDocument = draft?.document ?? revision.study;
   const form = useForm<StudyDocument>({
     resolver: zodResolver(studyDocumentSchema),
@@ -81,6 +84,10 @@ export function StudyEditor(props: StudyEditorProps) {
         ? null
         : "fix the marked inputs";
   const preview = useSweepPreview(readOnly ? null : document, valuesKey);
+  const unsaved = useMemo(
+    () => (readOnly ? 0 : diffDocuments(revision.study, document ?? values).length + gridErrors.length),
+    [valuesKey, gridErrors.length], // eslint-disable-line react-hooks/exhaustive-deps
+  );
   const resultIsStale = useMemo(() => diffDocuments(shown.document, document ?? values).length > 0, [shown.document, valuesKey]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const onAerodynamics = (aero: StudyAerodynamics | null, errors: CellError[]) => {
@@ -102,6 +109,7 @@ export function StudyEditor(props: StudyEditorProps) {
 
   return (
     <div className="space-y-4">
+      <LeaveGuard when={unsaved > 0} what={`This study has unsaved changes (${unsaved} field${unsaved === 1 ? "" : "s"}).`} />
       {draft ? (
         <div role="status" className="rounded-md border-l-4 border-l-tide-600 bg-tide-50 px-4 py-2 text-sm">
           <p className="font-semibold text-ink-900">
@@ -129,7 +137,7 @@ export function StudyEditor(props: StudyEditorProps) {
             <StructureFields register={register} control={control} errors={formState.errors} readOnly={readOnly} />
           </Card>
           <Card title="Aerodynamics" subtitle="Scanlan derivatives on the full width B, K = Bω/U, h and L downward">
-            <AerodynamicsEditor value={values.aerodynamics ?? startDocument.aerodynamics} readOnly={readOnly} datasets={datasets} onChange={onAerodynamics} />
+            <AerodynamicsEditor value={values.aerodynamics ?? startDocument.aerodynamics} readOnly={readOnly} datasets={datasets} datasetsError={datasetsError} onChange={onAerodynamics} />
           </Card>
           <Card
             title="Sweep"

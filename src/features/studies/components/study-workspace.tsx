@@ -130,6 +130,7 @@ export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks }: S
         readOnly={readOnly}
         criteria={criteria.data?.criteria ? criteria.data : null}
         datasets={datasets.data ?? []}
+        datasetsError={datasets.isError ? datasets.error.message : null}
         onRebased={setDraft}
         renderChecks={renderChecks}
       />
