@@ -32,7 +32,7 @@ export function uploadOne(field: string, maxBytes: number): RequestHandler {
 }
 
 /** The uploaded file of a request that went through `uploadOne`, or a 400 saying how to send it. */
-export function requireFile(file: Express.Multer.File | undefined, field: string): Express.Multer.File {
+export function requireFile<F extends { buffer: Buffer }>(file: F | undefined, field: string): F {
   if (!file) {
     throw AppError.badRequest(`Send the file as multipart/form-data with the part "${field}".`);
   }

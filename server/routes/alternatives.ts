@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { createAlternativeSchema, MAX_IMAGE_BYTES, patchAlternativeSchema } from "../../shared/schemas/alternatives.js";
 import type { AppContext } from "../app-context.js";
-import { requireFile, uploadOne } from "../lib/uploads.js";
+import { uploadOne } from "../lib/uploads.js";
 import { currentUser, fromParam, parseProjectId, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
 import {
@@ -52,7 +52,7 @@ export function alternativeRoutes({ db }: AppContext): Router {
 
   router.put("/:id/image", uploadOne("image", MAX_IMAGE_BYTES), async (req, res) => {
     const id = altId(req.params.id);
-    res.json(await setImage(db, currentUser(req), id, requireFile(req.file, "image"), req.ip));
+    res.json(await setImage(db, currentUser(req), id, req.file, req.ip));
   });
   router.get("/:id/image", async (req, res) => {
     const image = await getImage(db, currentUser(req), altId(req.params.id));

@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { MAX_DATASET_FILE_BYTES, patchDatasetSchema } from "../../shared/schemas/datasets.js";
 import type { AppContext } from "../app-context.js";
-import { requireFile, uploadOne } from "../lib/uploads.js";
+import { uploadOne } from "../lib/uploads.js";
 import { currentUser, fromParam, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
 import {
@@ -22,7 +22,7 @@ export function alternativeDatasetRoutes({ db }: AppContext): Router {
   });
   router.post("/", uploadOne("file", MAX_DATASET_FILE_BYTES), async (req, res) => {
     const alternativeId = parseObjectId(fromParam("alternativeId")(req), "Alternative");
-    const upload = { metaField: req.body?.meta, file: requireFile(req.file, "file") };
+    const upload = { metaField: req.body?.meta, file: req.file };
     res.status(201).json(await uploadDataset(db, currentUser(req), alternativeId, upload, req.ip));
   });
   return router;

@@ -2,10 +2,10 @@ import { Router } from "express";
 import { importRevisionFieldsSchema, createRevisionSchema } from "../../shared/schemas/revisions.js";
 import { createStudySchema, patchStudySchema } from "../../shared/schemas/studies.js";
 import type { AppContext } from "../app-context.js";
-import { requireFile, uploadOne } from "../lib/uploads.js";
+import { uploadOne } from "../lib/uploads.js";
 import { currentUser, fromParam, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
-import { listStudyRevisions, readStudyFile, saveRevision } from "../services/revisions.js";
+import { importRevision, listStudyRevisions, saveRevision } from "../services/revisions.js";
 import { createStudy, getStudy, listAlternativeStudies, patchStudy } from "../services/studies.js";
 
 const MAX_STUDY_FILE_BYTES = 1024 * 1024;
@@ -57,9 +57,7 @@ export function studyRoutes({ db }: AppContext): Router {
   router.post("/:id/import", uploadOne("file", MAX_STUDY_FILE_BYTES), async (req, res) => {
     const id = studyId(req.params.id);
     const fields = importRevisionFieldsSchema.parse({ parentRevision: "", ...req.body });
-    const file = requireFile(req.file, "file");
-    const study = readStudyFile(file.buffer, file.originalname);
-    res.status(201).json(await saveRevision(db, currentUser(req), id, { ...fields, study }, req.ip, "import"));
+    res.status(201).json(await importRevision(db, currentUser(req), id, fields, req.file, req.ip));
   });
   return router;
 }

@@ -13,6 +13,7 @@ import {
 } from "../db/queries/alternatives.js";
 import { AppError } from "../errors.js";
 import { checkImage } from "../lib/check-image.js";
+import { requireFile } from "../lib/uploads.js";
 import { sha256Hex } from "../lib/hash.js";
 import { assertRole } from "../middleware/auth.js";
 import { loadWithAccess, READ_ROLES, WRITE_ROLES, type Access } from "./access.js";
@@ -117,10 +118,11 @@ export async function setImage(
   db: DbOrTx,
   user: SessionUser,
   id: number,
-  file: { buffer: Buffer; mimetype: string; originalname: string },
+  upload: { buffer: Buffer; mimetype: string; originalname: string } | undefined,
   ip?: string,
 ): Promise<AlternativeDto> {
   await loadAlternative(db, user, id, "write");
+  const file = requireFile(upload, "image");
   const checked = checkImage(file.buffer, file.mimetype);
   if (!checked.ok) throw new AppError(400, "invalid_image", `${checked.message} Nothing was stored.`);
   const sha256 = sha256Hex(file.buffer);

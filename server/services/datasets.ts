@@ -24,6 +24,7 @@ import {
 import type { NewAeroDataset } from "../db/schema/index.js";
 import { AppError } from "../errors.js";
 import { sha256Hex } from "../lib/hash.js";
+import { requireFile } from "../lib/uploads.js";
 import { zodIssues } from "../middleware/error-handler.js";
 import { loadWithAccess, person, type Access } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
@@ -140,12 +141,12 @@ export async function uploadDataset(
   db: DbOrTx,
   user: SessionUser,
   alternativeId: number,
-  upload: { metaField: unknown; file: { buffer: Buffer; originalname: string } },
+  upload: { metaField: unknown; file: { buffer: Buffer; originalname: string } | undefined },
   ip?: string,
 ): Promise<DatasetDto> {
   const alternative = await loadAlternative(db, user, alternativeId, "write");
+  const { buffer, originalname } = requireFile(upload.file, "file");
   const meta = parseMeta(upload.metaField);
-  const { buffer, originalname } = upload.file;
   const parsed =
     meta.kind === "flutter-derivatives"
       ? parseFlutter(buffer, originalname, meta)

@@ -23,6 +23,7 @@ import { findStudy, lockStudy } from "../db/queries/studies.js";
 import { AppError } from "../errors.js";
 import { criticalSpeeds } from "../lib/critical-speeds.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
+import { requireFile } from "../lib/uploads.js";
 import { loadWithAccess, person } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
@@ -222,6 +223,21 @@ export async function exportRevision(db: DbOrTx, user: SessionUser, id: number) 
     text: `${JSON.stringify(row.document, null, 2)}\n`,
     sha256: row.documentSha256,
   };
+}
+
+/** A study file uploaded as the study's next revision; access is checked before the file is read. */
+export async function importRevision(
+  db: DbOrTx,
+  user: SessionUser,
+  studyId: number,
+  fields: { parentRevision: number | null; changeNote: string },
+  upload: { buffer: Buffer; originalname: string } | undefined,
+  ip?: string,
+): Promise<RevisionDto> {
+  await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "write");
+  const file = requireFile(upload, "file");
+  const study = readStudyFile(file.buffer, file.originalname);
+  return saveRevision(db, user, studyId, { ...fields, study }, ip, "import");
 }
 
 /** Reads an uploaded study file (UTF-8 JSON) — 400 `invalid_file` with line and column when it is not JSON. */
