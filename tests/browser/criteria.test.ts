@@ -124,6 +124,13 @@ describe("design wind and criteria on the project page", () => {
     expect(await panel(page).getByText("from memory", { exact: true }).count()).toBeGreaterThanOrEqual(3);
     expect(await panel(page).getByText(/§4\.3\.2, Expr\. \(4\.5\)/).count()).toBeGreaterThan(0);
     await analyst.screenshot("criteria-project-page");
+
+    // At tablet width the wide tables scroll inside the panel; the page itself does not scroll sideways.
+    await page.setViewportSize({ width: 820, height: 1180 });
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await analyst.screenshot("criteria-project-page-tablet");
+    await page.setViewportSize({ width: 1280, height: 800 });
   });
 
   it("the analyst edits the basic wind speed, sees v_m follow before saving, and saves a new version", async () => {

@@ -40,7 +40,12 @@ function usePreview(values: CriteriaFormValues): { evaluated: EvaluatedCriteria 
       const [issue] = formatStudyIssues(parsed.error);
       return { problem: issue ? `${issue.path.replace(/^\$\./, "")} ${issue.message}` : "inputs incomplete" };
     }
-    return { evaluated: evaluateCriteria(parsed.data) };
+    try {
+      return { evaluated: evaluateCriteria(parsed.data) };
+    } catch (error) {
+      // A range the schema lets through but a formula does not (the routine says which input and why).
+      return { problem: error instanceof Error ? error.message : "the inputs cannot be evaluated" };
+    }
   }, [values]);
 }
 
