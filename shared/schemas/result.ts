@@ -36,7 +36,7 @@ export const sweepStepSchema = z.object({
     .describe("Share of each structural mode in the eigenvector's kinetic energy, summing to 1"),
   mac: z
     .number()
-    .describe("Mass-weighted MAC with the same branch's previous step (first speed: with its still-air mode), 0–1"),
+    .describe("Mass-weighted MAC with the same branch's previous solved step (first speed: the hidden lead-in from still air), 0–1"),
   confidence: z.number().describe("Tracker confidence in the assignment, 0–1 (docs/method-and-validation.md)"),
 });
 

@@ -50,7 +50,8 @@ const MIN_STEP_CONFIDENCE = 0.5;
  * Tracks every pole of an n-mode aeroelastic system through a sweep of wind speeds by the p-k method.
  *
  * Method: branch j starts at the still-air pole whose eigenvector correlates best with coordinate j (optimal
- * assignment). At each new speed every branch is predicted by quadratic extrapolation of its last three poles
+ * assignment) and is followed from U = 0 through a hidden lead-in up to the first speed (so a branch keeps the
+ * identity of its structural mode even when the sweep starts at a high speed). At each new speed every branch is predicted by quadratic extrapolation of its last three poles
  * in U and solved by a warm-started p-k iteration (`solveBranchPk`). The step is judged by `assessStep`
  * (optimal MAC assignment, confidence); when any branch swaps, loses shape correlation (MAC < 0.9), falls below
  * confidence 0.5 or fails to converge, the step is halved locally, down to `minStepFraction` of the grid step.
@@ -171,13 +172,16 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     return true;
   };
 
-  // first speed: robust solve from the still-air poles
-  const first = solveRobust(speedsMps[0], references, references);
+  // The sweep is entered from still air: a hidden lead-in from U = 0 up to the first speed, so that each branch
+  // is identified with its structural mode by continuity rather than by shape at a possibly high first speed.
+  const from = speedsMps[0];
+  const grid = [...leadIn(speedsMps), ...speedsMps];
+  const first = solveRobust(grid[0], references, references);
   accept(first, references, references, true);
 
-  for (let g = 1; g < speedsMps.length; g++) {
-    const floor = (speedsMps[g] - speedsMps[g - 1]) * (options.minStepFraction ?? 1 / 64);
-    const targets = [speedsMps[g]];
+  for (let g = 1; g < grid.length; g++) {
+    const floor = (grid[g] - grid[g - 1]) * (options.minStepFraction ?? 1 / 64);
+    const targets = [grid[g]];
     while (targets.length > 0) {
       const target = targets[targets.length - 1];
       const last = branches[0][branches[0].length - 1].speedMps;
@@ -195,7 +199,23 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
       targets.pop();
     }
   }
+  // drop the lead-in; trouble met there is reported at the first speed (the identification depends on it)
+  const visible = branches.map((b) => b.filter((s) => s.speedMps >= from));
+  const atStart = (list: number[]) => [...new Set(list.map((u) => Math.max(u, from)))];
+  return { branches: visible, ambiguousSpeeds: atStart(ambiguousSpeeds), noConvergenceSpeeds: atStart(noConvergenceSpeeds) };
   return { branches, ambiguousSpeeds, noConvergenceSpeeds };
+}
+
+/**
+ * Hidden speeds from 0 up to (not including) the first speed: steps of the grid's first step, at most 200 of them
+ * (never coarser than needed: the tracker still refines locally).
+ */
+function leadIn(speeds: readonly number[]): number[] {
+  const from = speeds[0];
+  if (!(from > 0)) return [];
+  const gridStep = speeds.length > 1 ? speeds[1] - speeds[0] : from;
+  const count = Math.min(200, Math.max(1, Math.ceil(from / gridStep)));
+  return Array.from({ length: count }, (_, i) => (i * from) / count);
 }
 
 /** Optimal assignment of candidate poles to branches: cost (1 − MAC) + min(1, predictor distance / scale). */
