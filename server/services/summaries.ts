@@ -165,6 +165,9 @@ export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<Summ
     signedAt: r.signedAt.toISOString(),
     flutterSpeedMps: r.payload.flutter?.speedMps ?? null,
     outcome: outcome(r),
+    attention: r.payload.margins.flatMap((m) =>
+      m.status === "fail" || m.status === "undetermined" ? [{ phenomenon: m.phenomenon, status: m.status }] : [],
+    ),
     current: r.currentSignatureId === r.id,
     newerUnsigned: r.newerUnsigned,
   }));

@@ -122,6 +122,8 @@ export interface SummaryListItemDto {
   flutterSpeedMps: number | null;
   /** Worst status over the margins (fail > undetermined > pass). */
   outcome: "pass" | "fail" | "undetermined";
+  /** The phenomena whose check fails or is undetermined, in the summary's order. */
+  attention: { phenomenon: string; status: "fail" | "undetermined" }[];
   current: boolean;
   newerUnsigned: boolean;
 }

@@ -24,6 +24,18 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
     {
       path: paths.auth.acceptInvite.path,
       ErrorBoundary: RouteErrorBoundary,
+      HydrateFallback: () => <LoadingBlock label="Loading…" className="min-h-dvh" />,
+      lazy: async () => ({ Component: (await import("@/app/routes/accept-invite")).AcceptInviteRoute }),
+    },
+    {
+      path: paths.auth.resetPassword.path,
+      ErrorBoundary: RouteErrorBoundary,
+      HydrateFallback: () => <LoadingBlock label="Loading…" className="min-h-dvh" />,
+      lazy: async () => ({ Component: (await import("@/app/routes/reset-password")).ResetPasswordRoute }),
+    },
+    {
+      path: paths.auth.acceptInvite.path,
+      ErrorBoundary: RouteErrorBoundary,
       lazy: async () => ({ Component: (await import("@/app/routes/accept-invite")).AcceptInviteRoute }),
     },
     {

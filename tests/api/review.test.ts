@@ -156,7 +156,8 @@ describe("submit → return → submit again → sign", () => {
     expect(state.body.state).toBe("signed");
     expect(state.body.signature).toMatchObject({ summaryId: res.body.summaryId, signer: { name: "Mira Holloway" } });
     expect(state.body.signature.verificationCode).toMatch(/^[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}$/);
-    expect(await auditActions(db, "revision", arranged.revisionId)).toEqual(["revision.create", "review.submit", "review.return", "review.comment", "review.submit", "review.sign"]);
+    const reviewAudit = (await auditActions(db, "revision", arranged.revisionId)).filter((a) => a.startsWith("review."));
+    expect(reviewAudit).toEqual(["review.submit", "review.return", "review.comment", "review.submit", "review.sign"]);
 
     for (const to of ["analyst@stillspan.test", "viewer@stillspan.test"]) {
       const [mail] = await waitForMail(base(), cookies.admin, to, `Signed stability summary: ${studyName}, revision 1`);

@@ -153,6 +153,12 @@ describe("current, superseded and newer unsigned revisions", () => {
     const latest = await api(base(), `/api/summaries/${secondSummaryId}`, { cookie: cookies.viewer });
     expect(latest.body).toMatchObject({ current: true, currentSummary: null });
 
+    // POST /api/signatures/verify says the same to anyone holding the JWS.
+    const checkOld = await api(base(), "/api/signatures/verify", { body: { jws: old.body.jws } });
+    expect(checkOld.body).toMatchObject({ valid: true, current: false, summaryId: firstSummaryId });
+    const checkLatest = await api(base(), "/api/signatures/verify", { body: { jws: latest.body.jws } });
+    expect(checkLatest.body).toMatchObject({ valid: true, current: true, newerUnsigned: false, summaryId: secondSummaryId });
+
     const list = await api(base(), "/api/summaries", { cookie: cookies.viewer });
     const mine = list.body.filter((s: { projectId: string }) => s.projectId === String(projectId));
     expect(mine.map((s: { id: string; current: boolean }) => [s.id, s.current])).toEqual([

@@ -62,7 +62,7 @@ describe("signing in and out in the browser", () => {
     const row = page.getByRole("row").filter({ has: projectLink });
     expect(await row.textContent()).toContain("Analyst");
     const nav = page.getByRole("navigation", { name: "Main" });
-    expect(await nav.getByRole("link").allTextContents()).toEqual(["Projects"]);
+    expect(await nav.getByRole("link").allTextContents()).toEqual(["Projects", "Signed summaries"]);
     await browser.screenshot("projects");
   });
 

@@ -19,8 +19,13 @@ const SIGNED_STATEMENT =
   "Stable with margin at this design stage; to be confirmed by section-model tests.";
 const SUBMIT_NOTE = "Second pass with the revised torsional damping — please review the margins.";
 
-/** The demo study: the first study (by id) of the demo crossing with at least one revision. */
+/**
+ * The demo study: the one the studies' step names "study:single" (alternative B, several revisions), else the
+ * first study (by id) of the demo crossing with at least one revision.
+ */
 async function demoStudyId(ctx: Parameters<SeedStep["run"]>[0]): Promise<number | undefined> {
+  const named = ctx.refs.get("study:single");
+  if (named !== undefined) return named;
   const rows = await ctx.tx
     .select({ id: studies.id })
     .from(studies)
@@ -68,11 +73,10 @@ export const demoReview: SeedStep = {
     }
     const toSign = (await findRevision(tx, revisions[revisions.length - 2].id))!;
     const inReview = revisions[revisions.length - 1];
-    const [criteria, alternative, reviewer] = await Promise.all([
-      findCurrentCriteria(tx, toSign.projectId),
-      findAlternative(tx, toSign.alternativeId),
-      findUserById(tx, reviewerId),
-    ]);
+    // One after the other: a transaction is one connection, which runs one query at a time.
+    const criteria = await findCurrentCriteria(tx, toSign.projectId);
+    const alternative = await findAlternative(tx, toSign.alternativeId);
+    const reviewer = await findUserById(tx, reviewerId);
     if (!criteria || !alternative || !reviewer) throw new Error("seed: demo review needs the criteria, the alternative and the reviewer");
     const [{ name: projectName }] = await tx.select({ name: projects.name }).from(projects).where(eq(projects.id, toSign.projectId));
 

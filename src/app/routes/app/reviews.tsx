@@ -1,7 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { LoaderFunctionArgs } from "react-router-dom";
 import { PageHeader } from "@/components/ui/page-header";
-import { CautionsLine } from "@/components/ui/cautions";
 import { canUseWorkspace } from "@/lib/authorization";
 import { ReviewQueue } from "@/features/review/components/review-queue";
 import { requireAccess } from "@/app/routes/guards";
@@ -21,7 +20,6 @@ export function ReviewsRoute() {
         description="Study revisions submitted to you. Sign the stability summary with your statement, or return the revision with comments."
       />
       <ReviewQueue />
-      <CautionsLine className="mt-4" />
     </>
   );
 }

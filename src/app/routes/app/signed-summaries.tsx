@@ -1,6 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { LoaderFunctionArgs } from "react-router-dom";
-import { CautionsLine } from "@/components/ui/cautions";
 import { PageHeader } from "@/components/ui/page-header";
 import { canReadSignedSummaries } from "@/lib/authorization";
 import { getSummariesQueryOptions } from "@/features/summaries/api/get-summaries";
@@ -23,7 +22,6 @@ export function SignedSummariesRoute() {
         description="Stability summaries signed by the project's reviewing engineer, for the projects you are invited to. Each one is checked against the published keys when you open it."
       />
       <SummariesTable />
-      <CautionsLine className="mt-4" />
     </>
   );
 }

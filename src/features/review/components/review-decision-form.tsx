@@ -10,7 +10,18 @@ import { useSignRevision } from "@/features/review/api/sign-revision";
  * A reviewer's decision on one revision: sign the stability summary with a statement, or return it with
  * comments. Both texts are required by the server; the form says so before sending.
  */
-export function ReviewDecisionForm({ revisionId, revisionNumber }: { revisionId: string; revisionNumber: number }) {
+export type ReviewDecision = { kind: "signed"; summaryId: string } | { kind: "returned" };
+
+export function ReviewDecisionForm({
+  revisionId,
+  revisionNumber,
+  onDecided,
+}: {
+  revisionId: string;
+  revisionNumber: number;
+  /** Called after a successful decision (the queue shows it after the item has left the refreshed list). */
+  onDecided?: (decision: ReviewDecision) => void;
+}) {
   const [statement, setStatement] = useState("");
   const [comments, setComments] = useState("");
   const [problem, setProblem] = useState<string | null>(null);
@@ -39,12 +50,12 @@ export function ReviewDecisionForm({ revisionId, revisionNumber }: { revisionId:
   const onSign = () => {
     setProblem(null);
     if (!statement.trim()) return setProblem("Write your statement before signing: it is signed with the summary.");
-    sign.mutate({ statement }, { onError: (e) => setProblem(e.message) });
+    sign.mutate({ statement }, { onError: (e) => setProblem(e.message), onSuccess: (data) => onDecided?.({ kind: "signed", summaryId: data.summaryId }) });
   };
   const onReturn = () => {
     setProblem(null);
     if (!comments.trim()) return setProblem("Write what the analyst should change before returning the revision.");
-    ret.mutate({ comments }, { onError: (e) => setProblem(e.message) });
+    ret.mutate({ comments }, { onError: (e) => setProblem(e.message), onSuccess: () => onDecided?.({ kind: "returned" }) });
   };
 
   return (

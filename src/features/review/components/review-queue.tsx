@@ -7,11 +7,12 @@ import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { formatDateTime } from "@/lib/format";
 import { useReviewQueue } from "@/features/review/api/get-review-queue";
-import { ReviewDecisionForm } from "@/features/review/components/review-decision-form";
+import { useState } from "react";
+import { ReviewDecisionForm, type ReviewDecision } from "@/features/review/components/review-decision-form";
 
 const mps = (v: number | null) => (v === null ? "none found" : `${v.toFixed(1)} m/s`);
 
-function QueueItem({ item }: { item: ReviewQueueItemDto }) {
+function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (d: ReviewDecision) => void }) {
   const newer = item.latestNumber > item.revisionNumber;
   return (
     <Card
@@ -62,14 +63,41 @@ function QueueItem({ item }: { item: ReviewQueueItemDto }) {
           Revision {item.latestNumber} of this study already exists; you are reviewing revision {item.revisionNumber}.
         </p>
       ) : null}
-      <ReviewDecisionForm revisionId={item.revisionId} revisionNumber={item.revisionNumber} />
+      <ReviewDecisionForm revisionId={item.revisionId} revisionNumber={item.revisionNumber} onDecided={onDecided} />
     </Card>
+  );
+}
+
+/** What was just decided here; it stays on the page after the refreshed queue no longer lists the revision. */
+function DecidedNotice({ item, decision }: { item: ReviewQueueItemDto; decision: ReviewDecision }) {
+  return (
+    <p
+      role="status"
+      className={
+        decision.kind === "signed"
+          ? "rounded-md border border-steady-100 bg-steady-100 px-3 py-2 text-steady-700"
+          : "rounded-md border border-ink-200 bg-ink-50 px-3 py-2 text-ink-700"
+      }
+    >
+      {item.studyName}: revision {item.revisionNumber}{" "}
+      {decision.kind === "signed" ? (
+        <>
+          is signed.{" "}
+          <Link className="font-semibold underline" to={paths.app.summary.getHref(decision.summaryId)}>
+            Open the signed summary
+          </Link>
+        </>
+      ) : (
+        "was returned to the analyst with your comments."
+      )}
+    </p>
   );
 }
 
 /** The reviewer's queue: every revision waiting for their review, each with its decision form. */
 export function ReviewQueue() {
   const queue = useReviewQueue();
+  const [decided, setDecided] = useState<{ item: ReviewQueueItemDto; decision: ReviewDecision }[]>([]);
   if (queue.isPending) return <LoadingBlock label="Loading the revisions waiting for you…" />;
   if (queue.isError) {
     return (
@@ -82,18 +110,22 @@ export function ReviewQueue() {
       />
     );
   }
-  if (queue.data.length === 0) {
-    return (
-      <Card title="Nothing waiting">
-        <p className="text-ink-700">No revision is waiting for your review. Analysts' submissions to you appear here.</p>
-      </Card>
-    );
-  }
+  const decidedIds = new Set(decided.map((d) => d.item.revisionId));
+  const waiting = queue.data.filter((item) => !decidedIds.has(item.revisionId));
   return (
     <div className="space-y-4">
-      {queue.data.map((item) => (
-        <QueueItem key={item.revisionId} item={item} />
+      {decided.map((d) => (
+        <DecidedNotice key={d.item.revisionId} {...d} />
       ))}
+      {waiting.length === 0 ? (
+        <Card title="Nothing waiting">
+          <p className="text-ink-700">No revision is waiting for your review. Analysts' submissions to you appear here.</p>
+        </Card>
+      ) : (
+        waiting.map((item) => (
+          <QueueItem key={item.revisionId} item={item} onDecided={(decision) => setDecided((list) => [{ item, decision }, ...list])} />
+        ))
+      )}
     </div>
   );
 }

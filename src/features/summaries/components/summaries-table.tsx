@@ -10,9 +10,15 @@ import { useSummaries } from "@/features/summaries/api/get-summaries";
 
 const OUTCOME = {
   pass: { label: "All checks pass", tone: "bg-steady-100 text-steady-700" },
-  fail: { label: "A check fails", tone: "bg-signal-50 text-signal-700" },
+  fail: { label: "Fails", tone: "bg-signal-50 text-signal-700" },
   undetermined: { label: "Undetermined", tone: "bg-caution-100 text-caution-700" },
 } as const;
+const PHENOMENON: Record<string, string> = {
+  flutter: "flutter",
+  divergence: "divergence",
+  vortexOnset: "vortex shedding",
+  gallopingOnset: "galloping",
+};
 
 /** Every signed summary of the caller's projects, newest first, with whether each is still current. */
 export function SummariesTable() {
@@ -68,6 +74,11 @@ export function SummariesTable() {
                     <span className={cn("rounded-sm px-1.5 py-0.5 text-sm font-semibold whitespace-nowrap", OUTCOME[s.outcome].tone)}>
                       {OUTCOME[s.outcome].label}
                     </span>
+                    {s.attention.length > 0 ? (
+                      <span className="mt-0.5 block text-sm text-ink-700">
+                        {s.attention.map((a) => `${PHENOMENON[a.phenomenon] ?? a.phenomenon}${a.status === "undetermined" ? " (undetermined)" : ""}`).join(", ")}
+                      </span>
+                    ) : null}
                   </td>
                   <td className="px-4 py-2 align-top whitespace-nowrap text-ink-700">
                     {s.signer.name}

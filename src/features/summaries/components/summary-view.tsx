@@ -155,7 +155,12 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
         <Figure label="Design mean wind at deck" value={mps(p.designWind.meanSpeedMps)} detail={`v_b ${p.designWind.basicSpeedMps} m/s · deck at ${p.designWind.deckHeightM} m`} />
       </div>
 
-      <Card title="Margins against the required speeds" subtitle="Critical speed ÷ required speed; pass at 1.00 or more" flush>
+      <Card
+        title="Margins against the required speeds"
+        subtitle="Critical speed ÷ required speed; pass at 1.00 or more"
+        aria-label="Margins against the required speeds"
+        flush
+      >
         <MarginsTable payload={p} />
       </Card>
 

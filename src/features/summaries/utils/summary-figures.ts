@@ -3,23 +3,60 @@ import type { SummaryPayload } from "@shared/schemas/summary";
 import type { PlotFigure } from "@/components/ui/plot";
 import { axis, baseLayout, seriesColour, token } from "@/components/ui/plot-theme";
 
-const marker = (x: number, colour: string, dash: string, label: string) => ({
+const marker = (x: number, colour: string, dash: string, label: string, side: "left" | "right") => ({
   shape: { type: "line", x0: x, x1: x, yref: "paper", y0: 0, y1: 1, line: { color: colour, width: 1.5, dash } },
-  annotation: { x, yref: "paper", y: 1, yanchor: "bottom", text: label, showarrow: false, font: { size: 11, color: colour } },
+  // Labels sit on the outer side of their line so that close speeds do not print over each other.
+  annotation: {
+    x,
+    yref: "paper",
+    y: 0.99,
+    yanchor: "top",
+    xanchor: side === "left" ? "right" : "left",
+    xshift: side === "left" ? -3 : 3,
+    text: label,
+    showarrow: false,
+    bgcolor: "rgba(255,255,255,0.85)",
+    font: { size: 11, color: colour },
+  },
 });
 
 /** Speed markers shared by the damping and frequency plots: flutter speed (signal colour) and required speed. */
 function speedMarkers(summary: SummaryPayload) {
   const list = [];
   const required = summary.criteria.find((c) => c.phenomenon === "flutter")?.requiredSpeedMps;
-  if (required !== undefined) list.push(marker(required, token("--color-ink-600"), "dot", `required ${required.toFixed(1)} m/s`));
-  if (summary.flutter) list.push(marker(summary.flutter.speedMps, token("--color-signal-600"), "dash", `flutter ${summary.flutter.speedMps.toFixed(1)} m/s`));
+  const flutter = summary.flutter?.speedMps;
+  const requiredFirst = required !== undefined && (flutter === undefined || required <= flutter);
+  if (required !== undefined) {
+    list.push(marker(required, token("--color-ink-600"), "dot", `required ${required.toFixed(1)} m/s`, requiredFirst ? "left" : "right"));
+  }
+  if (flutter !== undefined) {
+    list.push(marker(flutter, token("--color-signal-600"), "dash", `flutter ${flutter.toFixed(1)} m/s`, requiredFirst ? "right" : "left"));
+  }
   return { shapes: list.map((m) => m.shape), annotations: list.map((m) => m.annotation) };
+}
+
+/**
+ * Vertical range of the damping plot, %: that of the oscillatory steps (frequency > 0), padded. A static (real)
+ * pole has ζ = ±1 and would squash the flutter crossing into a line; it is still drawn, clipped at the edge.
+ */
+function dampingRange(branches: readonly SummaryBranchDto[]): [number, number] | undefined {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const b of branches) for (const s of b.steps) if (s.frequency > 0) {
+    lo = Math.min(lo, s.damping * 100);
+    hi = Math.max(hi, s.damping * 100);
+  }
+  if (!Number.isFinite(lo)) return undefined;
+  lo = Math.min(lo, 0);
+  hi = Math.max(hi, 0);
+  const pad = 0.08 * Math.max(hi - lo, 1);
+  return [lo - pad, hi + pad];
 }
 
 /** Damping ratio of every branch against the mean wind speed; the zero line is the stability boundary. */
 export function dampingFigure(summary: SummaryPayload, branches: readonly SummaryBranchDto[]): PlotFigure {
   const { shapes, annotations } = speedMarkers(summary);
+  const range = dampingRange(branches);
   return {
     data: branches.map((b, i) => ({
       type: "scatter",
@@ -32,7 +69,7 @@ export function dampingFigure(summary: SummaryPayload, branches: readonly Summar
     })),
     layout: baseLayout({
       xaxis: axis("Mean wind speed U, m/s"),
-      yaxis: axis("Damping ratio ζ, %", { zerolinecolor: token("--color-ink-900"), zerolinewidth: 1.5 }),
+      yaxis: axis("Damping ratio ζ, %", { zerolinecolor: token("--color-ink-900"), zerolinewidth: 1.5, ...(range ? { range } : {}) }),
       shapes,
       annotations,
       margin: { l: 56, r: 12, t: 28, b: 40 },
