@@ -34,16 +34,6 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import("@/app/routes/reset-password")).ResetPasswordRoute }),
     },
     {
-      path: paths.auth.acceptInvite.path,
-      ErrorBoundary: RouteErrorBoundary,
-      lazy: async () => ({ Component: (await import("@/app/routes/accept-invite")).AcceptInviteRoute }),
-    },
-    {
-      path: paths.auth.resetPassword.path,
-      ErrorBoundary: RouteErrorBoundary,
-      lazy: async () => ({ Component: (await import("@/app/routes/reset-password")).ResetPasswordRoute }),
-    },
-    {
       path: paths.home.path,
       ErrorBoundary: RouteErrorBoundary,
       HydrateFallback: () => <LoadingBlock label="Loading Stillspan…" className="min-h-dvh" />,
