@@ -19,10 +19,31 @@ import { WARNING_TITLES } from "@/features/studies/utils/warning-text";
 
 const MAX = 4;
 
-/** Short name of a revision in legends and column heads: "Twin box · Baseline r3". */
+/** Full name of a revision for column heads: "Twin box · Baseline r3". */
 function labelOf(revision: RevisionDto, comparison: ComparisonDto | undefined): string {
   const row = comparison?.rows.find((r) => r.studyId === revision.studyId);
   return `${row ? `${row.alternativeName} · ` : ""}${revision.studyName} r${revision.number}`;
+}
+
+/** The leading words of a name, up to a dash or bracket ("B — single box (invented)" → "B"), at most 24 characters. */
+function shortName(name: string): string {
+  const head = name.split(/\s[—–(·]|\s-\s/)[0].trim();
+  return head.length <= 24 ? head : `${head.slice(0, 23)}…`;
+}
+
+/**
+ * Legend names for plots: "r3" when every picked revision belongs to one study, else the alternative's (or the
+ * study's) short name and the revision ("B r3"); the table heads carry the full names.
+ */
+function legendNames(revisions: readonly RevisionDto[], comparison: ComparisonDto | undefined): string[] {
+  const oneStudy = new Set(revisions.map((r) => r.studyId)).size === 1;
+  if (oneStudy) return revisions.map((r) => `r${r.number}`);
+  const alternativesDiffer = new Set(revisions.map((r) => r.alternativeId)).size === revisions.length;
+  return revisions.map((r) => {
+    const row = comparison?.rows.find((x) => x.studyId === r.studyId);
+    const base = alternativesDiffer && row ? shortName(row.alternativeName) : shortName(r.studyName);
+    return `${base} r${r.number}`;
+  });
 }
 
 /**
@@ -37,7 +58,11 @@ export function CompareView({ projectId }: { projectId: string }) {
   const revisions = useRevisionList(selected);
   const loaded = revisions.every((q) => q.isSuccess);
   const runs = useMemo(
-    () => (loaded ? revisions.map((q) => ({ name: labelOf(q.data!, comparison.data), result: q.data!.result })) : []),
+    () => {
+      if (!loaded) return [];
+      const names = legendNames(revisions.map((q) => q.data!), comparison.data);
+      return revisions.map((q, i) => ({ name: names[i], result: q.data!.result }));
+    },
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [loaded, selected.join(","), comparison.data],
   );
@@ -124,6 +149,7 @@ function ComparisonTable({ revisions, comparison, required }: {
   comparison: ComparisonDto | undefined;
   required: Parameters<typeof computeMargins>[1] | null;
 }) {
+  const legend = legendNames(revisions, comparison);
   const columns = revisions.map((revision) => {
     const margins = required ? computeMargins(criticalSpeedsOf(revision.result, revision.study), required) : null;
     return { revision, margins };
@@ -150,7 +176,8 @@ function ComparisonTable({ revisions, comparison, required }: {
               <th scope="col" className="px-4 py-1.5 text-xs font-semibold tracking-wide text-ink-600 uppercase">Quantity</th>
               {columns.map(({ revision }, i) => (
                 <th key={revision.id} scope="col" className="px-2 py-1.5 font-semibold" style={{ color: seriesColour(i) }}>
-                  {labelOf(revision, comparison)}
+                  <span className="block">{legend[i]}</span>
+                  <span className="block text-xs font-normal text-ink-700">{labelOf(revision, comparison)}</span>
                 </th>
               ))}
             </tr>

@@ -27,7 +27,9 @@ export function LivePreview({ state, blockedReason }: { state: PreviewState; blo
         <span data-testid="preview-flutter" className="num font-semibold">
           {flutter ? `flutter ≈ ${flutter.speed.toFixed(2)} m/s at ${flutter.frequency.toFixed(3)} Hz` : "no flutter in the sweep"}
         </span>
-        <span className="num ml-2 text-xs text-ink-600">{Math.round(state.elapsedMs)} ms in this browser</span>
+        <span className="num ml-2 text-xs text-ink-600">
+          {state.elapsedMs === null ? "the stored result; edits recompute it here" : `${Math.round(state.elapsedMs)} ms in this browser`}
+        </span>
       </>
     );
   }

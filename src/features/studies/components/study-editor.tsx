@@ -83,7 +83,9 @@ export function StudyEditor(props: StudyEditorProps) {
       : parsed.success
         ? null
         : "fix the marked inputs";
-  const preview = useSweepPreview(readOnly ? null : document, valuesKey);
+  // The preview starts from the revision's stored result while the inputs are still the revision's.
+  const [known] = useState(() => ({ key: keyOf(form.getValues()), result: revision.result }));
+  const preview = useSweepPreview(readOnly ? null : document, valuesKey, draft ? undefined : known);
   const unsaved = useMemo(
     () => (readOnly ? 0 : diffDocuments(revision.study, document ?? values).length + gridErrors.length),
     [valuesKey, gridErrors.length], // eslint-disable-line react-hooks/exhaustive-deps

@@ -6,7 +6,8 @@ import type { PreviewRequest, PreviewResponse } from "@/features/studies/utils/s
 export type PreviewState =
   | { status: "idle" }
   | { status: "computing"; previous: SweepResult | null }
-  | { status: "done"; result: SweepResult; elapsedMs: number }
+  /** `elapsedMs` null: the inputs are those of a stored result, shown as is. */
+  | { status: "done"; result: SweepResult; elapsedMs: number | null }
   | { status: "error"; message: string };
 
 const DEBOUNCE_MS = 300;
@@ -21,8 +22,14 @@ function createWorker(): Worker {
  * behind itself). `study` must be a valid document, or null to pause (e.g. while the form has errors); `key`
  * identifies the document's content so unchanged renders do not restart the work.
  */
-export function useSweepPreview(study: StudyDocument | null, key: string): PreviewState {
-  const [state, setState] = useState<PreviewState>({ status: "idle" });
+export function useSweepPreview(
+  study: StudyDocument | null,
+  key: string,
+  known?: { key: string; result: SweepResult },
+): PreviewState {
+  const [state, setState] = useState<PreviewState>(() =>
+    known && known.key === key ? { status: "done", result: known.result, elapsedMs: null } : { status: "idle" },
+  );
   const workerRef = useRef<{ worker: Worker; busy: boolean } | null>(null);
   const lastResult = useRef<SweepResult | null>(null);
   const sequence = useRef(0);
@@ -30,6 +37,11 @@ export function useSweepPreview(study: StudyDocument | null, key: string): Previ
   useEffect(() => {
     if (!study) return;
     const id = ++sequence.current;
+    if (known && known.key === key) {
+      lastResult.current = known.result;
+      setState({ status: "done", result: known.result, elapsedMs: null });
+      return;
+    }
     const timer = window.setTimeout(() => {
       let slot = workerRef.current;
       if (slot?.busy) {

@@ -105,7 +105,7 @@ function flutterAnnotations(runs: readonly PlotRun[]): Record<string, unknown>[]
   return runs.flatMap((run, r) =>
     run.result.flutter
       ? [{
-          x: run.result.flutter.speed, y: 1 - Math.floor(r / 2) * 0.09, xref: "x", yref: "paper", yanchor: "top", xanchor: r % 2 === 0 ? "right" : "left",
+          x: run.result.flutter.speed, y: 1 - r * 0.09, xref: "x", yref: "paper", yanchor: "top", xanchor: "left",
           text: `U<sub>F</sub> ${run.result.flutter.speed.toFixed(1)}${runs.length > 1 ? ` (${run.name})` : ""}`,
           showarrow: false, font: { size: 11, color: token("--color-signal-700") }, bgcolor: "rgba(252,252,250,0.85)",
         }]
