@@ -8,7 +8,6 @@ import { ApiError } from "@/lib/api-client";
 import { formatDate } from "@/lib/format";
 import { useProject } from "@/features/projects/api/get-project";
 import { ProjectRoleBadge } from "@/features/projects/components/project-role-badge";
-import { DesignWindPanel } from "@/features/criteria/components/design-wind-panel";
 
 const backLink = (
   <Link to={paths.app.projects.getHref()} className="text-tide-700 hover:underline">
@@ -86,7 +85,6 @@ export function ProjectOverview({ projectId, isAdmin }: { projectId: string; isA
           </dl>
         </Card>
       </div>
-      <DesignWindPanel className="mt-4" projectId={projectId} canEdit={role === "analyst" || isAdmin} />
     </>
   );
 }
