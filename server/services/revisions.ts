@@ -101,18 +101,26 @@ export async function saveRevision(
     });
   }
   const { result, sha256 } = compute(study);
-  const id = await db.transaction(async (tx) => {
-    const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, result, sha256);
-    await writeAudit(tx, {
-      actorId: user.id,
-      action: "revision.create",
-      objectType: "revision",
-      objectId: inserted.id,
-      ip,
-      details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: result.engine, source },
+  const id = await db
+    .transaction(async (tx) => {
+      const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, result, sha256);
+      await writeAudit(tx, {
+        actorId: user.id,
+        action: "revision.create",
+        objectType: "revision",
+        objectId: inserted.id,
+        ip,
+        details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: result.engine, source },
+      });
+      return inserted.id;
+    })
+    .catch(async (err: unknown) => {
+      // Backstop behind the row lock: the unique (study_id, number) key turns any race that got past it into
+      // the same 409 as a stale parent, never a 500.
+      if (!isUniqueViolation(err)) throw err;
+      const latest = await findLatestRevision(db, studyId);
+      throw latest ? staleParent(latest, { parentRevision: input.parentRevision, changeNote, study }) : err;
     });
-    return inserted.id;
-  });
   return toRevisionDto((await findRevision(db, id))!);
 }
 
@@ -127,6 +135,30 @@ function compute(study: StudyDocument) {
   return { result, sha256: canonicalSha256Hex(study) };
 }
 
+/** 409 `stale_parent`: names the newer revision and its author, and hands the rejected document back. */
+function staleParent(
+  latest: RevisionSummaryRow,
+  rejected: { parentRevision: number | null; changeNote: string; study: StudyDocument },
+): AppError {
+  const details: StaleParentDetails = {
+    latest: { id: String(latest.id), number: latest.number, author: person(latest.authorId, latest.authorName), createdAt: latest.createdAt.toISOString() },
+    rejected: { parentRevision: rejected.parentRevision, changeNote: rejected.changeNote, study: rejected.study },
+  };
+  const base = rejected.parentRevision === null ? "a new study" : `revision ${rejected.parentRevision}`;
+  return new AppError(
+    409,
+    "stale_parent",
+    `Revision ${latest.number} by ${latest.authorName ?? "a former user"} was saved after ${base}, which your edit started from. ` +
+      `Your document was not stored; it is returned so you can apply your changes on top of revision ${latest.number}.`,
+    { details },
+  );
+}
+
+const isUniqueViolation = (err: unknown) => {
+  const e = err as { code?: string; cause?: { code?: string } };
+  return e.code === "23505" || e.cause?.code === "23505";
+};
+
 /** Inside the caller's transaction: lock the study, check the parent, insert the next number. */
 export async function appendRevision(
   tx: DbOrTx,
@@ -140,20 +172,7 @@ export async function appendRevision(
   const latest = await findLatestRevision(tx, studyId);
   const latestNumber = latest?.number ?? null;
   if (input.parentRevision !== latestNumber) {
-    if (latest && (input.parentRevision === null || input.parentRevision < latest.number)) {
-      const details: StaleParentDetails = {
-        latest: { id: String(latest.id), number: latest.number, author: person(latest.authorId, latest.authorName), createdAt: latest.createdAt.toISOString() },
-        rejected: { parentRevision: input.parentRevision, changeNote: input.changeNote, study: input.study },
-      };
-      const base = input.parentRevision === null ? "a new study" : `revision ${input.parentRevision}`;
-      throw new AppError(
-        409,
-        "stale_parent",
-        `Revision ${latest.number} by ${latest.authorName ?? "a former user"} was saved after ${base}, which your edit started from. ` +
-          `Your document was not stored; it is returned so you can apply your changes on top of revision ${latest.number}.`,
-        { details },
-      );
-    }
+    if (latest && (input.parentRevision === null || input.parentRevision < latest.number)) throw staleParent(latest, input);
     throw new AppError(400, "invalid_input", `parentRevision: revision ${input.parentRevision} does not exist in this study (latest: ${latestNumber ?? "none"}).`, {
       details: [{ path: "parentRevision", rule: "not_found", message: `revision ${input.parentRevision} does not exist` }],
     });

@@ -2,7 +2,10 @@ import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { canonicalJson } from "../../shared/canonical-json.js";
 import { ENGINE_VERSION } from "../../shared/engine/version.js";
+import { runSweep } from "../../shared/engine/run-sweep.js";
+import { parseStudy } from "../../shared/schemas/study.js";
 import { canonicalSha256Hex } from "../../server/lib/hash.js";
+import { appendRevision } from "../../server/services/revisions.js";
 import { createProjectWithMembers, openTestDb, userId } from "../support/db.js";
 import { testEnv } from "../support/env.js";
 import { api, signIn } from "../support/http.js";
@@ -125,6 +128,47 @@ describe("POST /api/studies/:id/revisions", () => {
     const list = await api(base(), `/api/studies/${studyId}/revisions`, { cookie: reviewer });
     expect(list.body.map((r: { number: number }) => r.number)).toEqual([1, 2, 3, 4]);
     expect(list.body.map((r: { superseded: boolean }) => r.superseded)).toEqual([true, true, true, false]);
+  });
+});
+
+describe("the row lock on the study", () => {
+  it("makes a second append on the same parent wait for the first one's commit, then refuses it with 409", async () => {
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const parsed = parseStudy(inventedStudy());
+    if (!parsed.ok) throw new Error("fixture study is invalid");
+    const study = parsed.study;
+    const result = runSweep(study);
+    const sha = canonicalSha256Hex(study);
+    const author = { id: await userId(db, "analyst@stillspan.test") };
+    const events: string[] = [];
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    let inserted!: () => void;
+    const firstInserted = new Promise<void>((resolve) => (inserted = resolve));
+
+    const first = db.transaction(async (tx) => {
+      await appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "first", study }, result, sha);
+      events.push("first inserted");
+      inserted();
+      await held;
+      events.push("first commits");
+    });
+    await firstInserted;
+    const second = db
+      .transaction((tx) => appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "second", study }, result, sha))
+      .then(
+        () => "stored",
+        (err: { status?: number; code?: string }) => `${err.status} ${err.code}`,
+      )
+      .finally(() => events.push("second answered"));
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    expect(events, "the second append must be waiting on the lock").toEqual(["first inserted"]);
+
+    release();
+    await first;
+
+    expect(await second).toBe("409 stale_parent");
+    expect(events).toEqual(["first inserted", "first commits", "second answered"]);
   });
 });
 
