@@ -15,6 +15,9 @@ export interface PoleWorkspace {
   readonly rIm: Float64Array;
   readonly xRe: Float64Array;
   readonly xIm: Float64Array;
+  /** Normalisation vector v of the bordered Newton (unit length). */
+  readonly vRe: Float64Array;
+  readonly vIm: Float64Array;
   /** LU factors of the bordered Jacobian, (n+1)×(n+1), reused by chord iterations. */
   readonly luRe: Float64Array;
   readonly luIm: Float64Array;
@@ -38,6 +41,8 @@ export function createPoleWorkspace(n: number): PoleWorkspace {
     rIm: new Float64Array(m),
     xRe: new Float64Array(n),
     xIm: new Float64Array(n),
+    vRe: new Float64Array(n),
+    vIm: new Float64Array(n),
     luRe: new Float64Array(m * m),
     luIm: new Float64Array(m * m),
     pivots: new Int32Array(m),

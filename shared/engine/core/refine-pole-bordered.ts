@@ -47,13 +47,18 @@ export function refinePoleBordered(
   const { luRe, luIm, pivots, rRe, rIm, xRe, xIm } = work;
   const c = work.dampTot;
   const k = work.stiffTot;
-  // v = start; x0 = v / (vᴴv) so that vᴴx0 = 1
+  // v = start / ‖start‖ and x0 = v (so vᴴx0 = 1): unit scale in every call, so that factors kept from an earlier
+  // call (whose border row holds that call's v) still fit
+  const { vRe, vIm } = work;
   let vv = 0;
   for (let i = 0; i < n; i++) vv += startRe[i] * startRe[i] + startIm[i] * startIm[i];
   if (!(vv > 0)) return false;
+  const inv = 1 / Math.sqrt(vv);
   for (let i = 0; i < n; i++) {
-    xRe[i] = startRe[i] / vv;
-    xIm[i] = startIm[i] / vv;
+    vRe[i] = startRe[i] * inv;
+    vIm[i] = startIm[i] * inv;
+    xRe[i] = vRe[i];
+    xIm[i] = vIm[i];
   }
   let lr = guessRe;
   let li = guessIm;
@@ -101,14 +106,14 @@ export function refinePoleBordered(
       rRe[i] = -qxr;
       rIm[i] = -qxi;
       // vᴴx for the last residual
-      lastRe += startRe[i] * xRe[i] + startIm[i] * xIm[i];
-      lastIm += startRe[i] * xIm[i] - startIm[i] * xRe[i];
+      lastRe += vRe[i] * xRe[i] + vIm[i] * xIm[i];
+      lastIm += vRe[i] * xIm[i] - vIm[i] * xRe[i];
     }
     if (refactor) {
       const lrow = n * m;
       for (let j = 0; j < n; j++) {
-        luRe[lrow + j] = startRe[j];
-        luIm[lrow + j] = -startIm[j];
+        luRe[lrow + j] = vRe[j];
+        luIm[lrow + j] = -vIm[j];
       }
       luRe[lrow + n] = 0;
       luIm[lrow + n] = 0;
