@@ -3,7 +3,9 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { SUMMARY_CAUTIONS } from "../../shared/schemas/summary.js";
 import { pdfText } from "../../server/pdf/__tests__/pdf-text.js";
-import { artifactsDir, launchBrowser, type BrowserSession } from "../support/browser";
+import { artifactsDir, baseUrl, launchBrowser, type BrowserSession } from "../support/browser";
+import { api, signIn as apiSignIn } from "../support/http.js";
+import { waitForMail } from "../support/review.js";
 
 const DEMO_PASSWORD = "stillspan-demo";
 const DEMO_STUDY = "Flutter and divergence — alternative B";
@@ -122,6 +124,96 @@ describe("review and signed summary in the browser", () => {
     await browser.screenshot("summary-superseded");
     await banner.getByRole("link", { name: `Open the current summary (revision ${signedRevision})` }).click();
     await page.waitForURL((url) => url.pathname === summaryPath);
+  });
+
+  it("the visit logged no uncaught error and no console error or warning", () => {
+    expect(problems).toEqual([]);
+  });
+});
+
+describe("one-time links in the browser: accepting an invitation, resetting a password", () => {
+  let browser: BrowserSession;
+  const problems: string[] = [];
+  const suffix = Date.now().toString(36);
+  const email = `invited-${suffix}@stillspan.test`;
+  let admin: string;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
+    browser.page.on("console", (message) => {
+      const expectedRefusal = /Failed to load resource: the server responded with a status of 4(01|04|10)/;
+      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
+        problems.push(`${message.type()}: ${message.text()}`);
+      }
+    });
+    admin = await apiSignIn(baseUrl(), "admin@stillspan.test");
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("an invited owner's representative opens the e-mailed link, chooses a password and signs in", async () => {
+    const { page } = browser;
+    const projects = await api(baseUrl(), "/api/projects", { cookie: admin });
+    const demo = projects.body.find((p: { name: string }) => p.name.startsWith("Harrowmere"));
+    const invited = await api(baseUrl(), `/api/projects/${demo.id}/invitations`, { cookie: admin, body: { email, role: "viewer", name: "Ines Harlow" } });
+    expect(invited.status).toBe(201);
+    const [mail] = await waitForMail(baseUrl(), admin, email, "You are invited to");
+    const link = new URL(/https?:\/\/\S+\/accept-invite\?token=\S+/.exec(mail.text)![0]);
+
+    await page.goto(browser.url(`${link.pathname}${link.search}`));
+    await page.getByRole("heading", { name: "Accept your invitation" }).waitFor();
+    await page.getByLabel("Your name").fill("Ines Harlow");
+    await page.getByLabel("Password", { exact: true }).fill("short");
+    await page.getByLabel("Password again").fill("short");
+    await page.getByRole("button", { name: "Accept the invitation" }).click();
+    expect(await page.getByRole("alert").textContent()).toContain("at least 10 characters");
+    await page.getByLabel("Password", { exact: true }).fill("owner-rep-passphrase");
+    await page.getByLabel("Password again").fill("owner-rep-passphrase");
+    await page.getByRole("button", { name: "Accept the invitation" }).click();
+    await page.getByText("Your account is ready.").waitFor();
+    await browser.screenshot("accept-invitation");
+
+    // The same link again: refused, with the reason.
+    await page.goto(browser.url(`${link.pathname}${link.search}`));
+    await page.getByLabel("Your name").fill("Someone Else");
+    await page.getByLabel("Password", { exact: true }).fill("another-passphrase");
+    await page.getByLabel("Password again").fill("another-passphrase");
+    await page.getByRole("button", { name: "Accept the invitation" }).click();
+    expect(await page.getByRole("alert").textContent()).toContain("already been used");
+
+    await page.goto(browser.url("/signed-summaries"));
+    await page.waitForURL((url) => url.pathname === "/sign-in");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("owner-rep-passphrase");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((url) => url.pathname === "/signed-summaries");
+    await page.getByRole("link", { name: new RegExp(`^${DEMO_STUDY}, revision \\d+$`) }).first().waitFor();
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL((url) => url.pathname === "/sign-in");
+  });
+
+  it("a forgotten password is reset from the sign-in page through the e-mailed link", async () => {
+    const { page } = browser;
+    await page.getByRole("link", { name: "Forgot your password?" }).click();
+    await page.getByRole("heading", { name: "Reset your password" }).waitFor();
+    await page.getByLabel("E-mail address").fill(email);
+    await page.getByRole("button", { name: "Send me a link" }).click();
+    await page.getByText("If an account exists for this address").waitFor();
+    await browser.screenshot("password-reset-requested");
+
+    const [mail] = await waitForMail(baseUrl(), admin, email, "Choose a new Stillspan password");
+    const link = new URL(/https?:\/\/\S+\/reset-password\?token=\S+/.exec(mail.text)![0]);
+    await page.goto(browser.url(`${link.pathname}${link.search}`));
+    await page.getByLabel("New password", { exact: true }).fill("renewed-passphrase");
+    await page.getByLabel("New password again").fill("renewed-passphrase");
+    await page.getByRole("button", { name: "Set the new password" }).click();
+    await page.getByText("Your password is changed.").waitFor();
+    await browser.screenshot("password-reset-done");
+
+    const res = await api(baseUrl(), "/api/auth/sign-in", { body: { email, password: "renewed-passphrase" } });
+    expect(res.status).toBe(200);
   });
 
   it("the visit logged no uncaught error and no console error or warning", () => {
