@@ -58,13 +58,16 @@ export function SaveRevisionPanel(props: SaveRevisionPanelProps) {
   const navigate = useNavigate();
   const queryClient = useQueryClient();
   const changes = document ? diffDocuments(baseDocument, document) : [];
+  // From an older revision, saving puts these inputs on top of the latest (a restore, with or without edits).
+  const isOlder = revision.number < revision.latestNumber;
+  const parentRevision = isOlder ? revision.latestNumber : revision.number;
   const noteMissing = note.trim() === "";
   const conflict = staleDetails(create.error);
 
   const save = () => {
     if (!document || noteMissing) return;
     create.mutate(
-      { parentRevision: revision.number, changeNote: note.trim(), study: document },
+      { parentRevision, changeNote: note.trim(), study: document },
       {
         onSuccess: (saved) => {
           setNote("");
@@ -90,7 +93,14 @@ export function SaveRevisionPanel(props: SaveRevisionPanelProps) {
   };
 
   return (
-    <Card title="Save as a new revision" subtitle={`Starts from revision ${revision.number}; the server runs and stores the sweep`}>
+    <Card
+      title="Save as a new revision"
+      subtitle={
+        isOlder
+          ? `Opened from revision ${revision.number}; saving stores these inputs as revision ${revision.latestNumber + 1}, on top of revision ${revision.latestNumber}`
+          : `Starts from revision ${revision.number}; the server runs and stores the sweep`
+      }
+    >
       <div className="space-y-3">
         <Field label="Document name" {...register("name")} error={errors.name?.message} className="h-8" />
         <div className="space-y-1">
@@ -106,14 +116,16 @@ export function SaveRevisionPanel(props: SaveRevisionPanelProps) {
           />
         </div>
         <div className="flex flex-wrap items-center gap-3">
-          <Button onClick={save} isLoading={create.isPending} disabled={!document || noteMissing || changes.length === 0}>
+          <Button onClick={save} isLoading={create.isPending} disabled={!document || noteMissing || (changes.length === 0 && !isOlder)}>
             Save revision
           </Button>
           <span className="text-sm text-ink-600">
             {!document
               ? `Cannot save: ${blockedReason}.`
               : changes.length === 0
-                ? "No changes from the revision yet."
+                ? isOlder
+                  ? `Unchanged from revision ${revision.number}: saving restores it as the latest — add a change note.`
+                  : "No changes from the revision yet."
                 : noteMissing
                   ? `${changes.length} field${changes.length > 1 ? "s" : ""} changed — add a change note.`
                   : `${changes.length} field${changes.length > 1 ? "s" : ""} changed.`}
@@ -124,7 +136,7 @@ export function SaveRevisionPanel(props: SaveRevisionPanelProps) {
             <p className="font-semibold text-caution-700">Revision {conflict.latest.number} was saved meanwhile</p>
             <p className="text-ink-900">
               {conflict.latest.author?.name ?? "Someone"} saved revision {conflict.latest.number} on{" "}
-              {formatDateTime(conflict.latest.createdAt)}, after you started from revision {revision.number}. Nothing
+              {formatDateTime(conflict.latest.createdAt)}, after you started from revision {parentRevision}. Nothing
               was stored. Load it and re-apply your {changes.length} edit{changes.length === 1 ? "" : "s"} on top, then
               check and save again.
             </p>
