@@ -207,10 +207,19 @@ describe("reading, diffing and re-running revisions", () => {
   });
 
   it("round-trips export → import → export to the identical canonical JSON and hash", async () => {
-    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
+    // Numbers that a careless store (float4, fixed decimals, text rounding) would change.
+    const awkward = inventedStudy();
+    awkward.aerodynamics.H1 = [-0.30000000000000004, -1e-7, -3.3, -4.52, -5.8, -123456.78901234567];
+    awkward.structure.inertia = 1450000.0000000002;
+    awkward.air.density = 1.2250000000000003; // the double after 1.225
+    const saved = await post(studyId, analyst, { parentRevision: 1, changeNote: "awkward numbers", study: awkward });
+    expect(saved.status).toBe(201);
+    expect(saved.body.study).toEqual(awkward);
+    const revision1Id = saved.body.id;
     const first = await fetch(`${base()}/api/revisions/${revision1Id}/export`, { headers: { Cookie: analyst } });
     expect(first.status).toBe(200);
-    expect(first.headers.get("content-disposition")).toMatch(/^attachment; filename="?[a-z0-9-]+-r1\.study\.json"?$/);
+    expect(first.headers.get("content-disposition")).toMatch(/^attachment; filename="?[a-z0-9-]+-r2\.study\.json"?$/);
     const text1 = await first.text();
     const hash1 = first.headers.get("x-content-sha256");
 
@@ -218,7 +227,7 @@ describe("reading, diffing and re-running revisions", () => {
       cookie: analyst,
       field: "file",
       file: { name: "exported.study.json", bytes: new TextEncoder().encode(text1), type: "application/json" },
-      fields: { parentRevision: "1", changeNote: "imported back" },
+      fields: { parentRevision: "2", changeNote: "imported back" },
     });
     expect(imported.status).toBe(201);
     const second = await fetch(`${base()}/api/revisions/${imported.body.id}/export`, { headers: { Cookie: analyst } });
