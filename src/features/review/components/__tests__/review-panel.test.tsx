@@ -1,0 +1,134 @@
+import "@testing-library/jest-dom/vitest";
+import { QueryClientProvider } from "@tanstack/react-query";
+import { cleanup, fireEvent, render, screen, waitFor } from "@testing-library/react";
+import { MemoryRouter } from "react-router-dom";
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import type { RevisionReviewDto } from "@shared/schemas/review";
+import { createQueryClient } from "@/lib/query-client";
+import { ReviewPanel, type ReviewPanelProps } from "@/features/review/components/review-panel";
+
+const ANALYST = { id: "2", name: "Tomas Reedwell" };
+const REVIEWER = { id: "3", name: "Mira Holloway" };
+
+function review(overrides: Partial<RevisionReviewDto> = {}): RevisionReviewDto {
+  return {
+    revisionId: "41",
+    revisionNumber: 3,
+    studyId: "7",
+    projectId: "1",
+    author: ANALYST,
+    state: "draft",
+    request: null,
+    comments: [],
+    events: [],
+    signature: null,
+    ...overrides,
+  };
+}
+
+const members = [
+  { userId: ANALYST.id, name: ANALYST.name, email: "analyst@stillspan.test", role: "analyst" },
+  { userId: REVIEWER.id, name: REVIEWER.name, email: "reviewer@stillspan.test", role: "reviewer" },
+  { userId: "4", name: "Owen Farrant", email: "viewer@stillspan.test", role: "viewer" },
+];
+
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
+
+function renderPanel(props: Partial<ReviewPanelProps> = {}) {
+  render(
+    <QueryClientProvider client={createQueryClient()}>
+      <MemoryRouter>
+        <ReviewPanel revisionId="41" projectId="1" userId={ANALYST.id} role="analyst" {...props} />
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+}
+
+describe("ReviewPanel", () => {
+  const fetchMock = vi.fn<typeof fetch>();
+  let current: RevisionReviewDto;
+
+  beforeEach(() => {
+    current = review();
+    fetchMock.mockReset();
+    fetchMock.mockImplementation(async (input, init) => {
+      const url = String(input);
+      if (url.endsWith("/members")) return json(200, members);
+      if (url.endsWith("/review")) return json(200, current);
+      if (url.endsWith("/submit") && init?.method === "POST") {
+        const body = JSON.parse(String(init.body));
+        current = review({
+          state: "in-review",
+          request: { reviewer: REVIEWER, requestedBy: ANALYST, note: body.note, submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
+        });
+        return json(200, current);
+      }
+      if (url.endsWith("/sign")) return json(403, { error: { code: "forbidden", message: "nobody may sign their own revision" } });
+      return json(404, { error: { code: "not_found", message: `unexpected ${url}` } });
+    });
+    vi.stubGlobal("fetch", fetchMock);
+  });
+  afterEach(() => {
+    cleanup();
+    vi.unstubAllGlobals();
+  });
+
+  it("lets the analyst submit a draft to a reviewer of the project, then shows it in review", async () => {
+    renderPanel();
+    expect(await screen.findByText("Draft")).toBeInTheDocument();
+    const select = await screen.findByLabelText("Reviewer");
+    await waitFor(() => expect(select).toHaveValue(REVIEWER.id));
+    // Only reviewers are offered: not the analyst, not the viewer.
+    expect(Array.from((select as HTMLSelectElement).options).map((o) => o.textContent)).toEqual([REVIEWER.name]);
+    fireEvent.change(screen.getByLabelText("Note to the reviewer (optional)"), { target: { value: "Margins please." } });
+    fireEvent.click(screen.getByRole("button", { name: "Submit for review" }));
+
+    expect(await screen.findByText("In review")).toBeInTheDocument();
+    const submit = fetchMock.mock.calls.find(([url]) => String(url).endsWith("/submit"))!;
+    expect(JSON.parse(String(submit[1]!.body))).toEqual({ reviewerId: REVIEWER.id, note: "Margins please." });
+    expect(screen.queryByRole("button", { name: "Submit for review" })).not.toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
+  });
+
+  it("offers the reviewer sign and return on a revision in review, and shows the comments", async () => {
+    current = review({
+      state: "in-review",
+      request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
+      comments: [{ id: "1", author: { ...REVIEWER, role: "reviewer" }, body: "State the tested range.", createdAt: "2026-12-02T10:00:00Z" }],
+    });
+    renderPanel({ userId: REVIEWER.id, role: "reviewer" });
+    expect(await screen.findByText("State the tested range.")).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Sign the summary" })).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Return with comments" })).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Submit for review" })).not.toBeInTheDocument();
+
+    // A statement is required before anything is sent; the server's refusal is shown as it comes.
+    fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
+    expect(await screen.findByRole("alert")).toHaveTextContent("Write your statement before signing");
+    expect(fetchMock.mock.calls.some(([url]) => String(url).endsWith("/sign"))).toBe(false);
+    fireEvent.change(screen.getByLabelText("Reviewer's statement"), { target: { value: "Fine." } });
+    fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
+    expect(await screen.findByText("nobody may sign their own revision")).toBeInTheDocument();
+  });
+
+  it("gives the author no sign button even when they hold the reviewer role, and a signed revision no actions", async () => {
+    current = review({
+      state: "in-review",
+      request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
+    });
+    renderPanel({ userId: ANALYST.id, role: "reviewer" });
+    expect(await screen.findByText("In review")).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
+    cleanup();
+
+    current = review({
+      state: "signed",
+      signature: { summaryId: "9", signer: REVIEWER, signedAt: "2026-12-02T11:00:00Z", kid: "k", verificationCode: "1c64-d3c2-72e2" },
+    });
+    renderPanel();
+    expect(await screen.findByRole("link", { name: "Signed summary" })).toHaveAttribute("href", "/summaries/9");
+    expect(screen.getByText("1c64-d3c2-72e2")).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: /Submit|Sign the summary/ })).not.toBeInTheDocument();
+  });
+});
