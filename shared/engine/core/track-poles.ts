@@ -1,12 +1,12 @@
 import { inverse, Matrix } from "ml-matrix";
 import { allPoles } from "./all-poles";
-import { optimalAssignment } from "./hungarian";
-import { modalAssurance } from "./mac";
+import { assignPoles } from "./assign-poles";
 import { assertModalSystem, type ModalSystem } from "./modal-system";
 import { normalizeModeVector } from "./mode-vector";
-import { createPkOutcome, solveBranchPk, STATIC_IM_TOLERANCE, type PkOutcome } from "./pk-branch";
-import { assembleQuadratic, createPoleWorkspace } from "./quadratic-operator";
+import { createPkOutcome, solveBranchPk, type PkOutcome } from "./pk-branch";
+import { createPoleWorkspace } from "./quadratic-operator";
 import type { Pole } from "./refine-pole";
+import { settleStaticTransition } from "./static-transition";
 import { assessStep } from "./tracking-confidence";
 
 /** One solved speed of one tracked branch. */
@@ -119,38 +119,8 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     converged: o.converged,
     extrapolated: system.hasAero && speed > 0 && (system.isExtrapolated?.(o.reducedFrequency) ?? false),
   });
-  // A pole pair that reaches the real axis splits into two real roots; the branch continues on the larger one,
-  // the root that can cross zero (static instability). Newton from the predictor may have landed on either, or
-  // on another branch's real root: candidates are the real poles not held by another branch whose shape matches
-  // the branch's last one (MAC at least half the best), and the largest of them is taken.
-  const settleStatic = (steps: TrackedStep[], prev: Pole[]) => {
-    steps.forEach((s, j) => {
-      if (!(prev[j].im > 0) || s.im !== 0) return;
-      const k = assembleQuadratic(system, s.speedMps, 0, work);
-      const held = (p: Pole) =>
-        steps.some((o, i) => i !== j && Math.hypot(o.re - p.re, o.im - p.im) <= 1e-6 * Math.hypot(p.re, p.im) + 1e-300);
-      const reals = fullPoles().filter(
-        (p) => Math.abs(p.im) <= STATIC_IM_TOLERANCE * Math.hypot(p.re, p.im) && !held(p),
-      );
-      if (reals.length === 0) return;
-      const macs = reals.map((p) => modalAssurance(n, mass, prev[j].vecRe, prev[j].vecIm, p.vecRe, p.vecIm));
-      const best = Math.max(...macs);
-      let right: Pole | null = null;
-      reals.forEach((p, i) => {
-        if (macs[i] >= 0.5 * best && (right === null || p.re > right.re)) right = p;
-      });
-      if (right === null) return;
-      const chosen: Pole = right;
-      s.re = chosen.re;
-      s.im = 0;
-      s.vecRe = Float64Array.from(chosen.vecRe);
-      s.vecIm = new Float64Array(n);
-      normalizeModeVector(n, mass, s.vecRe, s.vecIm);
-      s.reducedFrequency = k;
-    });
-  };
   const accept = (steps: TrackedStep[], prev: Pole[], pred: Pole[], forced: boolean): boolean => {
-    settleStatic(steps, prev);
+    settleStaticTransition(system, work, fullPoles, steps, prev);
     const verdict = assessStep(n, mass, prev, pred, steps);
     let good = verdict.identity;
     for (let j = 0; j < n; j++) {
@@ -216,24 +186,6 @@ function leadIn(speeds: readonly number[]): number[] {
   const gridStep = speeds.length > 1 ? speeds[1] - speeds[0] : from;
   const count = Math.min(200, Math.max(1, Math.ceil(from / gridStep)));
   return Array.from({ length: count }, (_, i) => (i * from) / count);
-}
-
-/** Optimal assignment of candidate poles to branches: cost (1 − MAC) + min(1, predictor distance / scale). */
-function assignPoles(n: number, mass: Float64Array, refs: Pole[], pred: Pole[], poles: Pole[], prev: Pole[] | null): Int32Array {
-  const b = refs.length;
-  const m = poles.length;
-  const cost = new Float64Array(b * m);
-  for (let i = 0; i < b; i++) {
-    const scale = prev
-      ? Math.max(4 * Math.hypot(pred[i].re - prev[i].re, pred[i].im - prev[i].im), 1e-3 * Math.hypot(pred[i].re, pred[i].im), 1e-12)
-      : Number.POSITIVE_INFINITY;
-    for (let c = 0; c < m; c++) {
-      const mac = modalAssurance(n, mass, refs[i].vecRe, refs[i].vecIm, poles[c].vecRe, poles[c].vecIm);
-      const dist = Math.hypot(poles[c].re - pred[i].re, poles[c].im - pred[i].im) / scale;
-      cost[i * m + c] = 1 - mac + Math.min(1, dist);
-    }
-  }
-  return optimalAssignment(cost, b, m);
 }
 
 /** Quadratic (Lagrange) extrapolation of a branch's pole in U from its last three steps. */
