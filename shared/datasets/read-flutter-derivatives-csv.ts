@@ -30,7 +30,8 @@ function canonicalName(cell: string): string | null {
  *
  * **Notes**: every problem is reported with its line (header = 1) and column: unknown or repeated columns, a
  * first column that is not the abscissa of the declared convention, wrong field counts, values that are not
- * finite numbers, an abscissa that is ≤ 0, repeated or not strictly increasing, fewer than 2 rows. Fewer than
+ * finite numbers, an abscissa that is ≤ 0, repeated or not strictly increasing (K: strictly monotonic in either
+ * direction), fewer than 2 rows. Fewer than
  * 4 rows is a warning. The values are returned as delivered; conversion is `convertConvention`.
  */
 export function readFlutterDerivativesCsv(
@@ -57,7 +58,8 @@ export function readFlutterDerivativesCsv(
   if (issues.length > 0) return { ok: false, issues };
 
   const label = expectedFirst === "Ur" ? "reduced velocity (Ur)" : "reduced frequency (K)";
-  const columns = readNumericColumns(read.table, names, label);
+  // A table in K is often sorted by Ur, i.e. by decreasing K: either direction is accepted for K.
+  const columns = readNumericColumns(read.table, names, label, expectedFirst === "K" ? "monotonic" : "increasing");
   if (!columns.ok) return { ok: false, issues: capIssues(columns.issues) };
   const x = columns.data.columns.get(expectedFirst)!;
   const nonPositive = x.findIndex((v) => !(v > 0));

@@ -16,12 +16,15 @@ export function readNumericColumns(
   table: CsvTable,
   names: string[],
   abscissaLabel: string,
+  /** "increasing", or "monotonic": either direction, set by the first two rows (a K column sorted by Ur). */
+  order: "increasing" | "monotonic" = "increasing",
 ): { ok: true; data: NumericColumns } | { ok: false; issues: UploadIssue[] } {
   const issues: UploadIssue[] = [];
   const columns = new Map(names.map((n) => [n, [] as number[]]));
   const lines: number[] = [];
   const abscissaName = names[0];
   let previous: { value: number; line: number } | null = null;
+  let sign = 0;
   for (const { line, cells } of table.rows) {
     if (cells.length !== names.length) {
       issues.push({ row: line, message: `has ${cells.length} values; the header has ${names.length} columns` });
@@ -41,12 +44,18 @@ export function readNumericColumns(
     const x = columns.get(abscissaName)!.at(-1)!;
     if (previous && x === previous.value) {
       issues.push({ row: line, column: abscissaName, message: `repeats ${x} from line ${previous.line}: duplicate ${abscissaLabel}` });
-    } else if (previous && x < previous.value) {
-      issues.push({
-        row: line,
-        column: abscissaName,
-        message: `${x} is smaller than ${previous.value} on line ${previous.line}: ${abscissaLabel} must increase strictly from row to row`,
-      });
+    } else if (previous) {
+      const step = Math.sign(x - previous.value);
+      if (sign === 0) sign = order === "increasing" ? 1 : step;
+      if (step !== sign) {
+        const [relation, rule] = sign > 0 ? ["smaller", "increase"] : ["larger", "decrease"];
+        const either = order === "monotonic" ? " (in one direction throughout)" : "";
+        issues.push({
+          row: line,
+          column: abscissaName,
+          message: `${x} is ${relation} than ${previous.value} on line ${previous.line}: ${abscissaLabel} must ${rule} strictly from row to row${either}`,
+        });
+      }
     }
     previous = { value: x, line };
   }

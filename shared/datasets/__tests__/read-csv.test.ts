@@ -43,6 +43,17 @@ describe("readFlutterDerivativesCsv", () => {
     }
   });
 
+  it("accepts K in decreasing order (sorted by Ur) but not a K column that turns back", () => {
+    expect(readFlutterDerivativesCsv(utf8("K,H1\n1.5,-0.4\n1.0,-0.5\n0.5,-1\n"), "K").ok).toBe(true);
+    const read = readFlutterDerivativesCsv(utf8("K,H1\n1.5,-0.4\n1.0,-0.5\n1.2,-1\n"), "K");
+    expect(read.ok).toBe(false);
+    if (!read.ok) {
+      expect(read.issues).toEqual([
+        { row: 4, column: "K", message: "1.2 is larger than 1 on line 3: reduced frequency (K) must decrease strictly from row to row (in one direction throughout)" },
+      ]);
+    }
+  });
+
   it("refuses a Ur column when the convention's abscissa is K", () => {
     const read = readFlutterDerivativesCsv(utf8("Ur,H1\n2,-1\n4,-2\n"), "k-half");
     expect(read.ok).toBe(false);
