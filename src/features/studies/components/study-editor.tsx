@@ -21,6 +21,7 @@ import { SaveRevisionPanel, type RebasedDraft } from "@/features/studies/compone
 import { StepsTable } from "@/features/studies/components/steps-table";
 import { StructureFields } from "@/features/studies/components/structure-fields";
 import { SweepFields } from "@/features/studies/components/sweep-fields";
+import { useMediaQuery } from "@/features/studies/hooks/use-media-query";
 import { useSweepPreview } from "@/features/studies/hooks/use-sweep-preview";
 import type { CellError } from "@/features/studies/utils/derivative-grid";
 import { diffDocuments } from "@/features/studies/utils/document-diff";
@@ -109,6 +110,15 @@ export function StudyEditor(props: StudyEditorProps) {
     });
   };
 
+  // Two columns from Tailwind's lg width (64rem; media queries read rem at the browser's 16 px). In one column
+  // the preview sits right under the structure, where the edits happen, instead of after the whole form.
+  const twoColumns = useMediaQuery("(min-width: 64rem)");
+  const previewCard = readOnly ? null : (
+    <Card title="Live preview" subtitle="Damping ratio computed in this browser while you edit">
+      <LivePreview state={preview} blockedReason={blockedReason} />
+    </Card>
+  );
+
   return (
     <div className="space-y-4">
       <LeaveGuard when={unsaved > 0} what={`This study has unsaved changes (${unsaved} field${unsaved === 1 ? "" : "s"}).`} />
@@ -138,6 +148,7 @@ export function StudyEditor(props: StudyEditorProps) {
           <Card title="Structure" subtitle="Section model per unit length, about the deck centre">
             <StructureFields register={register} control={control} errors={formState.errors} readOnly={readOnly} />
           </Card>
+          {twoColumns ? null : previewCard}
           <Card title="Aerodynamics" subtitle="Scanlan derivatives on the full width B, K = Bω/U, h and L downward">
             <AerodynamicsEditor value={values.aerodynamics ?? startDocument.aerodynamics} readOnly={readOnly} datasets={datasets} datasetsError={datasetsError} onChange={onAerodynamics} />
           </Card>
@@ -188,11 +199,7 @@ export function StudyEditor(props: StudyEditorProps) {
         </form>
 
         <div className="space-y-4">
-          {!readOnly ? (
-            <Card title="Live preview" subtitle="Damping ratio computed in this browser while you edit">
-              <LivePreview state={preview} blockedReason={blockedReason} />
-            </Card>
-          ) : null}
+          {twoColumns ? previewCard : null}
           <Card
             title="Result"
             subtitle={<span data-testid="result-source">{shown.source}</span>}

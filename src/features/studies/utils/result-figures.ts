@@ -90,19 +90,35 @@ export function polePathFigure(runs: readonly PlotRun[]): PlotFigure {
   };
 }
 
+/** Flutter speed (dashed, signal colour) and divergence speed within the sweep (dotted, ink) of every run. */
 function speedMarkers(runs: readonly PlotRun[]): Record<string, unknown>[] {
-  return runs.flatMap((run) =>
-    run.result.flutter
+  return runs.flatMap((run) => [
+    ...(run.result.flutter
       ? [{
           type: "line", xref: "x", yref: "paper", x0: run.result.flutter.speed, x1: run.result.flutter.speed, y0: 0, y1: 1,
           line: { color: token("--color-signal-600"), width: 1.2, dash: "dash" },
         }]
-      : [],
-  );
+      : []),
+    ...(run.result.divergence
+      ? [{
+          type: "line", xref: "x", yref: "paper", x0: run.result.divergence.speed, x1: run.result.divergence.speed, y0: 0, y1: 1,
+          line: { color: token("--color-ink-600"), width: 1.2, dash: "dot" },
+        }]
+      : []),
+  ]);
 }
 
 function flutterAnnotations(runs: readonly PlotRun[]): Record<string, unknown>[] {
-  return runs.flatMap((run, r) =>
+  const divergence = runs.flatMap((run, r) =>
+    run.result.divergence
+      ? [{
+          x: run.result.divergence.speed, y: 0.02 + r * 0.09, xref: "x", yref: "paper", yanchor: "bottom", xanchor: "right",
+          text: `U<sub>D</sub> ${run.result.divergence.speed.toFixed(1)}${runs.length > 1 ? ` (${run.name})` : ""}`,
+          showarrow: false, font: { size: 11, color: token("--color-ink-700") }, bgcolor: "rgba(252,252,250,0.85)",
+        }]
+      : [],
+  );
+  return divergence.concat(runs.flatMap((run, r) =>
     run.result.flutter
       ? [{
           x: run.result.flutter.speed, y: 1 - r * 0.09, xref: "x", yref: "paper", yanchor: "top", xanchor: "left",
@@ -110,7 +126,7 @@ function flutterAnnotations(runs: readonly PlotRun[]): Record<string, unknown>[]
           showarrow: false, font: { size: 11, color: token("--color-signal-700") }, bgcolor: "rgba(252,252,250,0.85)",
         }]
       : [],
-  );
+  ));
 }
 
 /** A quantity of every branch against wind speed, with each flutter speed marked. */
