@@ -76,32 +76,44 @@ export function refinePoleBordered(
     let lastRe = 0;
     let lastIm = 0;
     for (let i = 0; i < n; i++) {
-      let qxr = 0, qxi = 0, dxr = 0, dxi = 0;
+      let qxr = 0, qxi = 0;
       const row = i * n;
-      const jrow = i * m;
-      for (let j = 0; j < n; j++) {
-        const mm = mass[row + j];
-        const cc = c[row + j];
-        const qr = l2r * mm + lr * cc + k[row + j];
-        const qi = l2i * mm + li * cc;
-        if (refactor) {
+      if (refactor) {
+        // residual Q(λ)x and the Jacobian's rows [Q(λ), Q′(λ)x]
+        let dxr = 0, dxi = 0;
+        const jrow = i * m;
+        for (let j = 0; j < n; j++) {
+          const mm = mass[row + j];
+          const cc = c[row + j];
+          const qr = l2r * mm + lr * cc + k[row + j];
+          const qi = l2i * mm + li * cc;
           luRe[jrow + j] = qr;
           luIm[jrow + j] = qi;
-        }
-        const ar = xRe[j];
-        const ai = xIm[j];
-        qxr += qr * ar - qi * ai;
-        qxi += qr * ai + qi * ar;
-        if (refactor) {
+          const ar = xRe[j];
+          const ai = xIm[j];
+          qxr += qr * ar - qi * ai;
+          qxi += qr * ai + qi * ar;
           const pr = 2 * lr * mm + cc;
           const pi = 2 * li * mm;
           dxr += pr * ar - pi * ai;
           dxi += pr * ai + pi * ar;
         }
-      }
-      if (refactor) {
         luRe[jrow + n] = dxr;
         luIm[jrow + n] = dxi;
+      } else {
+        // residual only (chord step), skipping the structural zeros of sparse modal matrices
+        for (let j = 0; j < n; j++) {
+          const mm = mass[row + j];
+          const cc = c[row + j];
+          const kk = k[row + j];
+          if (mm === 0 && cc === 0 && kk === 0) continue;
+          const qr = l2r * mm + lr * cc + kk;
+          const qi = l2i * mm + li * cc;
+          const ar = xRe[j];
+          const ai = xIm[j];
+          qxr += qr * ar - qi * ai;
+          qxi += qr * ai + qi * ar;
+        }
       }
       rRe[i] = -qxr;
       rIm[i] = -qxi;
