@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createSessionToken } from "../../server/services/auth.js";
 import { startTestApp, type TestApp } from "../support/app.js";
-import { auditActions, openTestDb, projectIdByName, userId } from "../support/db.js";
+import { auditActions, membershipsOf, openTestDb, projectIdByName, userId } from "../support/db.js";
 import { testEnv } from "../support/env.js";
 import { api, sessionCookieFrom, signIn } from "../support/http.js";
 
@@ -56,17 +56,22 @@ describe("POST /api/auth/sign-in", () => {
 });
 
 describe("GET /api/auth/me", () => {
-  it("returns the signed-in user with memberships", async () => {
-    const cookie = await signIn(base(), "admin@stillspan.test");
+  it("returns the signed-in user with exactly the memberships the database holds", async () => {
+    const cookie = await signIn(base(), "viewer@stillspan.test");
+    const id = await userId(db, "viewer@stillspan.test");
     const res = await api(base(), "/api/auth/me", { cookie });
     expect(res.status).toBe(200);
+    // Other test files may add the viewer to projects of their own: compare with what is stored right now.
+    const stored = await membershipsOf(db, id);
+    expect(stored).toContainEqual({ projectId: await projectIdByName(db, "Harrowmere Estuary Crossing (invented demo)"), role: "viewer" });
     expect(res.body).toEqual({
-      id: String(await userId(db, "admin@stillspan.test")),
-      email: "admin@stillspan.test",
+      id: String(id),
+      email: "viewer@stillspan.test",
       name: expect.any(String),
-      isAdmin: true,
-      memberships: [],
+      isAdmin: false,
+      memberships: expect.arrayContaining(stored),
     });
+    expect(res.body.memberships).toHaveLength(stored.length);
   });
 
   it("answers 401 without a cookie", async () => {

@@ -40,3 +40,11 @@ export async function projectIdByName(db: Db, name: string): Promise<string> {
   if (rows.length !== 1) throw new Error(`expected one project named ${name}, found ${rows.length}`);
   return String(rows[0].id);
 }
+
+/** A user's memberships as the API spells them ({projectId: string, role}). */
+export async function membershipsOf(db: Db, userIdValue: number): Promise<{ projectId: string; role: ProjectRole }[]> {
+  const { rows } = await db.execute<{ project_id: number; role: ProjectRole }>(
+    sql`select project_id, role from memberships where user_id = ${userIdValue} order by project_id`,
+  );
+  return rows.map((r) => ({ projectId: String(r.project_id), role: r.role }));
+}
