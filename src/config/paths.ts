@@ -97,11 +97,14 @@ export const apiPaths = {
   studies: {
     detail: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}`,
     revisions: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/revisions`,
+    import: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/import`,
   },
   revisions: {
     detail: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}`,
     diff: (fromId: string, toId: string) =>
       `/api/revisions/${encodeURIComponent(fromId)}/diff/${encodeURIComponent(toId)}`,
+    rerun: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/rerun`,
+    export: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/export`,
   },
   users: {
     list: "/api/users",

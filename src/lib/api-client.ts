@@ -23,7 +23,8 @@ type JsonBody = Record<string, unknown> | unknown[];
 
 export interface RequestOptions {
   method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
-  body?: JsonBody;
+  /** JSON, or a multipart form (file uploads; the browser sets its content type and boundary). */
+  body?: JsonBody | FormData;
   signal?: AbortSignal;
   /**
    * By default a 401 means the session is gone, and the browser is sent to the sign-in page (returning here
@@ -62,14 +63,15 @@ async function readJson(response: Response): Promise<unknown> {
 export async function apiRequest<T>(url: string, options: RequestOptions = {}): Promise<T> {
   const { method = "GET", body, signal, redirectOnUnauthorized = true } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
-  if (body !== undefined) headers["Content-Type"] = "application/json";
+  const isForm = typeof FormData !== "undefined" && body instanceof FormData;
+  if (body !== undefined && !isForm) headers["Content-Type"] = "application/json";
 
   let response: Response;
   try {
     response = await fetch(url, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
       credentials: "same-origin",
       signal,
     });
@@ -100,4 +102,7 @@ export const api = {
     apiRequest<T>(url, { ...options, method: "PATCH", body }),
   delete: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) =>
     apiRequest<T>(url, { ...options, method: "DELETE" }),
+  /** POST of a multipart form (file uploads). */
+  upload: <T>(url: string, form: FormData, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "POST", body: form }),
 };

@@ -216,7 +216,7 @@ describe("the analyst's study workspace", () => {
     await page.getByText(`Revision ${savedNumber + 2} (latest)`).waitFor();
   });
 
-  it("a reviewer sees the study read-only, and the API refuses a revision from them", async () => {
+  it("a reviewer sees the study read-only, can download it as a file, and the API refuses a revision from them", async () => {
     const { page } = browser;
     await signOut();
     await page.goto(browser.url(studyPath));
@@ -229,6 +229,8 @@ describe("the analyst's study workspace", () => {
     expect(await form.locator("input:not([type=radio]):not([type=checkbox]), textarea, select").count()).toBe(0);
     expect(await form.getByRole("radio", { disabled: false }).count()).toBe(0);
     expect(await page.getByRole("button", { name: /Run sweep|Save revision|Upload CSV/ }).count()).toBe(0);
+    const exported = await page.evaluate(async (href) => (await fetch(href)).text(), await page.getByRole("link", { name: /^Download study file/ }).getAttribute("href"));
+    expect(parseStudy(JSON.parse(exported)).ok).toBe(true);
     const refused = await post(`/api/studies/${studyPath.split("/").pop()}/revisions`, { parentRevision: savedNumber + 2, changeNote: "x", study: startRevision.study });
     expect(refused.status).toBe(403);
     await browser.screenshot("workspace-reviewer");

@@ -19,6 +19,7 @@ import { ResultPlots } from "@/features/studies/components/result-plots";
 import { ResultSummary } from "@/features/studies/components/result-summary";
 import { SaveRevisionPanel, type RebasedDraft } from "@/features/studies/components/save-revision-panel";
 import { StepsTable } from "@/features/studies/components/steps-table";
+import { StudyFileActions } from "@/features/studies/components/study-file-actions";
 import { StructureFields } from "@/features/studies/components/structure-fields";
 import { SweepFields } from "@/features/studies/components/sweep-fields";
 import { useMediaQuery } from "@/features/studies/hooks/use-media-query";
@@ -196,6 +197,9 @@ export function StudyEditor(props: StudyEditorProps) {
               onRebased={onRebased}
             />
           ) : null}
+          <Card title="Study file" subtitle="The revision's document as stillspan.study/1 JSON">
+            <StudyFileActions projectId={projectId} studyId={studyId} revision={revision} canEdit={!readOnly} />
+          </Card>
         </form>
 
         <div className="space-y-4">
