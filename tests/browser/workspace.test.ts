@@ -25,8 +25,8 @@ describe("the analyst's study workspace", () => {
     browser = await launchBrowser();
     browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
     browser.page.on("console", (message) => {
-      // 401 (session probe), 404, and the 409 / 403 answers this file provokes on purpose.
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[1349]/;
+      // 401 (session probe), 404, and the 400 / 409 / 403 answers this file provokes on purpose.
+      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[01349]/;
       if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
         problems.push(`${message.type()}: ${message.text()}`);
       }
@@ -75,7 +75,18 @@ describe("the analyst's study workspace", () => {
     await studies.first().waitFor();
     expect(await studies.first().textContent()).toMatch(/\d+\.\d m\/s/);
     expect(await page.getByTestId("margins-basis").textContent()).toMatch(/Margins against flutter \d+\.\d m\/s/);
+    // A delivered file with a bad value is refused with its line and column; nothing is stored.
+    await page.getByRole("button", { name: "Upload a data set…" }).first().click();
+    const uploadForm = page.getByRole("form", { name: "Upload a data set" });
+    const badCsv = "Ur,H1,H2,H3,H4,A1,A2,A3,A4\n2,-0.6,-0.1,-0.3,0.3,0.15,-0.03,0.06,0.02\n4,-1.9,-0.5,-1.4,0.6,0.49,n/a,0.38,0.09\n";
+    await uploadForm.getByLabel("CSV file (≤ 1 MB)").setInputFiles({ name: "tunnel.csv", mimeType: "text/csv", buffer: Buffer.from(badCsv) });
+    await uploadForm.getByRole("button", { name: "Upload and convert" }).click();
+    const refusal = uploadForm.getByRole("alert");
+    await refusal.waitFor();
+    expect(await refusal.textContent()).toMatch(/tunnel\.csv: line 3.*A2/i);
+    expect(await refusal.textContent()).toContain("Nothing was stored.");
     await browser.screenshot("project-studies");
+    await uploadForm.getByRole("button", { name: "Cancel" }).click();
   });
 
   it("opening the demo study shows its inputs, derived quantities and the stored result", async () => {
@@ -229,7 +240,8 @@ describe("the analyst's study workspace", () => {
     expect(await form.locator("input:not([type=radio]):not([type=checkbox]), textarea, select").count()).toBe(0);
     expect(await form.getByRole("radio", { disabled: false }).count()).toBe(0);
     expect(await page.getByRole("button", { name: /Run sweep|Save revision|Upload CSV/ }).count()).toBe(0);
-    const exported = await page.evaluate(async (href) => (await fetch(href)).text(), await page.getByRole("link", { name: /^Download study file/ }).getAttribute("href"));
+    const href = (await page.getByRole("link", { name: /^Download study file/ }).getAttribute("href")) ?? "";
+    const exported = await page.evaluate(async (url) => (await fetch(url)).text(), href);
     expect(parseStudy(JSON.parse(exported)).ok).toBe(true);
     const refused = await post(`/api/studies/${studyPath.split("/").pop()}/revisions`, { parentRevision: savedNumber + 2, changeNote: "x", study: startRevision.study });
     expect(refused.status).toBe(403);

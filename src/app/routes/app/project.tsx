@@ -35,7 +35,7 @@ export function ProjectRoute() {
       {project.data ? (
         <DesignWindPanel className="mt-4" projectId={projectId} canEdit={project.data.role === "analyst" || isAdmin} />
       ) : null}
-      <ProjectStudies projectId={projectId} />
+      <ProjectStudies projectId={projectId} canEdit={project.data?.role === "analyst"} />
       {isAdmin ? <ProjectMembers projectId={projectId} /> : null}
     </div>
   );

@@ -6,7 +6,10 @@ import type { StudyAerodynamics } from "@shared/schemas/study";
 import { Button } from "@/components/ui/button";
 import { Plot } from "@/components/ui/plot";
 import { cn } from "@/lib/cn";
+import { DatasetPicker, isDerivativeSet, matchingDataset } from "@/features/studies/components/dataset-picker";
 import { DerivativeTable } from "@/features/studies/components/derivative-table";
+import { QuasiSteadyFields } from "@/features/studies/components/quasi-steady-fields";
+import { SelectField } from "@/features/studies/components/select-field";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
 import {
   emptyRow,
@@ -27,22 +30,7 @@ const CHOICES: Array<{ value: Choice; label: string; hint: string }> = [
   { value: "tabulated", label: "Own table", hint: "Flutter derivatives typed, pasted or loaded from a CSV file" },
 ];
 
-type DerivativeSet = DatasetDto & { converted: { reducedVelocity: number[] } & Record<"H1" | "H2" | "H3" | "H4" | "A1" | "A2" | "A3" | "A4", number[]> };
-
-const isDerivativeSet = (d: DatasetDto): d is DerivativeSet => d.kind === "flutter-derivatives" && "reducedVelocity" in d.converted;
-
-/** The data set whose converted table the block holds, if any (the study format stores the numbers, not a link). */
-function matchingDataset(value: StudyAerodynamics, sets: readonly DerivativeSet[]): DerivativeSet | null {
-  if (value.model !== "tabulated") return null;
-  const zeros = value.reducedVelocity.map(() => 0);
-  const same = (a: readonly number[] | undefined, b: readonly number[]) => {
-    const column = a ?? zeros;
-    return column.length === b.length && b.every((x, i) => column[i] === x);
-  };
-  return sets.find((d) => same(value.reducedVelocity, d.converted.reducedVelocity) &&
-    (["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const).every((n) => same(value[n], d.converted[n]))) ?? null;
-}
-
+/** Thin-plate limits (C_L′ = 2π, C_D = 0, C_M′ = π/2) as a neutral start for quasi-steady slopes. */
 const DEFAULT_QS = { model: "quasi-steady", liftSlope: 2 * Math.PI, dragCoefficient: 0, momentSlope: Math.PI / 2 } as const;
 
 interface AerodynamicsEditorProps {
@@ -272,115 +260,3 @@ export function AerodynamicsEditor({ value, readOnly, datasets, datasetsError, o
   );
 }
 
-function DatasetPicker({ sets, active, readOnly, onPick }: {
-  sets: readonly DerivativeSet[]; active: DerivativeSet | null; readOnly: boolean; onPick: (id: string) => void;
-}) {
-  if (sets.length === 0) {
-    return <p className="text-sm text-caution-700">This alternative has no flutter-derivative data set yet. Upload one on the project page, or type your own table.</p>;
-  }
-  return (
-    <div className="space-y-2">
-      {readOnly ? null : (
-        <SelectField label="Data set" value={active?.id ?? ""} onChange={onPick}
-          options={[...(active ? [] : [["", "Choose…"] as [string, string]]), ...sets.map((d) => [d.id, d.name] as [string, string])]} />
-      )}
-      {active ? (
-        <dl className="grid grid-cols-[auto_1fr] gap-x-3 text-sm">
-          <dt className="text-ink-600">Set</dt><dd className="font-semibold">{active.name}</dd>
-          <dt className="text-ink-600">Tested</dt>
-          <dd className="num">Ur {active.testedRange.min}–{active.testedRange.max} · {active.provenance.flow} flow{active.provenance.facility ? ` · ${active.provenance.facility}` : ""}{active.provenance.modelScale ? ` · 1:${active.provenance.modelScale}` : ""}</dd>
-          <dt className="text-ink-600">Delivered as</dt>
-          <dd>{active.convention ? `${active.convention.abscissa}, forces on ${active.convention.normalisation}, heave ${active.convention.sign === "h-down" ? "down" : "up"}` : "—"}; converted to the study convention</dd>
-          <dt className="text-ink-600">File</dt><dd className="truncate font-mono text-xs leading-5" title={active.file.sha256}>{active.file.name}</dd>
-        </dl>
-      ) : (
-        <p className="text-sm text-ink-700">The study's table differs from every data set; pick one to copy its derivatives in.</p>
-      )}
-      {active?.warnings.length ? (
-        <ul className="text-sm text-caution-700">{active.warnings.map((w, i) => <li key={i}>{w.column ? `${w.column}: ` : ""}{w.message}</li>)}</ul>
-      ) : null}
-    </div>
-  );
-}
-
-function SelectField({ label, value, options, onChange }: {
-  label: string; value: string; options: ReadonlyArray<readonly [string, string]>; onChange: (value: string) => void;
-}) {
-  const id = useId();
-  return (
-    <div className="space-y-0.5">
-      <label htmlFor={id} className="block text-xs font-semibold text-ink-700">{label}</label>
-      <select id={id} value={value} onChange={(e) => onChange(e.target.value)}
-        className="h-7 rounded-md border border-ink-300 bg-white px-1.5 text-sm hover:border-ink-400">
-        {options.map(([v, text]) => <option key={v} value={v}>{text}</option>)}
-      </select>
-    </div>
-  );
-}
-
-function QuasiSteadyFields({ value, readOnly, onChange, staticSets }: {
-  value: Extract<StudyAerodynamics, { model: "quasi-steady" }>; readOnly: boolean; onChange: (v: StudyAerodynamics) => void;
-  staticSets: readonly DatasetDto[];
-}) {
-  const fields = [
-    ["liftSlope", "Lift slope dC_L/dα", "1/rad"],
-    ["dragCoefficient", "Drag coefficient C_D (on B)", "–"],
-    ["momentSlope", "Moment slope dC_M/dα", "1/rad"],
-  ] as const;
-  // Filling from a data set replaces the typed texts: a new generation remounts the inputs.
-  const [generation, setGeneration] = useState(0);
-  const fill = (id: string) => {
-    const slopes = staticSets.find((d) => d.id === id)?.slopes;
-    if (slopes) {
-      setGeneration((g) => g + 1);
-      onChange({ model: "quasi-steady", liftSlope: slopes.liftSlopePerRad, dragCoefficient: Math.max(0, slopes.dragCoefficientOnB), momentSlope: slopes.momentSlopePerRad });
-    }
-  };
-  return (
-    <div className="space-y-2">
-      {!readOnly && staticSets.length > 0 ? (
-        <SelectField label="Fill from a static-coefficient data set (slopes at 0°)" value="" onChange={fill}
-          options={[["", "Choose…"], ...staticSets.map((d) => [d.id, d.name] as [string, string])]} />
-      ) : null}
-      <div className="grid grid-cols-3 gap-2">
-        {fields.map(([key, label, unit]) => (
-          <NumberInput key={`${key}-${generation}`} label={label} unit={unit} value={value[key]} readOnly={readOnly}
-            onChange={(n) => onChange({ ...value, [key]: n })} />
-        ))}
-      </div>
-      <p className="rounded-md border-l-4 border-l-caution-400 bg-caution-100 px-3 py-1.5 text-sm text-caution-700">
-        Quasi-steady derivatives carry no aerodynamic torsional damping (A2* = 0); flutter speeds from them can be far
-        too low. Meant for galloping checks and high reduced velocities.
-      </p>
-    </div>
-  );
-}
-
-function NumberInput({ label, unit, value, readOnly, onChange }: {
-  label: string; unit: string; value: number; readOnly: boolean; onChange: (value: number) => void;
-}) {
-  const id = useId();
-  const [text, setText] = useState(String(Number(value.toPrecision(6))));
-  const parsed = Number(text);
-  const invalid = text.trim() === "" || !Number.isFinite(parsed);
-  if (readOnly) {
-    return (
-      <div>
-        <span className="block text-sm font-semibold text-ink-700">{label}</span>
-        <span className="num block">{text} <span className="text-sm text-ink-600">{unit}</span></span>
-      </div>
-    );
-  }
-  return (
-    <div className="space-y-0.5">
-      <label htmlFor={id} className="block text-sm font-semibold text-ink-800">{label}</label>
-      <div className="relative">
-        <input id={id} value={text} inputMode="decimal" aria-invalid={invalid || undefined}
-          onChange={(e) => { setText(e.target.value); const n = Number(e.target.value); if (e.target.value.trim() !== "" && Number.isFinite(n)) onChange(n); }}
-          className={cn("num h-8 w-full rounded-md border bg-white px-2 pr-10 text-right", invalid ? "border-signal-600" : "border-ink-300")} />
-        <span className="pointer-events-none absolute inset-y-0 right-2 flex items-center text-xs text-ink-600">{unit}</span>
-      </div>
-      {invalid ? <p className="text-xs font-semibold text-signal-700">must be a number</p> : null}
-    </div>
-  );
-}

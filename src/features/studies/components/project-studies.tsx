@@ -10,13 +10,14 @@ import { formatDate } from "@/lib/format";
 import { useAlternatives } from "@/features/studies/api/get-alternatives";
 import { useComparison } from "@/features/studies/api/get-comparison";
 import { useDatasets } from "@/features/studies/api/get-datasets";
+import { DatasetUpload } from "@/features/studies/components/dataset-upload";
 import { queryErrorPanel } from "@/features/studies/components/study-workspace";
 
 /**
  * The project's deck alternatives, each with its studies (latest critical speeds and margins against the
  * required speeds) and its aerodynamic data sets; the required speeds once the project has criteria.
  */
-export function ProjectStudies({ projectId }: { projectId: string }) {
+export function ProjectStudies({ projectId, canEdit }: { projectId: string; canEdit: boolean }) {
   const alternatives = useAlternatives(projectId);
   const comparison = useComparison(projectId);
 
@@ -36,7 +37,7 @@ export function ProjectStudies({ projectId }: { projectId: string }) {
           <Card><p className="text-ink-700">No deck alternative yet.</p></Card>
         ) : (
           alternatives.data.map((alternative) => (
-            <AlternativeCard key={alternative.id} projectId={projectId} alternative={alternative}
+            <AlternativeCard key={alternative.id} projectId={projectId} alternative={alternative} canEdit={canEdit}
               rows={comparison.data?.rows.filter((r) => r.alternativeId === alternative.id) ?? null}
               comparisonError={comparison.isError ? comparison.error : null} />
           ))
@@ -73,8 +74,8 @@ function MarginText({ margin }: { margin: NonNullable<ComparisonRow["margins"]>[
   );
 }
 
-function AlternativeCard({ projectId, alternative, rows, comparisonError }: {
-  projectId: string; alternative: AlternativeDto; rows: ComparisonRow[] | null; comparisonError: Error | null;
+function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonError }: {
+  projectId: string; alternative: AlternativeDto; canEdit: boolean; rows: ComparisonRow[] | null; comparisonError: Error | null;
 }) {
   const datasets = useDatasets(alternative.id);
   return (
@@ -154,6 +155,7 @@ function AlternativeCard({ projectId, alternative, rows, comparisonError }: {
             ))}
           </ul>
         )}
+        {canEdit ? <DatasetUpload alternativeId={alternative.id} projectId={projectId} /> : null}
       </div>
     </Card>
   );
