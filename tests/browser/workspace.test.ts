@@ -227,6 +227,21 @@ describe("the analyst's study workspace", () => {
     await page.getByText(`Revision ${savedNumber + 2} (latest)`).waitFor();
   });
 
+  it("the analyst starts a new study from the latest revision of another and lands in its workspace", async () => {
+    const { page } = browser;
+    await page.getByRole("link", { name: "← Project" }).click();
+    await page.getByRole("heading", { name: "Deck alternatives" }).waitFor();
+
+    await page.getByRole("button", { name: "New study…" }).first().click();
+    const form = page.getByRole("form", { name: /^New study of / });
+    await form.getByLabel("Study name").fill("Erection stage, deck 60 % closed");
+    await form.getByRole("button", { name: "Create and open" }).click();
+
+    await page.getByRole("heading", { level: 1, name: "Erection stage, deck 60 % closed" }).waitFor();
+    await page.getByText("Revision 1 (latest)").waitFor();
+    await page.getByTestId("flutter-speed").waitFor();
+  });
+
   it("a reviewer sees the study read-only, can download it as a file, and the API refuses a revision from them", async () => {
     const { page } = browser;
     await signOut();

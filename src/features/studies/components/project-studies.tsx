@@ -11,6 +11,8 @@ import { useAlternatives } from "@/features/studies/api/get-alternatives";
 import { useComparison } from "@/features/studies/api/get-comparison";
 import { useDatasets } from "@/features/studies/api/get-datasets";
 import { DatasetUpload } from "@/features/studies/components/dataset-upload";
+import { NewAlternativeForm } from "@/features/studies/components/new-alternative-form";
+import { NewStudyForm } from "@/features/studies/components/new-study-form";
 import { queryErrorPanel } from "@/features/studies/components/study-workspace";
 
 /**
@@ -29,6 +31,7 @@ export function ProjectStudies({ projectId, canEdit }: { projectId: string; canE
           <RequiredLine comparison={comparison.data} />
           <Link to={paths.app.compare.getHref(projectId)} className="ml-auto text-sm font-semibold text-tide-700 hover:underline">Compare revisions →</Link>
         </div>
+        {canEdit ? <NewAlternativeForm projectId={projectId} /> : null}
         {alternatives.isPending ? (
           <Card><LoadingBlock label="Loading the alternatives…" /></Card>
         ) : alternatives.isError ? (
@@ -157,6 +160,11 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
         )}
         {canEdit ? <DatasetUpload alternativeId={alternative.id} projectId={projectId} /> : null}
       </div>
+      {canEdit ? (
+        <div className="border-t border-ink-100 px-4 py-2">
+          <NewStudyForm projectId={projectId} alternative={alternative} studies={rows ?? []} />
+        </div>
+      ) : null}
     </Card>
   );
 }
