@@ -36,6 +36,10 @@ describe("flutter speed by two independent routes", () => {
   it.each([
     { name: "flat plate, benchmark deck", study: benchmarkDeck() },
     { name: "flat plate, benchmark deck, ζ = 0, f_h = 0.2 Hz", study: benchmarkDeck({ damping: 0, heaveHz: 0.2 }) },
+    {
+      name: "flat plate, close frequencies f_α/f_h = 1.05, ζ = 0",
+      study: benchmarkDeck({ heaveHz: 0.278 / 1.05, damping: 0, density: 1.225, from: 0, step: 0.25 }),
+    },
     { name: "tabulated (monotone cubic) deck", study: tabulatedDeck() },
   ])("$name: sweep and det Z = 0 agree to 0.1 %", ({ study }) => {
     const sweep = runSweep(study).flutter?.speed;
