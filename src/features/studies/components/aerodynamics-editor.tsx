@@ -142,6 +142,8 @@ export function AerodynamicsEditor({ value, readOnly, datasets, datasetsError, o
     emitTable(next, interpolation, []);
   }
 
+  // Keyed by content: the form hands over a fresh copy of the block on every keystroke anywhere in the study.
+  const valueKey = JSON.stringify(value);
   const figure = useMemo(() => {
     try {
       if (value.model !== "tabulated") return aeroFigure(value);
@@ -149,7 +151,7 @@ export function AerodynamicsEditor({ value, readOnly, datasets, datasetsError, o
     } catch {
       return null;
     }
-  }, [value, gridParse, interpolation]);
+  }, [valueKey, gridParse, interpolation]); // eslint-disable-line react-hooks/exhaustive-deps
 
   return (
     <div className="space-y-3">

@@ -75,6 +75,8 @@ export function StudyEditor(props: StudyEditorProps) {
     source: `Stored with revision ${revision.number}`,
   }));
   const runSweep = useRunSweep();
+  // Stable while typing, so the plots redraw only when a new result arrives.
+  const resultRuns = useMemo(() => [{ name: "Result", result: shown.result }], [shown.result]);
 
   const valuesKey = keyOf(values);
   const parsed = useMemo(() => studyDocumentSchema.safeParse(values), [valuesKey]); // eslint-disable-line react-hooks/exhaustive-deps
@@ -217,7 +219,7 @@ export function StudyEditor(props: StudyEditorProps) {
             <ResultSummary result={shown.result} document={shown.document} criteria={criteria} showKmh={showKmh} />
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
-          <ResultPlots runs={[{ name: "Result", result: shown.result }]} dimmed={runSweep.isPending} />
+          <ResultPlots runs={resultRuns} dimmed={runSweep.isPending} />
           {renderChecks?.(shown.document, shown.result)}
         </div>
       </div>
