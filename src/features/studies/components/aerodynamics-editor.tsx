@@ -10,6 +10,7 @@ import { DatasetPicker, isDerivativeSet, matchingDataset } from "@/features/stud
 import { DerivativeTable } from "@/features/studies/components/derivative-table";
 import { QuasiSteadyFields } from "@/features/studies/components/quasi-steady-fields";
 import { SelectField } from "@/features/studies/components/select-field";
+import { useDebouncedValue } from "@/features/studies/hooks/use-debounced-value";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
 import {
   emptyRow,
@@ -142,16 +143,19 @@ export function AerodynamicsEditor({ value, readOnly, datasets, datasetsError, o
     emitTable(next, interpolation, []);
   }
 
-  // Keyed by content: the form hands over a fresh copy of the block on every keystroke anywhere in the study.
-  const valueKey = JSON.stringify(value);
+  // The plots follow the table after a pause in typing (eight subplots take a noticeable moment to redraw), and
+  // are keyed by content: the form hands over a fresh copy of the block on every keystroke anywhere in the study.
+  const plotted: StudyAerodynamics | null =
+    value.model !== "tabulated" ? value : gridParse.ok ? { model: "tabulated", interpolation, ...gridParse.table } : null;
+  const plottedKey = useDebouncedValue(JSON.stringify(plotted), 350);
   const figure = useMemo(() => {
+    const settled = JSON.parse(plottedKey) as StudyAerodynamics | null;
     try {
-      if (value.model !== "tabulated") return aeroFigure(value);
-      return gridParse.ok ? aeroFigure({ model: "tabulated", interpolation, ...gridParse.table }) : null;
+      return settled ? aeroFigure(settled) : null;
     } catch {
       return null;
     }
-  }, [valueKey, gridParse, interpolation]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [plottedKey]);
 
   return (
     <div className="space-y-3">
