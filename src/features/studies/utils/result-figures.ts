@@ -60,7 +60,8 @@ export function polePathFigure(runs: readonly PlotRun[]): PlotFigure {
         hovertemplate:
           "U %{customdata[0]:.1f} m/s<br>f %{customdata[1]:.4f} Hz<br>ζ %{customdata[2]:.2f} %<br>λ %{x:.4f} + %{y:.4f}i<extra>%{fullData.name}</extra>",
         line: { color: colour, width: 1.3, dash },
-        marker: { color: colour, size: mode.steps.map((s) => size(s.speed)), opacity: 0.85 },
+        // Refined sweeps hold hundreds of steps: draw about 70 markers per branch (every step stays hoverable).
+        marker: { color: colour, size: mode.steps.map((s) => size(s.speed)), opacity: 0.85, maxdisplayed: 70 },
       });
     });
     const flutter = run.result.flutter;
