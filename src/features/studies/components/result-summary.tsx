@@ -68,6 +68,10 @@ export function ResultSummary({ result, document, criteria, showKmh }: ResultSum
   const closedForm = divergence ? null : closedFormDivergence(document);
   return (
     <div className="space-y-3">
+      <p role="status" className="sr-only">
+        {flutter ? `Flutter at ${flutter.speed.toFixed(2)} metres per second.` : `No flutter up to ${sweepToMps} metres per second.`}
+        {warnings.length > 0 ? ` ${warnings.length} warning${warnings.length > 1 ? "s" : ""}.` : ""}
+      </p>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-4">
         <div className="col-span-2 rounded-md border border-ink-200 bg-white px-3 py-2">
           <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Flutter</dt>
