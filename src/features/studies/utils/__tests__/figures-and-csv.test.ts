@@ -1,0 +1,65 @@
+import { describe, expect, it } from "vitest";
+import { runSweep } from "@shared/engine/run-sweep";
+import type { StudyDocument } from "@shared/schemas/study";
+import { aeroFigure } from "@/features/studies/utils/aero-figure";
+import { stepRows, stepsCsv } from "@/features/studies/utils/result-csv";
+import { dampingFigure, polePathFigure } from "@/features/studies/utils/result-figures";
+
+/** The IABSE TG 3.1 benchmark deck's inputs (domain guide §5) on a short coarse sweep; only the plot and CSV plumbing is checked. */
+const study: StudyDocument = {
+  format: "stillspan.study/1",
+  name: "benchmark deck, thin plate",
+  air: { density: 1.22 },
+  deck: { width: 31, depth: 3 },
+  structure: {
+    mass: 22_740,
+    inertia: 2.47e6,
+    modes: [
+      { id: "h", dof: "heave", frequency: 0.1, damping: 0.003 },
+      { id: "a", dof: "torsion", frequency: 0.278, damping: 0.003 },
+    ],
+  },
+  aerodynamics: { model: "flat-plate" },
+  sweep: { from: 60, to: 90, step: 2 },
+};
+const result = runSweep(study);
+
+describe("steps CSV", () => {
+  it("has one row per tracked step of every branch, ordered by speed, with SI units in the header", () => {
+    const lines = stepsCsv(result).trimEnd().split("\r\n");
+    const total = result.modes.reduce((n, m) => n + m.steps.length, 0);
+    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_h,participation_a,mac,confidence");
+    expect(lines).toHaveLength(total + 1);
+    const speeds = stepRows(result).map((r) => r.speed);
+    expect(speeds).toEqual([...speeds].sort((x, y) => x - y));
+    expect(Number(lines[1].split(",")[1])).toBe(speeds[0]);
+  });
+});
+
+describe("result figures", () => {
+  it("mark the flutter point on the imaginary axis at 2π f_F, and the zero-damping line", () => {
+    expect(result.flutter).not.toBeNull();
+    const poles = polePathFigure([{ name: "r1", result }]);
+    const marker = poles.data.find((t) => t.name === "Flutter point")!;
+    expect(marker.x).toEqual([0]);
+    expect((marker.y as number[])[0]).toBeCloseTo(2 * Math.PI * result.flutter!.frequency, 12);
+    const damping = dampingFigure([{ name: "r1", result }]);
+    const shapes = damping.layout.shapes as Array<Record<string, unknown>>;
+    expect(shapes.some((s) => s.yref === "y" && s.y0 === 0 && s.y1 === 0)).toBe(true);
+    expect(shapes.some((s) => s.x0 === result.flutter!.speed && s.x1 === result.flutter!.speed)).toBe(true);
+  });
+});
+
+describe("derivative plots", () => {
+  it("shade the tested range of a table and draw its points in every panel", () => {
+    const table = { model: "tabulated" as const, interpolation: "linear" as const, reducedVelocity: [2, 6, 10], H1: [-0.6, -3.3, -5.8], A2: [-0.03, -0.33, -0.79] };
+    const figure = aeroFigure(table);
+    const rects = (figure.layout.shapes as Array<Record<string, unknown>>).filter((s) => s.type === "rect");
+    expect(rects).toHaveLength(8);
+    expect(rects.every((r) => r.x0 === 2 && r.x1 === 10)).toBe(true);
+    const points = figure.data.filter((t) => t.mode === "markers");
+    expect(points).toHaveLength(8);
+    expect(points[0].y).toEqual([-0.6, -3.3, -5.8]);
+    expect(points[1].y).toEqual([0, 0, 0]);
+  });
+});
