@@ -12,6 +12,8 @@ export const users = pgTable(
     isAdmin: boolean("is_admin").notNull().default(false),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+    /** Sessions issued before this instant are refused (set when the password changes); null: no cut-off. */
+    sessionsValidAfter: timestamp("sessions_valid_after", { withTimezone: true }),
   },
   (t) => [uniqueIndex("users_email_lower_key").on(sql`lower(${t.email})`)],
 );
