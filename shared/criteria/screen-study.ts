@@ -4,6 +4,7 @@ import { computeMargins, type Margins } from "./margins";
 import { screenDivergence, type DivergenceScreening } from "./screen-divergence";
 import { screenGalloping, type GallopingScreening } from "./screen-galloping";
 import { screenVortexShedding, type VortexSheddingScreening } from "./screen-vortex-shedding";
+import { screeningCriticals } from "./screening-criticals";
 import { CAUTIONS } from "./sources";
 
 export type { LockIn, VortexModeCheck } from "./screen-vortex-shedding";
@@ -23,7 +24,8 @@ export interface ScreeningResult {
  * Screening of one deck study for vortex shedding, galloping and torsional divergence.
  *
  * **Method**: {@link screenVortexShedding} (v_crit = D n / St, Scruton numbers, lock-in), {@link screenGalloping}
- * (E.18 and Den Hartog) and {@link screenDivergence} (E.24); each onset against the project's required speed.
+ * (E.18 and Den Hartog) and {@link screenDivergence} (E.24); each onset against the project's required speed:
+ * vortex shedding "investigate" / "clear", galloping and divergence pass / fail, or not evaluated with the reason.
  *
  * **Notes**: EN 1991-1-4:2005 Annex E and Den Hartog; each check lists its assumptions and sources and the
  * result carries the cautions. Results are indicative. Needs ρ > 0.
@@ -48,15 +50,12 @@ export function screenStudy(
   const galloping = screenGalloping(study, options);
   const divergence = screenDivergence(study, options);
 
-  const onsets = vortexShedding.modes.map((check) => check.onsetSpeedMps).filter((v): v is number => v !== null);
+  const criticals = screeningCriticals({ vortexShedding, galloping });
   const margins = required
     ? computeMargins(
-        {
-          vortexOnset: onsets.length ? { kind: "speed", speedMps: Math.min(...onsets) } : null,
-          gallopingOnset: galloping.critical,
-          divergence: divergence.critical,
-        },
+        { vortexOnset: criticals.vortexOnset, gallopingOnset: criticals.gallopingOnset, divergence: divergence.critical },
         required,
+        criticals.notes,
       )
     : null;
 

@@ -114,7 +114,8 @@ function lockInStatement(
       statement:
         `Mode ${modeId}: onset ${onset.toFixed(1)} m/s is below the required ${required.toFixed(1)} m/s (${factor} × v_m): ` +
         "vortex-induced vibration (lock-in) is possible in the design wind range. By EN 1991-1-4 E.1.2(2), Expr. (E.1) " +
-        "(from memory) its effects must then be investigated: response amplitudes (Annex E.1.5) or section-model tests.",
+        "(from memory) its effects must then be investigated — cross-wind amplitudes and deck accelerations (Annex E.1.5) " +
+        "or section-model tests. Lock-in is a serviceability and fatigue question, not a stability failure.",
     };
   }
   return {

@@ -34,12 +34,19 @@ export const SOURCES = {
     `${EN_1991_1_4}, Annex E.2.2(1), Expr. (E.18): v_CG = 2 Sc n_1,y b / a_G (formula recalled; clause numbering from memory)`,
   gallopingTable:
     `${EN_1991_1_4}, Annex E.2.2, Table E.7: factor of galloping instability a_G — values from memory, not ` +
-    "checked against the standard: verify before use; where no factor is known the standard allows a_G = 10 (from memory)",
+    "checked against the standard: verify before use. Only sharp-cornered rectangles with 1/3 ≤ d/b ≤ 1 are used; " +
+    "no factor is assumed outside that range",
   gallopingCriterion:
     `${EN_1991_1_4}, Annex E.2.2(2), Expr. (E.19): v_CG > 1.25 v_m (from memory: verify)`,
   denHartog:
     "J.P. Den Hartog, Mechanical Vibrations (4th ed., McGraw-Hill 1956), galloping criterion dC_L/dα + C_D < 0; " +
     "onset speed U = 4 m ζ ω / (−ρ B (dC_L/dα + C_D)) derived from the quasi-steady heave damping (domain guide §3)",
+  vortexAmplitude:
+    `${EN_1991_1_4}, Annex E.1.5: vortex-induced cross-wind amplitudes (and, for a deck, the accelerations that ` +
+    "follow from them) where lock-in is possible (clause from memory: verify)",
+  gallopingBySweep:
+    "Flutter sweep with the heave derivative H1* (measured, or quasi-steady H1* = −(dC_L/dα + C_D)/K): the heave " +
+    "branch's damping includes the aerodynamic heave damping whose loss is galloping (domain guide §3)",
   divergence:
     `${EN_1991_1_4}, Annex E.4.3, Expr. (E.24): v_div = [2 k_Θ / (ρ b² dc_M/dΘ)]^0.5, with k_Θ = I ω_α² and b = B`,
   divergenceCriterion: `${EN_1991_1_4}, Annex E.4.3(3): v_div > 2 v_m(z_s) (from memory: verify)`,

@@ -2,6 +2,7 @@ import type { SweepResult } from "../schemas/result";
 import { computeMargins, type CriticalSpeed, type Margins } from "./margins";
 import type { RequiredSpeeds } from "./required-speeds";
 import type { ScreeningResult } from "./screen-study";
+import { screeningCriticals } from "./screening-criticals";
 
 /**
  * Margins of a stored sweep result (and optionally its study's screening) against the project's required speeds:
@@ -10,7 +11,8 @@ import type { ScreeningResult } from "./screen-study";
  * **Method**: flutter from the sweep — its speed, or, when every branch stayed damped, "none up to" the highest
  * swept speed (a lower bound). Divergence from the sweep's closed form when it lies in the swept range, else from
  * the screening's uncapped closed form (EN 1991-1-4 E.24 — the same expression), which also tells "no divergence"
- * (dC_M/dα ≤ 0) apart from "beyond the range". Vortex-shedding and galloping onsets from the screening.
+ * (dC_M/dα ≤ 0) apart from "beyond the range". Vortex-shedding onset (the lowest mode's; "investigate" below the
+ * required speed, never "fail") and galloping (a speed, "none", or not evaluated with the reason) from the screening.
  *
  * **Notes**: without a screening, an absent divergence is reported as not evaluated rather than guessed.
  *
@@ -36,16 +38,15 @@ export function sweepMargins(
     ? { kind: "speed", speedMps: result.divergence.speed }
     : (screening?.divergence.critical ?? null);
 
-  const onsets = (screening?.vortexShedding.modes ?? [])
-    .map((mode) => mode.onsetSpeedMps)
-    .filter((speed): speed is number => speed !== null);
+  const onsets = screening ? screeningCriticals(screening) : null;
   return computeMargins(
     {
       flutter,
       divergence,
-      vortexOnset: onsets.length ? { kind: "speed", speedMps: Math.min(...onsets) } : null,
-      gallopingOnset: screening?.galloping.critical ?? null,
+      vortexOnset: onsets?.vortexOnset ?? null,
+      gallopingOnset: onsets?.gallopingOnset ?? null,
     },
     required,
+    onsets?.notes ?? {},
   );
 }

@@ -178,7 +178,7 @@ export const screeningOptionsSchema = object({
     .optional(),
   strouhalBasis: text("Where the Strouhal number comes from (test report, reference)", 2000).optional(),
   gallopingFactor: positive("Factor of galloping instability a_G, dimensionless").optional(),
-  gallopingFactorBasis: text("Where a_G comes from", 2000).optional(),
+  gallopingFactorBasis: text("Where a_G comes from (test report, reference); required with gallopingFactor", 2000).optional(),
   liftSlope: number("Static lift coefficient slope dC_L/dα at the mean angle, per radian, lift up, on ½ρU²B").optional(),
   dragCoefficient: number("Static drag coefficient C_D on ½ρU²B, dimensionless")
     .min(0, { error: "must be at least 0" })
@@ -188,6 +188,9 @@ export const screeningOptionsSchema = object({
   if ((options.liftSlope === undefined) !== (options.dragCoefficient === undefined)) {
     const missing = options.liftSlope === undefined ? "liftSlope" : "dragCoefficient";
     ctx.addIssue({ code: "custom", path: [missing], message: "is required with the other static coefficient" });
+  }
+  if (options.gallopingFactor !== undefined && options.gallopingFactorBasis === undefined) {
+    ctx.addIssue({ code: "custom", path: ["gallopingFactorBasis"], message: "is required with gallopingFactor: say where a_G comes from" });
   }
 });
 

@@ -87,7 +87,13 @@ export const summaryCriterionSchema = z.strictObject({
 
 export const summaryMarginSchema = z.strictObject({
   phenomenon: z.enum(PHENOMENA).describe("Instability checked"),
-  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]).describe("Outcome of the check"),
+  status: z
+    .enum(["pass", "fail", "undetermined", "investigate", "clear", "not-evaluated"])
+    .describe(
+      "Outcome of the check: stability limits (flutter, divergence, galloping) pass / fail / undetermined; the " +
+        "vortex-shedding onset investigate (lock-in possible in the design range: amplitude and acceleration checks " +
+        "needed) / clear; not-evaluated with its reason in the statement",
+    ),
   margin: z
     .number()
     .nonnegative()

@@ -76,6 +76,33 @@ describe("margins = critical / required", () => {
     expect(margins.divergence.statement).toMatch(/extend the range/);
   });
 
+  it("vortex-shedding onset below the required speed is 'investigate' (amplitudes, accelerations), never 'fail'", () => {
+    const margins = computeMargins({ vortexOnset: { kind: "speed", speedMps: 3.5 } }, required);
+    expect(margins.vortexOnset).toMatchObject({ status: "investigate", criticalSpeedMps: 3.5 });
+    expect(margins.vortexOnset.margin).toBeCloseTo(3.5 / 50, 12);
+    expect(margins.vortexOnset.statement).toMatch(/3\.5 m\/s < required 50\.0 m\/s/);
+    expect(margins.vortexOnset.statement).toMatch(/E\.1\.5/);
+    expect(margins.vortexOnset.statement).toMatch(/accelerations/);
+    expect(margins.vortexOnset.statement).toMatch(/not a stability limit/i);
+  });
+
+  it("vortex-shedding onset at or above the required speed is 'clear' (E.1.2(2): need not be investigated)", () => {
+    const margins = computeMargins({ vortexOnset: { kind: "speed", speedMps: 50 } }, required);
+    expect(margins.vortexOnset.status).toBe("clear");
+    expect(margins.vortexOnset.statement).toMatch(/need not be investigated/);
+    expect(computeMargins({ vortexOnset: { kind: "speed", speedMps: 49.9 } }, required).vortexOnset.status).toBe("investigate");
+  });
+
+  it("galloping stays a stability check (pass / fail) and 'not-evaluated' carries its reason", () => {
+    expect(computeMargins({ gallopingOnset: { kind: "speed", speedMps: 40 } }, required).gallopingOnset.status).toBe("fail");
+    expect(computeMargins({ gallopingOnset: { kind: "speed", speedMps: 60 } }, required).gallopingOnset.status).toBe("pass");
+    const unknown = computeMargins({ gallopingOnset: { kind: "not-evaluated", reason: "no a_G for this section." } }, required, {
+      gallopingOnset: "Covered by the sweep.",
+    });
+    expect(unknown.gallopingOnset).toMatchObject({ status: "not-evaluated", margin: null, criticalSpeedMps: null });
+    expect(unknown.gallopingOnset.statement).toBe("Galloping onset: not evaluated — no a_G for this section. Covered by the sweep.");
+  });
+
   it("passes a phenomenon that cannot occur, with its reason and no ratio", () => {
     const margins = computeMargins({ divergence: { kind: "none", reason: "dC_M/dα ≤ 0." } }, required);
     expect(margins.divergence).toMatchObject({ status: "pass", margin: null });

@@ -25,7 +25,17 @@ describe("screenStudy on the invented deck", () => {
     expect(v1.lockIn).toBe(v1.onsetSpeedMps! < required ? "possible" : "not-expected");
     expect(v1.lockIn).toBe("possible"); // 4.06 m/s onset against ~52 m/s: a low-frequency deck sheds in the design range
     expect(v1.statement).toMatch(/E\.1\.2\(2\)/);
-    expect(result.margins!.vortexOnset.status).toBe("fail");
+    // Lock-in below the design range is a call for amplitude and acceleration checks, not a failed deck.
+    expect(result.margins!.vortexOnset.status).toBe("investigate");
+    expect(result.margins!.vortexOnset.criticalSpeedMps).toBeCloseTo(v1.onsetSpeedMps!, 12);
+    expect(result.margins!.vortexOnset.statement).toMatch(/Lowest onset: mode V1 \(heave\)/);
+  });
+
+  it("clears vortex shedding when every onset is above the required speed", () => {
+    // St = 0.004 is no real deck's value: it only lifts both onsets (D n / St ≥ 111 m/s) above 1.25 v_m ≈ 50 m/s.
+    const high = screenStudy(study, criteria, { strouhalNumber: 0.004, strouhalBasis: "test value" });
+    expect(high.vortexShedding.modes.every((mode) => mode.lockIn === "not-expected")).toBe(true);
+    expect(high.margins!.vortexOnset.status).toBe("clear");
   });
 
   it("uses the translational Scruton number for heave and the inertia form for torsion", () => {
@@ -37,12 +47,28 @@ describe("screenStudy on the invented deck", () => {
     expect(t1.scruton.source).toMatch(/common practice/);
   });
 
-  it("gallops by the standard's formula with the fallback a_G = 10 for B/D = 7.6 (no static coefficients)", () => {
-    expect(result.galloping.governing).toBe("standard");
-    expect(result.galloping.standard).toMatchObject({ factor: 10, factorOrigin: "fallback" });
-    const sc = (2 * 2 * Math.PI * 0.005 * 15200) / (1.225 * 3.6 ** 2);
-    expect(result.galloping.standard.onsetSpeedMps).toBeCloseTo((2 * sc * 0.124 * 3.6) / 10, 10);
+  it("does not evaluate galloping for B/D = 7.6 without a_G or static coefficients, and says what would do", () => {
+    expect(result.galloping.standard).toBeNull();
     expect(result.galloping.denHartog).toBeNull();
+    expect(result.galloping.governing).toBeNull();
+    expect(result.galloping.critical).toMatchObject({ kind: "not-evaluated" });
+    const margin = result.margins!.gallopingOnset;
+    expect(margin).toMatchObject({ status: "not-evaluated", margin: null, criticalSpeedMps: null });
+    expect(margin.statement).toMatch(/outside the range of EN 1991-1-4 Table E\.7/);
+    expect(margin.statement).toMatch(/give a_G with its source, or a static-coefficient data set/);
+    // The study's measured H1* already carries the heave damping whose loss is galloping.
+    expect(margin.statement).toMatch(/covered by the flutter sweep through the measured H1\*/);
+  });
+
+  it("evaluates galloping by the standard's formula with an a_G given with its source", () => {
+    const given = screenStudy(study, criteria, { gallopingFactor: 2, gallopingFactorBasis: "invented static tests, for the demo" });
+    expect(given.galloping.governing).toBe("standard");
+    expect(given.galloping.standard).toMatchObject({ factor: 2, factorOrigin: "input", factorSource: "invented static tests, for the demo" });
+    const sc = (2 * 2 * Math.PI * 0.005 * 15200) / (1.225 * 3.6 ** 2);
+    const byHand = (2 * sc * 0.124 * 3.6) / 2; // EN 1991-1-4 E.2.2, Expr. (E.18)
+    expect(given.galloping.standard!.onsetSpeedMps).toBeCloseTo(byHand, 10);
+    expect(given.margins!.gallopingOnset.criticalSpeedMps).toBeCloseTo(byHand, 10);
+    expect(given.margins!.gallopingOnset.status).toBe(byHand >= given.required!.gallopingOnset.requiredSpeedMps ? "pass" : "fail");
   });
 
   it("takes divergence from K²A3* at the largest Ur and matches the E.24 routine", () => {
@@ -77,6 +103,19 @@ describe("screenStudy with quasi-steady aerodynamics", () => {
     const expected = (4 * 15200 * 0.005 * 2 * Math.PI * 0.124) / (1.225 * 27.5 * 3.5);
     expect(result.galloping.critical).toMatchObject({ kind: "speed" });
     expect(result.galloping.denHartog!.onsetSpeedMps).toBeCloseTo(expected, 10);
+    expect(result.galloping.governing).toBe("den-hartog");
+    expect(result.galloping.standard).toBeNull(); // no a_G is assumed for the deck; Den Hartog alone evaluates it
+    expect(result.margins!.gallopingOnset).toMatchObject({ status: expected >= result.required!.gallopingOnset.requiredSpeedMps ? "pass" : "fail" });
+    expect(result.margins!.gallopingOnset.criticalSpeedMps).toBeCloseTo(expected, 10);
+    expect(result.margins!.gallopingOnset.statement).toMatch(/quasi-steady H1\*/);
+  });
+
+  it("evaluates Den Hartog from static coefficients given with the request, beside a tabulated sweep", () => {
+    const result = screenStudy(study, criteria, { liftSlope: -4, dragCoefficient: 0.5 });
+    const expected = (4 * 15200 * 0.005 * 2 * Math.PI * 0.124) / (1.225 * 27.5 * 3.5);
+    expect(result.galloping.governing).toBe("den-hartog");
+    expect(result.margins!.gallopingOnset.criticalSpeedMps).toBeCloseTo(expected, 10);
+    expect(result.margins!.gallopingOnset.status).not.toBe("not-evaluated");
   });
 
   it("without criteria gives onsets but no required speeds or margins", () => {
@@ -88,6 +127,12 @@ describe("screenStudy with quasi-steady aerodynamics", () => {
 });
 
 describe("screening request schema", () => {
+  it("refuses an a_G without its source", () => {
+    const bad = parseScreeningRequest({ study: invented, criteria, options: { gallopingFactor: 2 } });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.issues.map((issue) => issue.path)).toContain("$.options.gallopingFactorBasis");
+  });
+
   it("accepts a full study document and rejects bad input with JSON paths", () => {
     expect(parseScreeningRequest({ study: invented, criteria }).ok).toBe(true);
     const bad = parseScreeningRequest({

@@ -70,10 +70,11 @@ describe("galloping (EN 1991-1-4:2005 Annex E.2.2; Den Hartog)", () => {
     expect(result).toMatchObject({ unstable: false, onsetSpeedMps: null });
   });
 
-  it("a_G table (from memory) gives 1.2 for the square and the fallback 10 for deck-like d/b", () => {
+  it("a_G table (from memory) gives 1.2 for the square and assumes no factor for deck-like d/b", () => {
     expect(gallopingFactorForRectangle(1)).toMatchObject({ value: 1.2, origin: "table" });
-    expect(gallopingFactorForRectangle(8)).toMatchObject({ value: 10, origin: "fallback" });
-    expect(gallopingFactorForRectangle(8).note).toMatch(/from memory/);
+    expect(gallopingFactorForRectangle(0.5)).toMatchObject({ value: 0.7, origin: "table" });
+    expect(gallopingFactorForRectangle(8)).toBeNull(); // a streamlined box, B/D ≈ 8: outside the rectangles
+    expect(gallopingFactorForRectangle(0.2)).toBeNull();
   });
 });
 

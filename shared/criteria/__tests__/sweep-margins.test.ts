@@ -35,6 +35,15 @@ describe("sweepMargins", () => {
     const margins = sweepMargins(sweep(62, null), required, screening);
     expect(margins.divergence.criticalSpeedMps).toBeCloseTo(screening.divergence.speedMps!, 12);
     expect(margins.vortexOnset.criticalSpeedMps).toBeCloseTo((3.6 * 0.124) / 0.11, 12);
-    expect(margins.gallopingOnset.criticalSpeedMps).toBeCloseTo(screening.galloping.standard.onsetSpeedMps, 12);
+    expect(margins.vortexOnset.status).toBe("investigate"); // 4.06 m/s < 50 m/s: lock-in possible, not a failure
+    expect(margins.gallopingOnset.status).toBe("not-evaluated"); // B/D = 7.6: no a_G, no static coefficients
+    expect(margins.gallopingOnset.statement).toMatch(/covered by the flutter sweep/);
+  });
+
+  it("takes the galloping onset from the screening when a_G is given with its source", () => {
+    const screening = screenStudy(invented as unknown as ScreeningStudy, undefined, { gallopingFactor: 1.5, gallopingFactorBasis: "test value" });
+    const margins = sweepMargins(sweep(62, null), required, screening);
+    expect(margins.gallopingOnset.criticalSpeedMps).toBeCloseTo(screening.galloping.standard!.onsetSpeedMps, 12);
+    expect(margins.gallopingOnset.status).toBe(screening.galloping.standard!.onsetSpeedMps >= 50 ? "pass" : "fail");
   });
 });
