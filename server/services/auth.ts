@@ -1,12 +1,13 @@
 /**
  * Sign-in and sessions. A session is a JWT (HS256, signed with the server's session secret) naming the user and
  * carrying a random session id (jti); it lives 12 h in an httpOnly cookie. Every request re-reads the user, so a
- * deleted user loses access at once, and checks the session id against those ended by sign-out.
+ * deleted user loses access at once, checks the session id against those ended by sign-out, and refuses sessions
+ * issued before the user's `sessionsValidAfter` (moved forward when the password changes).
  */
 import { randomUUID } from "node:crypto";
 import { errors as joseErrors, jwtVerify, SignJWT } from "jose";
 import type { Me, SignInInput } from "../../shared/schemas/auth.js";
-import type { DbOrTx } from "../db/client.js";
+import type { Db, DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { isSessionRevoked, revokeSession } from "../db/queries/sessions.js";
 import { findUserByEmail, findUserById, listMembershipsOfUser } from "../db/queries/users.js";
@@ -30,8 +31,12 @@ export interface SessionUser {
 /** Same answer for an unknown e-mail and a wrong password, so the response does not reveal who has an account. */
 const invalidCredentials = () => new AppError(401, "invalid_credentials", "E-mail or password is incorrect.");
 
+/**
+ * A signed session token for the user. `iat` keeps milliseconds (a NumericDate may be fractional, RFC 7519 §2),
+ * so a session started just after a password change is told apart from one started just before it.
+ */
 export async function createSessionToken(secret: Uint8Array, userId: number, now = new Date()): Promise<string> {
-  const issuedAt = Math.floor(now.getTime() / 1000);
+  const issuedAt = now.getTime() / 1000;
   return new SignJWT({})
     .setProtectedHeader({ alg: "HS256", typ: "JWT" })
     .setSubject(String(userId))
@@ -39,7 +44,7 @@ export async function createSessionToken(secret: Uint8Array, userId: number, now
     .setIssuer(ISSUER)
     .setAudience(AUDIENCE)
     .setIssuedAt(issuedAt)
-    .setExpirationTime(issuedAt + SESSION_TTL_SECONDS)
+    .setExpirationTime(Math.floor(issuedAt) + SESSION_TTL_SECONDS)
     .sign(secret);
 }
 
@@ -47,6 +52,7 @@ export interface SessionClaims {
   userId: number;
   /** Session id. */
   jti: string;
+  issuedAt: Date;
   expiresAt: Date;
 }
 
@@ -57,11 +63,11 @@ export async function readSessionToken(secret: Uint8Array, token: string): Promi
       algorithms: ["HS256"],
       issuer: ISSUER,
       audience: AUDIENCE,
-      requiredClaims: ["sub", "jti", "exp"],
+      requiredClaims: ["sub", "jti", "iat", "exp"],
     });
     const userId = Number(payload.sub);
     if (!Number.isSafeInteger(userId) || userId <= 0 || typeof payload.jti !== "string") return undefined;
-    return { userId, jti: payload.jti, expiresAt: new Date(payload.exp! * 1000) };
+    return { userId, jti: payload.jti, issuedAt: new Date(payload.iat! * 1000), expiresAt: new Date(payload.exp! * 1000) };
   } catch (err) {
     if (err instanceof joseErrors.JOSEError) return undefined;
     throw err;
@@ -82,12 +88,18 @@ export async function signIn(db: DbOrTx, input: SignInInput, ip: string | undefi
   return toSessionUser(user);
 }
 
-/** The user behind a session token, or undefined when the token is invalid or revoked, or the user is gone. */
-export async function userFromSession(db: DbOrTx, secret: Uint8Array, token: string): Promise<SessionUser | undefined> {
+/**
+ * The user behind a session token, or undefined when the token is invalid or revoked, the user is gone, or the
+ * session was started before the user's password last changed.
+ */
+export async function userFromSession(db: Db, secret: Uint8Array, token: string): Promise<SessionUser | undefined> {
   const claims = await readSessionToken(secret, token);
   if (!claims) return undefined;
+  // Two pooled connections, not a transaction: the lookups may run side by side.
   const [user, revoked] = await Promise.all([findUserById(db, claims.userId), isSessionRevoked(db, claims.jti)]);
-  return user && !revoked ? toSessionUser(user) : undefined;
+  if (!user || revoked) return undefined;
+  if (user.sessionsValidAfter && claims.issuedAt.getTime() < user.sessionsValidAfter.getTime()) return undefined;
+  return toSessionUser(user);
 }
 
 /** Ends a session before its expiry (sign-out) and records it; a no-op for an invalid token. */

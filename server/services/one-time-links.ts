@@ -22,8 +22,8 @@ import {
   insertPasswordReset,
 } from "../db/queries/one-time-tokens.js";
 import { findProjectById } from "../db/queries/projects.js";
-import { findUserByEmail, insertUser } from "../db/queries/users.js";
-import { memberships, users } from "../db/schema/index.js";
+import { findUserByEmail, insertUser, setPassword } from "../db/queries/users.js";
+import { memberships } from "../db/schema/index.js";
 import { AppError } from "../errors.js";
 import { sha256Hex } from "../lib/hash.js";
 import { invitationMail, ONE_TIME_LINK_TTL_HOURS } from "../mail/templates/invitation.js";
@@ -32,7 +32,6 @@ import type { SessionUser } from "./auth.js";
 import { deliverMail } from "./mail.js";
 import { hashPassword } from "./passwords.js";
 import { appLinks } from "./review-mail.js";
-import { eq } from "drizzle-orm";
 
 const TTL_MS = ONE_TIME_LINK_TTL_HOURS * 3600 * 1000;
 /** At most this many reset links per account per hour (the response stays the same beyond it). */
@@ -106,7 +105,7 @@ export async function inviteToProject(
 
 /**
  * POST /api/invitations/accept: creates the account (or sets the password of an existing one — the link proves
- * the mailbox) and the membership, in one transaction with the token's consumption and the audit event.
+ * the mailbox — and ends its earlier sessions) and the membership, in one transaction with the token's consumption and the audit event.
  */
 export async function acceptInvitation(
   ctx: AppContext,
@@ -122,7 +121,7 @@ export async function acceptInvitation(
   await db.transaction(async (tx) => {
     let user = await findUserByEmail(tx, invitation.email);
     if (user) {
-      await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, user.id));
+      await setPassword(tx, user.id, passwordHash);
     } else {
       user = await insertUser(tx, { email: invitation.email, name: input.name, passwordHash });
     }
@@ -167,7 +166,10 @@ export async function requestPasswordReset(ctx: AppContext, email: string, ip?: 
   void deliverMail(ctx, { to: user.email, ...mail });
 }
 
-/** POST /api/auth/password-reset/confirm: sets the new password and closes every open reset link of the account. */
+/**
+ * POST /api/auth/password-reset/confirm: sets the new password, closes every open reset link of the account and
+ * ends every session started before.
+ */
 export async function confirmPasswordReset(ctx: AppContext, token: string, password: string, ip?: string): Promise<void> {
   const { db } = ctx;
   const reset = await findPasswordResetByHash(db, sha256Hex(token));
@@ -177,7 +179,7 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
   const passwordHash = await hashPassword(password);
   await db.transaction(async (tx) => {
     if (!(await consumePasswordReset(tx, reset, new Date()))) throw linkGone("password reset", "used");
-    await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, reset.userId));
+    await setPassword(tx, reset.userId, passwordHash);
     await writeAudit(tx, { actorId: reset.userId, action: "auth.password-reset", objectType: "user", objectId: reset.userId, ip });
   });
 }

@@ -130,3 +130,36 @@ describe("password reset", () => {
     expect(res.body.error.code).toBe("link_expired");
   });
 });
+
+describe("sessions after a password change", () => {
+  const me = (cookie: string) => api(base(), "/api/auth/me", { cookie });
+
+  it("ends sessions started before a password reset or an invitation that sets a new password; sign-ins after work", async () => {
+    const email = `session-cut-${suffix}@stillspan.test`;
+    const { token } = await invite(email, "analyst");
+    expect((await api(base(), "/api/invitations/accept", { body: { token, password: "first-passphrase", name: "Cut Tester" } })).status).toBe(200);
+    const beforeReset = await signIn(base(), email, "first-passphrase");
+    expect((await me(beforeReset)).status).toBe(200);
+
+    await api(base(), "/api/auth/password-reset", { body: { email } });
+    const [resetMail] = await waitForMail(base(), admin, email, "Choose a new Stillspan password");
+    const confirmed = await api(base(), "/api/auth/password-reset/confirm", {
+      body: { token: tokenFrom(resetMail, "/reset-password"), password: "second-passphrase" },
+    });
+    expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(200);
+    expect((await me(beforeReset)).status, "session started before the reset").toBe(401);
+    const afterReset = await signIn(base(), email, "second-passphrase");
+    expect((await me(afterReset)).status, "session started right after the reset").toBe(200);
+
+    // A second invitation to the now existing account: accepting it sets the password again.
+    const second = await api(base(), `/api/projects/${projectId}/invitations`, { cookie: admin, body: { email, role: "reviewer" } });
+    expect(second.status, JSON.stringify(second.body)).toBe(201);
+    const [latest] = await waitForMail(base(), admin, email, "You are invited to", { count: 2 });
+    const accepted = await api(base(), "/api/invitations/accept", {
+      body: { token: tokenFrom(latest, "/accept-invite"), password: "third-passphrase", name: "Cut Tester" },
+    });
+    expect(accepted.status, JSON.stringify(accepted.body)).toBe(200);
+    expect((await me(afterReset)).status, "session started before the invitation was accepted").toBe(401);
+    expect((await me(await signIn(base(), email, "third-passphrase"))).status).toBe(200);
+  });
+});

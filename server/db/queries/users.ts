@@ -72,3 +72,11 @@ export async function updateUserFields(
     .returning();
   return row;
 }
+
+/**
+ * Sets a new password and ends every session started before now (their `iat` is earlier than
+ * `sessions_valid_after`); sessions started from `now` on stay valid.
+ */
+export async function setPassword(db: DbOrTx, id: number, passwordHash: string, now = new Date()): Promise<void> {
+  await db.update(users).set({ passwordHash, updatedAt: now, sessionsValidAfter: now }).where(eq(users.id, id));
+}
