@@ -23,6 +23,8 @@ const STATUS_COLOR: Record<string, string> = {
   PASS: COLORS.steady,
   FAIL: COLORS.signal,
   UNDETERMINED: COLORS.caution,
+  INVESTIGATE: COLORS.caution,
+  CLEAR: COLORS.steady,
   "NOT EVALUATED": COLORS.muted,
 };
 

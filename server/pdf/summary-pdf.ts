@@ -37,7 +37,14 @@ const PHENOMENON_LABEL = {
   vortexOnset: "Vortex-shedding onset",
   gallopingOnset: "Galloping onset",
 } as const;
-const STATUS_LABEL = { pass: "PASS", fail: "FAIL", undetermined: "UNDETERMINED", "not-evaluated": "NOT EVALUATED" };
+const STATUS_LABEL: Record<SummaryPayload["margins"][number]["status"], string> = {
+  pass: "PASS",
+  fail: "FAIL",
+  undetermined: "UNDETERMINED",
+  investigate: "INVESTIGATE",
+  clear: "CLEAR",
+  "not-evaluated": "NOT EVALUATED",
+};
 
 const mps = (v: number | null | undefined) => (v === null || v === undefined ? "—" : `${v.toFixed(1)} m/s`);
 const utc = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;

@@ -1,6 +1,6 @@
 import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
-import { computeMargins, type CriticalSpeed } from "../../shared/criteria/margins.js";
-import type { ComparisonDto } from "../../shared/schemas/comparison.js";
+import { computeMargins, type CriticalSpeed, type Margin } from "../../shared/criteria/margins.js";
+import type { ComparisonDto, ComparisonMargin } from "../../shared/schemas/comparison.js";
 import type { CriticalSpeeds } from "../../shared/schemas/revisions.js";
 import type { Db } from "../db/client.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
@@ -17,6 +17,13 @@ function divergenceFound(c: CriticalSpeeds): CriticalSpeed {
   return c.divergenceSpeedMps !== null
     ? { kind: "speed", speedMps: c.divergenceSpeedMps }
     : { kind: "none", reason: c.divergenceNote ?? "divergence cannot occur" };
+}
+
+/** Flutter and divergence are stability limits: never the onset screening's "investigate" or "clear". */
+function stabilityMargin(margin: Margin): ComparisonMargin {
+  const { status } = margin;
+  if (status === "investigate" || status === "clear") throw new Error(`a stability check cannot be "${status}"`);
+  return { ...margin, status };
 }
 
 /** The project's current criteria evaluated, or null when there are none (or they cannot be evaluated). */
@@ -51,7 +58,7 @@ export async function getComparison(db: Db, user: SessionUser, projectId: number
     let margins: ComparisonDto["rows"][number]["margins"] = null;
     if (latest && criteria) {
       const all = computeMargins({ flutter: flutterFound(latest.critical), divergence: divergenceFound(latest.critical) }, criteria.required);
-      margins = { flutter: all.flutter, divergence: all.divergence };
+      margins = { flutter: stabilityMargin(all.flutter), divergence: stabilityMargin(all.divergence) };
     }
     return {
       alternativeId: String(s.alternativeId),

@@ -146,6 +146,7 @@ function outcome(row: SignatureRow): SummaryListItemDto["outcome"] {
   const statuses = row.payload.margins.map((m) => m.status);
   if (statuses.includes("fail")) return "fail";
   if (statuses.includes("undetermined")) return "undetermined";
+  if (statuses.includes("investigate")) return "investigate";
   return "pass";
 }
 
@@ -166,7 +167,9 @@ export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<Summ
     flutterSpeedMps: r.payload.flutter?.speedMps ?? null,
     outcome: outcome(r),
     attention: r.payload.margins.flatMap((m) =>
-      m.status === "fail" || m.status === "undetermined" ? [{ phenomenon: m.phenomenon, status: m.status }] : [],
+      m.status === "fail" || m.status === "undetermined" || m.status === "investigate" || m.status === "not-evaluated"
+        ? [{ phenomenon: m.phenomenon, status: m.status }]
+        : [],
     ),
     current: r.currentSignatureId === r.id,
     newerUnsigned: r.newerUnsigned,

@@ -7,7 +7,7 @@ import { z } from "zod";
 import { criticalSpeedsSchema, personSchema } from "./revisions";
 
 export const comparisonMarginSchema = z.object({
-  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]),
+  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]).describe("Flutter and divergence are stability limits: pass or fail"),
   margin: z.number().nullable().describe("critical / required speed, dimensionless (lower bound when marginIsLowerBound)"),
   marginIsLowerBound: z.boolean(),
   criticalSpeedMps: z.number().nullable(),
@@ -78,3 +78,4 @@ export const comparisonSchema = z.object({
 });
 export type ComparisonDto = z.infer<typeof comparisonSchema>;
 export type ComparisonRow = z.infer<typeof comparisonRowSchema>;
+export type ComparisonMargin = z.infer<typeof comparisonMarginSchema>;

@@ -120,10 +120,10 @@ export interface SummaryListItemDto {
   signer: PersonDto;
   signedAt: string;
   flutterSpeedMps: number | null;
-  /** Worst status over the margins (fail > undetermined > pass). */
-  outcome: "pass" | "fail" | "undetermined";
-  /** The phenomena whose check fails or is undetermined, in the summary's order. */
-  attention: { phenomenon: string; status: "fail" | "undetermined" }[];
+  /** Worst status over the margins (fail > undetermined > investigate > pass; clear and not-evaluated count as pass). */
+  outcome: "pass" | "fail" | "undetermined" | "investigate";
+  /** The phenomena whose check fails, is undetermined, asks for investigation or was not evaluated, in the summary's order. */
+  attention: { phenomenon: string; status: "fail" | "undetermined" | "investigate" | "not-evaluated" }[];
   current: boolean;
   newerUnsigned: boolean;
 }

@@ -270,7 +270,11 @@ describe("design wind and criteria on the project page", () => {
     const heave = inventedStudy.structure.modes[0];
     const scByHand = (2 * (2 * Math.PI * heave.damping) * inventedStudy.structure.mass) / (inventedStudy.air.density * inventedStudy.deck.depth ** 2);
     expect(await screeningRegion.getByTestId(`scruton-${heave.id}`).textContent()).toBe(scByHand.toFixed(2));
-    expect(await screeningRegion.getByTestId("galloping-standard").textContent()).toBe(mps(screening.galloping.standard.onsetSpeedMps));
+    // B/D = 27.5/3.6 = 7.6 lies outside the rectangles of EN 1991-1-4 Table E.7 and the study has no static
+    // coefficients: galloping is not evaluated (no a_G is assumed for a deck), and the reason says what would do.
+    expect(screening.galloping.standard).toBeNull();
+    expect(await screeningRegion.getByTestId("galloping-standard").textContent()).toBe("not evaluated — no a_G for this section");
+    expect(await screeningRegion.getByTestId("galloping-not-evaluated").textContent()).toContain("give a_G with its source");
     expect(await screeningRegion.getByTestId("divergence-closed-form").textContent()).toBe(mps(screening.divergence.speedMps as number));
     const engineDivergence = revision.body.result.divergence;
     expect(await screeningRegion.getByTestId("divergence-engine").textContent()).toBe(
@@ -279,12 +283,18 @@ describe("design wind and criteria on the project page", () => {
     expect(await screeningRegion.getByText(/Results are indicative/).count()).toBeGreaterThan(0);
 
     const marginsRegion = page.getByRole("region", { name: "Margins" });
+    // The lowest onset, D n / St ≈ 4 m/s, lies far below 1.25 v_m: lock-in is possible and must be investigated
+    // (EN 1991-1-4 E.1.2(2), E.1.5) — a serviceability check, not a failed deck.
+    const statusLabel = { pass: "pass", fail: "fail", undetermined: "undetermined", investigate: "investigate", clear: "clear", "not-evaluated": "not evaluated" };
+    expect(margins.vortexOnset.status).toBe("investigate");
+    expect(margins.gallopingOnset.status).toBe("not-evaluated");
     for (const phenomenon of PHENOMENA) {
       const margin = margins[phenomenon];
       const row = marginsRegion.getByRole("row").filter({ has: page.locator(`[data-testid="margin-${phenomenon}"]`) });
       const expectedRatio = margin.margin === null ? "—" : `${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}`;
       expect(await marginsRegion.getByTestId(`margin-${phenomenon}`).textContent(), phenomenon).toBe(expectedRatio);
       expect(await row.textContent(), phenomenon).toContain(margin.statement);
+      expect(await marginsRegion.getByTestId(`status-${phenomenon}`).textContent(), phenomenon).toBe(statusLabel[margin.status]);
     }
     // A measured Strouhal number replaces the table's: it must name its source, then every onset follows D n / St.
     await screeningRegion.getByText("Measured values for the screening").click();
@@ -301,8 +311,18 @@ describe("design wind and criteria on the project page", () => {
       await expect.poll(() => screeningRegion.getByTestId(`onset-${mode.id}`).textContent()).toBe(mps(byHand));
     }
     expect(await screeningRegion.getByText(/Section-model test, smooth flow \(invented for this test\)/).count()).toBeGreaterThan(0);
-    await analyst.screenshot("criteria-workspace-screening");
     await marginsRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-margins.png") });
+    // An a_G given with its source evaluates galloping by EN 1991-1-4 E.2.2, Expr. (E.18): v_CG = 2 Sc n D / a_G.
+    await optionsForm.getByLabel("Galloping factor a_G").fill("2");
+    await optionsForm.getByLabel("Source of a_G").fill("Static coefficient tests (invented for this test)");
+    await optionsForm.getByRole("button", { name: "Screen with these values" }).click();
+    const gallopingByHand = (2 * scByHand * heave.frequency * inventedStudy.deck.depth) / 2;
+    await expect.poll(() => screeningRegion.getByTestId("galloping-standard").textContent()).toBe(mps(gallopingByHand));
+    const requiredGalloping = evaluateCriteria(criteria).required.gallopingOnset.requiredSpeedMps;
+    await expect
+      .poll(() => marginsRegion.getByTestId("status-gallopingOnset").textContent())
+      .toBe(gallopingByHand >= requiredGalloping ? "pass" : "fail");
+    await analyst.screenshot("criteria-workspace-screening");
     await screeningRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-screening-table.png") });
   });
 

@@ -9,7 +9,10 @@ import { PHENOMENON_LABEL } from "@/features/criteria/components/phenomenon-labe
 import { MarginStatusBadge } from "@/features/criteria/components/status-badge";
 import { fixed } from "@/features/criteria/utils/format";
 
-/** Critical / required per phenomenon with pass or fail: the table the workspace and reviews read. */
+/**
+ * Critical / required per phenomenon with its status: pass or fail for the stability limits, investigate or clear
+ * for the vortex-shedding onset, not evaluated with the reason. Only a failed stability check takes the failure colour.
+ */
 export function MarginsTable({ margins, className }: { margins: Margins; className?: string }) {
   return (
     <div className={cn("overflow-x-auto", className)}>
@@ -51,7 +54,7 @@ export function MarginsTable({ margins, className }: { margins: Margins; classNa
                 >
                   {ratio}
                 </td>
-                <td className="py-1.5 pr-3">
+                <td className="py-1.5 pr-3" data-testid={`status-${phenomenon}`}>
                   <MarginStatusBadge status={margin.status} />
                 </td>
                 <td className="py-1.5 text-ink-700">{margin.statement}</td>

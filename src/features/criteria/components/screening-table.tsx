@@ -46,43 +46,61 @@ function Assumptions({ title, items, sources }: { title: string; items: readonly
 }
 
 function Galloping({ galloping }: { galloping: ScreeningResult["galloping"] }) {
-  const { standard, denHartog } = galloping;
+  const { standard, denHartog, critical } = galloping;
   return (
-    <dl className="grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
-      <dt className="text-ink-600">Heave mode, Scruton Sc</dt>
-      <dd className="num">
-        {galloping.modeId}, Sc = {fixed(galloping.scruton, 2)}
-      </dd>
-      <dt className="text-ink-600">Standard: v_CG = 2 Sc n D / a_G</dt>
-      <dd>
-        <span className="num font-semibold" data-testid="galloping-standard">
-          {fixed(standard.onsetSpeedMps, 2)} m/s
-        </span>{" "}
-        with a_G = <span className="num">{sig(standard.factor, 3)}</span> ({standard.factorOrigin}) · EN 1991-1-4 E.2.2,
-        Expr. (E.18)
-        {galloping.governing === "standard" ? <StatusBadge tone="none" className="ml-2">governs</StatusBadge> : null}
-      </dd>
-      <dt className="text-ink-600">Den Hartog: dC_L/dα + C_D</dt>
-      <dd>
-        {denHartog ? (
-          <>
-            <span className="num font-semibold">{fixed(denHartog.coefficient, 3)}</span>{" "}
-            {denHartog.unstable ? (
-              <>
-                &lt; 0: galloping possible, onset{" "}
-                <span className="num font-semibold">{fixed(denHartog.onsetSpeedMps, 2)} m/s</span>
-              </>
-            ) : (
-              "≥ 0: no quasi-steady galloping"
-            )}{" "}
-            ({denHartog.coefficientsOrigin})
-            {galloping.governing === "den-hartog" ? <StatusBadge tone="none" className="ml-2">governs</StatusBadge> : null}
-          </>
-        ) : (
-          <span className="text-ink-600">not evaluated — no static coefficients</span>
-        )}
-      </dd>
-    </dl>
+    <div className="space-y-2">
+      <dl className="grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
+        <dt className="text-ink-600">Heave mode, Scruton Sc</dt>
+        <dd className="num">
+          {galloping.modeId}, Sc = {fixed(galloping.scruton, 2)}
+        </dd>
+        <dt className="text-ink-600">Standard: v_CG = 2 Sc n D / a_G</dt>
+        <dd>
+          {standard ? (
+            <>
+              <span className="num font-semibold" data-testid="galloping-standard">
+                {fixed(standard.onsetSpeedMps, 2)} m/s
+              </span>{" "}
+              with a_G = <span className="num">{sig(standard.factor, 3)}</span> (
+              {standard.factorOrigin === "input" ? standard.factorSource : "rectangle table, from memory"}) · EN 1991-1-4 E.2.2,
+              Expr. (E.18)
+              {galloping.governing === "standard" ? <StatusBadge tone="none" className="ml-2">governs</StatusBadge> : null}
+            </>
+          ) : (
+            <span className="text-ink-700" data-testid="galloping-standard">
+              not evaluated — no a_G for this section
+            </span>
+          )}
+        </dd>
+        <dt className="text-ink-600">Den Hartog: dC_L/dα + C_D</dt>
+        <dd>
+          {denHartog ? (
+            <>
+              <span className="num font-semibold">{fixed(denHartog.coefficient, 3)}</span>{" "}
+              {denHartog.unstable ? (
+                <>
+                  &lt; 0: galloping possible, onset{" "}
+                  <span className="num font-semibold">{fixed(denHartog.onsetSpeedMps, 2)} m/s</span>
+                </>
+              ) : (
+                "≥ 0: no quasi-steady galloping"
+              )}{" "}
+              ({denHartog.coefficientsOrigin})
+              {galloping.governing === "den-hartog" ? <StatusBadge tone="none" className="ml-2">governs</StatusBadge> : null}
+            </>
+          ) : (
+            <span className="text-ink-600">not evaluated — no static coefficients</span>
+          )}
+        </dd>
+      </dl>
+      {critical.kind === "not-evaluated" ? (
+        <p className="rounded-md border-l-4 border-l-ink-300 bg-ink-50 px-3 py-1.5 text-sm text-ink-800" data-testid="galloping-not-evaluated">
+          <StatusBadge tone="none" className="mr-2">not evaluated</StatusBadge>
+          {critical.reason}
+        </p>
+      ) : null}
+      {galloping.coveredBySweep ? <p className="text-sm text-ink-700">{galloping.coveredBySweep}</p> : null}
+    </div>
   );
 }
 

@@ -24,6 +24,8 @@ const MARGIN: Record<MarginStatus, { tone: Tone; label: string }> = {
   pass: { tone: "good", label: "pass" },
   fail: { tone: "bad", label: "fail" },
   undetermined: { tone: "doubt", label: "undetermined" },
+  investigate: { tone: "doubt", label: "investigate" },
+  clear: { tone: "good", label: "clear" },
   "not-evaluated": { tone: "none", label: "not evaluated" },
 };
 
@@ -32,7 +34,7 @@ export function MarginStatusBadge({ status }: { status: MarginStatus }) {
 }
 
 const LOCK_IN: Record<LockIn, { tone: Tone; label: string }> = {
-  possible: { tone: "bad", label: "lock-in possible" },
+  possible: { tone: "doubt", label: "lock-in possible" },
   "not-expected": { tone: "good", label: "not expected" },
   "not-evaluated": { tone: "none", label: "not evaluated" },
 };

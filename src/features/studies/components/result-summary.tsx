@@ -137,6 +137,8 @@ const STATUS = {
   pass: { text: "Pass", tone: "bg-steady-100 text-steady-700" },
   fail: { text: "Fail", tone: "bg-signal-600 text-white" },
   undetermined: { text: "Extend sweep", tone: "bg-caution-100 text-caution-700" },
+  investigate: { text: "Investigate", tone: "bg-caution-100 text-caution-700" },
+  clear: { text: "Clear", tone: "bg-steady-100 text-steady-700" },
   "not-evaluated": { text: "Not evaluated", tone: "bg-ink-100 text-ink-700" },
 } as const;
 

@@ -9,10 +9,12 @@ import { formatDate } from "@/lib/format";
 import { useSummaries } from "@/features/summaries/api/get-summaries";
 
 const OUTCOME = {
-  pass: { label: "All checks pass", tone: "bg-steady-100 text-steady-700" },
+  pass: { label: "Stability checks pass", tone: "bg-steady-100 text-steady-700" },
   fail: { label: "Fails", tone: "bg-signal-50 text-signal-700" },
   undetermined: { label: "Undetermined", tone: "bg-caution-100 text-caution-700" },
+  investigate: { label: "Pass; to investigate", tone: "bg-caution-100 text-caution-700" },
 } as const;
+const ATTENTION_STATUS = { fail: "fails", undetermined: "undetermined", investigate: "investigate", "not-evaluated": "not evaluated" } as const;
 const PHENOMENON: Record<string, string> = {
   flutter: "flutter",
   divergence: "divergence",
@@ -76,7 +78,7 @@ export function SummariesTable() {
                     </span>
                     {s.attention.length > 0 ? (
                       <span className="mt-0.5 block text-sm text-ink-700">
-                        {s.attention.map((a) => `${PHENOMENON[a.phenomenon] ?? a.phenomenon}${a.status === "undetermined" ? " (undetermined)" : ""}`).join(", ")}
+                        {s.attention.map((a) => `${PHENOMENON[a.phenomenon] ?? a.phenomenon} (${ATTENTION_STATUS[a.status]})`).join(", ")}
                       </span>
                     ) : null}
                   </td>

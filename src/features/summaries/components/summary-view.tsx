@@ -18,10 +18,13 @@ const PHENOMENON: Record<string, string> = {
   vortexOnset: "Vortex-shedding onset",
   gallopingOnset: "Galloping onset",
 };
-const STATUS: Record<string, { label: string; tone: string }> = {
+/** Failure colour for a failed stability check only; "investigate" is a caution, "not evaluated" neutral. */
+const STATUS: Record<SummaryPayload["margins"][number]["status"], { label: string; tone: string }> = {
   pass: { label: "Pass", tone: "bg-steady-100 text-steady-700" },
   fail: { label: "Fail", tone: "bg-signal-50 text-signal-700" },
   undetermined: { label: "Undetermined", tone: "bg-caution-100 text-caution-700" },
+  investigate: { label: "Investigate", tone: "bg-caution-100 text-caution-700" },
+  clear: { label: "Clear", tone: "bg-steady-100 text-steady-700" },
   "not-evaluated": { label: "Not evaluated", tone: "bg-ink-50 text-ink-700" },
 };
 const mps = (v: number | null | undefined) => (v === null || v === undefined ? "—" : `${v.toFixed(1)} m/s`);
