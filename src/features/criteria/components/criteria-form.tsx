@@ -7,10 +7,11 @@ import { PHENOMENA, projectCriteriaSchema, type ProjectCriteria, type ProjectCri
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
+import { TextAreaField } from "@/components/ui/textarea-field";
 import { ApiError } from "@/lib/api-client";
 import { useUpdateCriteria } from "@/features/criteria/api/update-criteria";
 import { DesignWindDerivation } from "@/features/criteria/components/design-wind-derivation";
-import { SelectField, TextAreaField } from "@/features/criteria/components/form-controls";
 import { RequirementFields } from "@/features/criteria/components/requirement-fields";
 import { RequiredSpeedsTable } from "@/features/criteria/components/required-speeds-table";
 import {
@@ -170,6 +171,7 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
           {probability.kind === "factor" ? (
             <TextAreaField
               label="Basis of the probability factor"
+              rows={2}
               error={windErrors?.probability?.basis?.message}
               {...register("wind.probability.basis")}
             />

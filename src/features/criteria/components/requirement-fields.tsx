@@ -3,7 +3,7 @@ import type { Phenomenon, ProjectCriteria } from "@shared/schemas/criteria";
 import { Field } from "@/components/ui/field";
 import { PHENOMENON_LABEL } from "@/features/criteria/components/phenomenon-labels";
 import { SourceBadge } from "@/features/criteria/components/source-badge";
-import { TextAreaField } from "@/features/criteria/components/form-controls";
+import { TextAreaField } from "@/components/ui/textarea-field";
 import type { CriteriaFormValues } from "@/features/criteria/utils/criteria-form-values";
 
 interface RequirementFieldsProps {
@@ -70,6 +70,7 @@ export function RequirementFields({ phenomenon, control, register, errors }: Req
                 />
                 <TextAreaField
                   label={`Basis of the ${multiplierLabel.toLowerCase()}`}
+                  rows={2}
                   error={multiplierErrors?.basis?.message}
                   {...register(`${name}.${key}.basis`)}
                 />
