@@ -10,7 +10,7 @@ import type {
 } from "../../shared/schemas/review.js";
 import { submitReviewSchema } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
-import type { DbOrTx } from "../db/client.js";
+import type { Db, DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { findMembershipRole } from "../db/queries/projects.js";
 import {
@@ -74,8 +74,11 @@ export async function assertReviewer(db: DbOrTx, user: SessionUser, revision: Re
 
 const person = (id: number | null, name: string | null) => (id === null ? null : { id: String(id), name: name ?? "" });
 
-/** GET /api/revisions/:id/review — state, request, comments, history and signature (analysts and reviewers). */
-export async function getRevisionReview(db: DbOrTx, user: SessionUser, revisionId: number): Promise<RevisionReviewDto> {
+/**
+ * GET /api/revisions/:id/review — state, request, comments, history and signature (analysts and reviewers).
+ * Takes the pool, not a transaction: its reads run side by side on separate connections.
+ */
+export async function getRevisionReview(db: Db, user: SessionUser, revisionId: number): Promise<RevisionReviewDto> {
   const revision = await revisionFor(db, user, revisionId, ["analyst", "reviewer"]);
   const [request, comments, events, signature] = await Promise.all([
     findReviewRequest(db, revisionId),
@@ -147,25 +150,9 @@ export async function submitForReview(
     throw AppError.badRequest("The reviewer cannot be the revision's author.", { path: "reviewerId" });
   }
   try {
-    await db.transaction(async (tx) => {
-      const existing = await findReviewRequest(tx, revisionId, true);
-      if (existing?.state === "in-review") {
-        throw AppError.conflict(`Revision ${revision.number} is already in review.`);
-      }
-      if (existing?.state === "signed") throw AppError.conflict(`Revision ${revision.number} is signed; it cannot be submitted again.`);
-      const values = { requestedBy: user.id, reviewerId: input.reviewerId, note: input.note };
-      if (existing) await resubmitReviewRequest(tx, existing.id, values);
-      else await insertReviewRequest(tx, { revisionId, ...values });
-      await insertReviewEvent(tx, { revisionId, kind: "submitted", actorId: user.id, reviewerId: input.reviewerId, note: input.note });
-      await writeAudit(tx, {
-        actorId: user.id,
-        action: "review.submit",
-        objectType: "revision",
-        objectId: revisionId,
-        ip,
-        details: { reviewerId: input.reviewerId, resubmission: Boolean(existing) },
-      });
-    });
+    await db.transaction((tx) =>
+      recordSubmission(tx, { revision, analystId: user.id, reviewerId: input.reviewerId, note: input.note, ip }),
+    );
   } catch (err) {
     if (isUniqueViolation(err)) throw AppError.conflict(`Revision ${revision.number} was submitted by someone else at the same moment.`);
     throw err;
@@ -204,19 +191,51 @@ export async function returnRevision(
 
 /** POST /api/revisions/:id/comments — analysts and reviewers of the project comment on a revision. */
 export async function addComment(
-  db: DbOrTx,
+  db: Db,
   user: SessionUser,
   revisionId: number,
   body: string,
   ip?: string,
 ): Promise<RevisionReviewDto> {
   await revisionFor(db, user, revisionId, ["analyst", "reviewer"]);
-  await db.transaction(async (tx) => {
-    const { id } = await insertReviewComment(tx, { revisionId, authorId: user.id, body });
-    await insertReviewEvent(tx, { revisionId, kind: "commented", actorId: user.id });
-    await writeAudit(tx, { actorId: user.id, action: "review.comment", objectType: "revision", objectId: revisionId, ip, details: { commentId: id } });
-  });
+  await db.transaction((tx) => recordComment(tx, { revisionId, authorId: user.id, body, ip }));
   return getRevisionReview(db, user, revisionId);
+}
+
+/**
+ * Inside the caller's transaction: puts the revision in review (a new request, or the returned one again) with
+ * its history entry and audit event. Used by the submit route and by the demo seed (`at`: when it happened).
+ */
+export async function recordSubmission(
+  tx: DbOrTx,
+  m: { revision: Pick<RevisionRow, "id" | "number">; analystId: number; reviewerId: number; note: string; ip?: string; at?: Date },
+): Promise<void> {
+  const revisionId = m.revision.id;
+  const existing = await findReviewRequest(tx, revisionId, true);
+  if (existing?.state === "in-review") throw AppError.conflict(`Revision ${m.revision.number} is already in review.`);
+  if (existing?.state === "signed") throw AppError.conflict(`Revision ${m.revision.number} is signed; it cannot be submitted again.`);
+  const values = { requestedBy: m.analystId, reviewerId: m.reviewerId, note: m.note };
+  if (existing) await resubmitReviewRequest(tx, existing.id, values);
+  else await insertReviewRequest(tx, { revisionId, ...values, submittedAt: m.at });
+  await insertReviewEvent(tx, { revisionId, kind: "submitted", actorId: m.analystId, reviewerId: m.reviewerId, note: m.note, at: m.at });
+  await writeAudit(tx, {
+    actorId: m.analystId,
+    action: "review.submit",
+    objectType: "revision",
+    objectId: revisionId,
+    ip: m.ip,
+    details: { reviewerId: m.reviewerId, resubmission: Boolean(existing) },
+  });
+}
+
+/** Inside the caller's transaction: a comment on a revision, its history entry and its audit event. */
+export async function recordComment(
+  tx: DbOrTx,
+  m: { revisionId: number; authorId: number; body: string; ip?: string },
+): Promise<void> {
+  const { id } = await insertReviewComment(tx, { revisionId: m.revisionId, authorId: m.authorId, body: m.body });
+  await insertReviewEvent(tx, { revisionId: m.revisionId, kind: "commented", actorId: m.authorId });
+  await writeAudit(tx, { actorId: m.authorId, action: "review.comment", objectType: "revision", objectId: m.revisionId, ip: m.ip, details: { commentId: id } });
 }
 
 /** GET /api/review-queue — revisions in review assigned to the caller. */

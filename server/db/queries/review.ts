@@ -40,7 +40,7 @@ export type ReviewRequestRow = NonNullable<Awaited<ReturnType<typeof findReviewR
 /** First submission: inserts the request; a concurrent first submission hits the unique key (23505). */
 export async function insertReviewRequest(
   db: DbOrTx,
-  values: { revisionId: number; requestedBy: number; reviewerId: number; note: string },
+  values: { revisionId: number; requestedBy: number; reviewerId: number; note: string; submittedAt?: Date },
 ): Promise<void> {
   await db.insert(reviewRequests).values(values);
 }

@@ -1,15 +1,15 @@
 import { asc, eq } from "drizzle-orm";
-import { runSweep } from "../../../shared/engine/run-sweep.js";
 import type { StudyDocument } from "../../../shared/schemas/study.js";
-import { canonicalSha256Hex } from "../../lib/hash.js";
-import { appendRevision } from "../../services/revisions.js";
+import { recordComment, recordSubmission } from "../../services/review.js";
+import { saveRevision } from "../../services/revisions.js";
 import { recordSignature } from "../../services/summaries.js";
 import { findAlternative } from "../queries/alternatives.js";
 import { findCurrentCriteria } from "../queries/criteria.js";
-import { insertReviewComment, insertReviewEvent, insertReviewRequest, findReviewRequest } from "../queries/review.js";
+import { findReviewRequest } from "../queries/review.js";
 import { findRevision, listRevisions } from "../queries/revisions.js";
 import { findUserById } from "../queries/users.js";
 import { alternatives, projects, studies } from "../schema/index.js";
+import { seedUser } from "./alternatives.js";
 import { ref, type SeedStep } from "./types.js";
 
 /** Invented review texts of the demo (fictional people, fictional crossing). */
@@ -52,23 +52,18 @@ export const demoReview: SeedStep = {
       log.warn("demo review: the demo crossing has no study with a revision yet; no summary seeded");
       return;
     }
-    const analystId = ref(ctx, "user:analyst");
+    const analyst = await seedUser(ctx, "user:analyst");
+    const analystId = analyst.id;
     const reviewerId = ref(ctx, "user:reviewer");
     let revisions = await listRevisions(tx, studyId);
     if (revisions.length === 1) {
+      // Through the same service as the API: computed, stored and audited in this transaction.
       const first = (await findRevision(tx, revisions[0].id))!;
       const study: StudyDocument = structuredClone(first.document);
       const torsion = study.structure.modes.find((m) => m.dof === "torsion")!;
       torsion.damping = Math.round(torsion.damping * 0.8 * 1e6) / 1e6;
-      const result = runSweep(study);
-      await appendRevision(
-        tx,
-        { id: analystId },
-        studyId,
-        { parentRevision: first.number, changeNote: `Torsional damping ratio lowered to ${torsion.damping} (measured on the invented deck model)`, study },
-        result,
-        canonicalSha256Hex(study),
-      );
+      const changeNote = `Torsional damping ratio lowered to ${torsion.damping} (measured on the invented deck model)`;
+      await saveRevision(tx, analyst, studyId, { parentRevision: first.number, changeNote, study }, undefined, "seed");
       revisions = await listRevisions(tx, studyId);
     }
     const toSign = (await findRevision(tx, revisions[revisions.length - 2].id))!;
@@ -82,9 +77,9 @@ export const demoReview: SeedStep = {
 
     const signedAt = new Date();
     const submittedAt = new Date(signedAt.getTime() - 26 * 3600_000);
-    await insertReviewRequest(tx, { revisionId: toSign.id, requestedBy: analystId, reviewerId, note: "First full sweep of the twin box." });
-    await insertReviewEvent(tx, { revisionId: toSign.id, kind: "submitted", actorId: analystId, reviewerId, note: "First full sweep of the twin box.", at: submittedAt });
-    await insertReviewComment(tx, {
+    // The review steps through the same in-transaction services as the API (history entry and audit event each).
+    await recordSubmission(tx, { revision: toSign, analystId, reviewerId, note: "First full sweep of the twin box.", at: submittedAt });
+    await recordComment(tx, {
       revisionId: toSign.id,
       authorId: reviewerId,
       body: "Derivatives are within the tested range up to flutter; the extrapolation warning above it does not affect the critical speed.",
@@ -102,8 +97,7 @@ export const demoReview: SeedStep = {
     });
     ctx.refs.set("summary:demo", summaryId);
 
-    await insertReviewRequest(tx, { revisionId: inReview.id, requestedBy: analystId, reviewerId, note: SUBMIT_NOTE });
-    await insertReviewEvent(tx, { revisionId: inReview.id, kind: "submitted", actorId: analystId, reviewerId, note: SUBMIT_NOTE });
+    await recordSubmission(tx, { revision: inReview, analystId, reviewerId, note: SUBMIT_NOTE });
     ctx.refs.set("revision:in-review", inReview.id);
   },
 };
