@@ -58,6 +58,13 @@ describe("renderSummaryPdf", () => {
     expect(text).toMatch(/PASS/);
   });
 
+  it("prints vortex shedding below the required speed as INVESTIGATE and galloping without a_G as NOT EVALUATED, never FAIL", () => {
+    expect(text).toContain("INVESTIGATE");
+    expect(text).toContain("NOT EVALUATED");
+    expect(text).not.toContain("FAIL");
+    expect(squash(text)).toContain(squash("investigate the vortex-induced amplitudes and deck accelerations"));
+  });
+
   it("carries the cautions", () => {
     expect(text).toContain("Results are indicative.");
     const caution = "Critical designs need wind-tunnel verification and review by a licensed engineer";

@@ -1,6 +1,6 @@
 import "@testing-library/jest-dom/vitest";
 import { QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen } from "@testing-library/react";
+import { cleanup, render, screen, within } from "@testing-library/react";
 import { calculateJwkThumbprint, CompactSign, exportJWK, generateKeyPair, type JWK } from "jose";
 import { MemoryRouter } from "react-router-dom";
 import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
@@ -101,5 +101,17 @@ describe("SummaryView: the signature is checked in the browser against the JWKS"
     const banner = screen.getByRole("alert");
     expect(banner).toHaveTextContent("Superseded");
     expect(screen.getByRole("link", { name: "Open the current summary (revision 4)" })).toHaveAttribute("href", "/summaries/8");
+  });
+
+  it("shows vortex shedding to investigate in the caution colour and galloping not evaluated in neutral, never as Fail", () => {
+    renderView(dto());
+    const margins = screen.getByRole("region", { name: "Margins against the required speeds" });
+    const row = (name: string) => within(margins).getByRole("rowheader", { name: new RegExp(name) }).closest("tr") as HTMLElement;
+    const vortex = within(row("Vortex-shedding onset")).getByText("Investigate");
+    expect(vortex.className).toMatch(/caution/);
+    expect(vortex.className).not.toMatch(/signal/);
+    const galloping = within(row("Galloping onset")).getByText("Not evaluated");
+    expect(galloping.className).not.toMatch(/signal|caution/);
+    expect(within(margins).queryByText("Fail")).toBeNull();
   });
 });
