@@ -27,7 +27,8 @@ export function navigationFor(user: User): NavItem[] {
   if (canUseWorkspace(user)) items.push({ to: paths.app.projects.getHref(), label: "Projects" });
   if (user.memberships.some((m) => m.role === "reviewer")) items.push({ to: paths.app.reviews.getHref(), label: "Review queue" });
   if (canReadSignedSummaries(user)) items.push({ to: paths.app.signedSummaries.getHref(), label: "Signed summaries" });
-  if (canAdminister(user)) items.push({ to: paths.app.admin.getHref(), label: "Admin" });
+  if (canAdminister(user)) items.push({ to: paths.app.admin.getHref(), label: "Admin", end: true });
+  if (canAdminister(user)) items.push({ to: paths.app.devMailbox.getHref(), label: "Mailbox" });
   return items;
 }
 
