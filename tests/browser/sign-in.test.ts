@@ -24,6 +24,15 @@ describe("signing in and out in the browser", () => {
     await browser?.close();
   });
 
+  it("a visitor opening /sign-in directly sees the sign-in form", async () => {
+    const { page } = browser;
+
+    await page.goto(browser.url("/sign-in"));
+
+    await page.getByRole("heading", { name: "Sign in" }).waitFor();
+    expect(await page.getByLabel("E-mail").isVisible()).toBe(true);
+  });
+
   it("a visitor opening the site lands on the sign-in page", async () => {
     const { page } = browser;
 
