@@ -64,11 +64,6 @@ export const paths = {
       /** `projectId`: the project whose members the page opens on. */
       getHref: (projectId?: string) => (projectId ? `/admin?project=${encodeURIComponent(projectId)}` : "/admin"),
     },
-    devMailbox: {
-      path: "/admin/mailbox",
-      /** `to`: show only the messages to this recipient. */
-      getHref: (to?: string) => (to ? `/admin/mailbox?to=${encodeURIComponent(to)}` : "/admin/mailbox"),
-    },
   },
 } as const;
 
@@ -131,7 +126,7 @@ export const apiPaths = {
   },
   jwks: "/.well-known/jwks.json",
   invitations: {
-    create: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/invitations`,
+    /** Creating one is per project: `projects.invitations(projectId)`. */
     accept: "/api/invitations/accept",
   },
   passwordReset: {
@@ -139,14 +134,6 @@ export const apiPaths = {
     confirm: "/api/auth/password-reset/confirm",
   },
   screening: "/api/screening",
-  /** What the local fake SMTP server received (administrators; 404 when real SMTP is configured). */
-  devMailbox: (query: { to?: string; limit?: number } = {}) => {
-    const search = new URLSearchParams();
-    if (query.to) search.set("to", query.to);
-    if (query.limit !== undefined) search.set("limit", String(query.limit));
-    const qs = search.toString();
-    return qs ? `/api/dev/mailbox?${qs}` : "/api/dev/mailbox";
-  },
 } as const;
 
 /**
