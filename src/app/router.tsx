@@ -145,6 +145,15 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
+          path: paths.app.devMailbox.path,
+          ErrorBoundary: RouteErrorBoundary,
+          HydrateFallback: ScreenFallback,
+          lazy: async () => {
+            const { DevMailboxRoute, clientLoader } = await import("@/app/routes/app/dev-mailbox");
+            return { Component: DevMailboxRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
           path: "*",
           ErrorBoundary: RouteErrorBoundary,
           lazy: async () => {

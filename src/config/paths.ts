@@ -64,6 +64,11 @@ export const paths = {
       /** `projectId`: the project whose members the page opens on. */
       getHref: (projectId?: string) => (projectId ? `/admin?project=${encodeURIComponent(projectId)}` : "/admin"),
     },
+    devMailbox: {
+      path: "/admin/mailbox",
+      /** `to`: show only the messages to this recipient. */
+      getHref: (to?: string) => (to ? `/admin/mailbox?to=${encodeURIComponent(to)}` : "/admin/mailbox"),
+    },
   },
 } as const;
 
@@ -134,6 +139,14 @@ export const apiPaths = {
     confirm: "/api/auth/password-reset/confirm",
   },
   screening: "/api/screening",
+  /** What the local fake SMTP server received (administrators; 404 when real SMTP is configured). */
+  devMailbox: (query: { to?: string; limit?: number } = {}) => {
+    const search = new URLSearchParams();
+    if (query.to) search.set("to", query.to);
+    if (query.limit !== undefined) search.set("limit", String(query.limit));
+    const qs = search.toString();
+    return qs ? `/api/dev/mailbox?${qs}` : "/api/dev/mailbox";
+  },
 } as const;
 
 /**
