@@ -141,6 +141,29 @@ describe("POST /api/screening", () => {
     expect(res.body.vortexShedding.modes[0].onsetSpeedMps).toBeCloseTo((3.6 * 0.124) / 0.11, 9);
     expect(res.body.margins.divergence.requiredSpeedMps).toBeCloseTo(2 * res.body.designWind.meanSpeedMps, 9);
     expect(res.body.cautions.join(" ")).toMatch(/indicative/);
+    // Onsets of 4–11 m/s against 1.25 v_m: lock-in to investigate (EN 1991-1-4 E.1.2(2)), never a failure;
+    // galloping of a B/D = 7.6 deck without a_G or static coefficients is not evaluated.
+    expect(res.body.margins.vortexOnset.status).toBe("investigate");
+    expect(res.body.margins.gallopingOnset.status).toBe("not-evaluated");
+    expect(res.body.galloping.standard).toBeNull();
+  });
+
+  it("evaluates galloping by EN 1991-1-4 E.2.2 (E.18) with an a_G given with its source, and refuses one without", async () => {
+    const res = await api(base(), "/api/screening", {
+      cookie: cookies.analyst,
+      body: { study: invented, projectId: String(projectId), options: { gallopingFactor: 2, gallopingFactorBasis: "invented static tests" } },
+    });
+    expect(res.status).toBe(200);
+    // By hand: Sc = 2 δ m / (ρ D²), δ = 2π·0.005; v_CG = 2 Sc n D / a_G with n = 0.124 Hz, D = 3.6 m, a_G = 2.
+    const sc = (2 * 2 * Math.PI * 0.005 * 15200) / (1.225 * 3.6 ** 2);
+    expect(res.body.galloping.standard.onsetSpeedMps).toBeCloseTo((2 * sc * 0.124 * 3.6) / 2, 9);
+    expect(res.body.margins.gallopingOnset.criticalSpeedMps).toBeCloseTo((2 * sc * 0.124 * 3.6) / 2, 9);
+    const bare = await api(base(), "/api/screening", {
+      cookie: cookies.analyst,
+      body: { study: invented, projectId: String(projectId), options: { gallopingFactor: 2 } },
+    });
+    expect(bare.status).toBe(400);
+    expect(bare.body.error.details.map((d: { path: string }) => d.path)).toContain("options.gallopingFactorBasis");
   });
 
   it("answers 403 to a user who is only a viewer, and 400 with paths for a bad study", async () => {

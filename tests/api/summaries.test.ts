@@ -89,6 +89,17 @@ describe("GET /api/summaries/:id", () => {
     expect(flutterCriterion.requiredSpeedMps).toBeCloseTo(1.2 * vm, 9);
     const flutterMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "flutter");
     expect(flutterMargin.margin).toBeCloseTo(payload.flutter.speedMps / (1.2 * vm), 12);
+    // Vortex shedding: v_crit = D n / St (EN 1991-1-4 E.1.3.1) of a 0.124 Hz heave mode is a few m/s, far below
+    // 1.25 v_m: lock-in must be investigated (E.1.2(2), E.1.5) — signed as "investigate", not as a failure.
+    const vortexMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "vortexOnset");
+    expect(vortexMargin.criticalSpeedMps).toBeLessThan(1.25 * vm);
+    expect(vortexMargin.status).toBe("investigate");
+    // B/D = 7.6 is outside the a_G table and the study has no static coefficients: galloping is not evaluated, and the
+    // measured H1* of the sweep is said to cover galloping-type loss of heave damping.
+    const gallopingMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "gallopingOnset");
+    expect(gallopingMargin).toMatchObject({ status: "not-evaluated", criticalSpeedMps: null, margin: null });
+    expect(gallopingMargin.statement).toMatch(/give a_G with its source/);
+    expect(gallopingMargin.statement).toMatch(/covered by the flutter sweep/);
     expect(payload.signer).toEqual({ name: "Mira Holloway", email: "reviewer@stillspan.test" });
     expect(payload.statement).toBe("Stable with margin (ζ > 0 up to the sweep end, λ tracked).");
     expect(res.body.branches.length).toBe(2);
@@ -165,6 +176,15 @@ describe("current, superseded and newer unsigned revisions", () => {
       [secondSummaryId, true],
       [firstSummaryId, false],
     ]);
+    // No failed stability check; vortex shedding to investigate and galloping not evaluated are named.
+    const first = mine.find((s: { id: string }) => s.id === firstSummaryId);
+    expect(first.outcome).toBe(old.body.payload.margins.some((m: { status: string }) => m.status === "fail") ? "fail" : "investigate");
+    expect(first.attention).toEqual(
+      expect.arrayContaining([
+        { phenomenon: "vortexOnset", status: "investigate" },
+        { phenomenon: "gallopingOnset", status: "not-evaluated" },
+      ]),
+    );
   });
 
   it("lists for the viewer only summaries of projects they belong to", async () => {

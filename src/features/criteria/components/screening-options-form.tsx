@@ -49,7 +49,13 @@ export function ScreeningOptionsForm({ value, onApply, disabled }: ScreeningOpti
         <div className="grid gap-3 sm:grid-cols-[8rem_minmax(0,1fr)]">
           <Field label="Strouhal number St" hint="On the deck depth D." error={errors.strouhalNumber?.message} {...numberInput} {...register("strouhalNumber")} />
           <Field label="Source of St" error={errors.strouhalBasis?.message} {...register("strouhalBasis")} />
-          <Field label="Galloping factor a_G" error={errors.gallopingFactor?.message} {...numberInput} {...register("gallopingFactor")} />
+          <Field
+            label="Galloping factor a_G"
+            hint="For a deck section no a_G is assumed."
+            error={errors.gallopingFactor?.message}
+            {...numberInput}
+            {...register("gallopingFactor")}
+          />
           <Field label="Source of a_G" error={errors.gallopingFactorBasis?.message} {...register("gallopingFactorBasis")} />
         </div>
         <fieldset className="grid gap-3 sm:grid-cols-3">

@@ -36,7 +36,7 @@ export function StudyChecks({ projectId, study, result, options: initialOptions,
   return (
     <div className={cn("space-y-4", className)}>
       {result ? (
-        <Card title="Margins" aria-label="Margins" subtitle="Critical speed / required speed per phenomenon; pass when ≥ 1">
+        <Card title="Margins" aria-label="Margins" subtitle="Critical / required speed: stability limits pass when ≥ 1; a vortex-shedding onset below it is to investigate">
           {criteria.isPending || (screening.isPending && study !== null) ? (
             <LoadingBlock label="Loading the required speeds…" className="min-h-16" />
           ) : criteria.isError ? (

@@ -91,7 +91,7 @@ function MarginsTable({ payload }: { payload: SummaryPayload }) {
               <td className="num px-4 py-2 text-right align-top">{mps(m.requiredSpeedMps)}</td>
               <td className="num px-4 py-2 text-right align-top">{m.margin === null ? "—" : `${m.marginIsLowerBound ? "≥ " : ""}${m.margin.toFixed(2)}`}</td>
               <td className="px-4 py-2 align-top">
-                <span className={cn("rounded-sm px-1.5 py-0.5 text-sm font-semibold", STATUS[m.status].tone)}>{STATUS[m.status].label}</span>
+                <span className={cn("rounded-sm px-1.5 py-0.5 text-sm font-semibold whitespace-nowrap", STATUS[m.status].tone)}>{STATUS[m.status].label}</span>
               </td>
             </tr>
           ))}
@@ -160,7 +160,7 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
 
       <Card
         title="Margins against the required speeds"
-        subtitle="Critical speed ÷ required speed; pass at 1.00 or more"
+        subtitle="Critical speed ÷ required speed: stability limits pass at 1.00 or more; a vortex-shedding onset below the required speed is to investigate (amplitudes, accelerations), not a failure"
         aria-label="Margins against the required speeds"
         flush
       >
