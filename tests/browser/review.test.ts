@@ -126,6 +126,27 @@ describe("review and signed summary in the browser", () => {
     await page.waitForURL((url) => url.pathname === summaryPath);
   });
 
+  it("the analyst sees the signed revision's review in the study workspace and submits revision 1 from there", async () => {
+    const { page } = browser;
+    await signOut(); // the viewer of the tests above
+    await signIn("analyst@stillspan.test", "/projects");
+    await page.getByRole("link", { name: "Harrowmere Estuary Crossing (invented demo)" }).click();
+    await page.getByRole("link", { name: DEMO_STUDY }).first().click();
+    await page.waitForURL((url) => /\/studies\/[^/]+$/.test(url.pathname));
+    const signed = page.getByRole("region", { name: `Review of revision ${signedRevision}` });
+    await signed.getByText("Signed by Mira Holloway").waitFor();
+
+    await page.goto(`${page.url()}?revision=1`);
+    const panel = page.getByRole("region", { name: "Review of revision 1" });
+    await panel.getByText("Not submitted for review").waitFor();
+    expect(await panel.getByLabel("Reviewer").locator("option:checked").textContent()).toBe("Mira Holloway");
+    await panel.getByLabel("Note to the reviewer (optional)").fill("The first sweep, for the record.");
+    await panel.getByRole("button", { name: "Submit for review" }).click();
+    await panel.getByText(/^Reviewer: Mira Holloway · submitted by Tomas Reedwell/).waitFor();
+    await browser.screenshot("workspace-review-submitted");
+    await signOut();
+  });
+
   it("the visit logged no uncaught error and no console error or warning", () => {
     expect(problems).toEqual([]);
   });

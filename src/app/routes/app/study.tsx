@@ -5,6 +5,7 @@ import { useMe } from "@/features/auth/api/get-me";
 import { getStudyQueryOptions } from "@/features/studies/api/get-study";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { StudyChecks } from "@/features/criteria/components/study-checks";
+import { ReviewPanel } from "@/features/review/components/review-panel";
 import { StudyWorkspace } from "@/features/studies/components/study-workspace";
 import { requireAccess } from "@/app/routes/guards";
 
@@ -22,14 +23,22 @@ export const clientLoader =
 export function StudyRoute() {
   const { projectId = "", studyId = "" } = useParams();
   const me = useMe();
-  const canEdit = me.data ? roleInProject(me.data, projectId) === "analyst" : false;
+  const role = me.data ? roleInProject(me.data, projectId) : null;
   return (
     <StudyWorkspace
       key={studyId}
       projectId={projectId}
       studyId={studyId}
-      readOnly={!canEdit}
-      renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
+      readOnly={role !== "analyst"}
+      renderChecks={(study, result, revision) => (
+        <>
+          <StudyChecks projectId={projectId} study={study} result={result} />
+          {/* The review of the revision being viewed: analysts submit it, its reviewer returns or signs it. */}
+          {me.data ? (
+            <ReviewPanel revisionId={revision.id} projectId={projectId} userId={me.data.id} role={role} isAdmin={me.data.isAdmin} />
+          ) : null}
+        </>
+      )}
     />
   );
 }

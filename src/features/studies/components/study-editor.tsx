@@ -40,8 +40,8 @@ export interface StudyEditorProps {
   /** Why the alternative's data sets could not be loaded, if they could not. */
   datasetsError: string | null;
   onRebased: (draft: RebasedDraft) => void;
-  /** Further checks of the shown result (screening, all margins), composed in by the route. */
-  renderChecks?: (document: StudyDocument, result: SweepResult) => ReactNode;
+  /** Further panels under the result (screening, all margins, the revision's review), composed in by the route. */
+  renderChecks?: (document: StudyDocument, result: SweepResult, revision: RevisionDto) => ReactNode;
 }
 
 interface ShownResult {
@@ -220,7 +220,7 @@ export function StudyEditor(props: StudyEditorProps) {
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
           <ResultPlots runs={resultRuns} dimmed={runSweep.isPending} />
-          {renderChecks?.(shown.document, shown.result)}
+          {renderChecks?.(shown.document, shown.result, revision)}
         </div>
       </div>
       <Card title="Steps" subtitle="Every tracked pole at every speed, including locally refined steps" flush>
