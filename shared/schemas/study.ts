@@ -19,6 +19,16 @@ const typeError = (expected: string) => (issue: { input?: unknown }) =>
 /** A finite number (zod 4 rejects NaN and ±Infinity by default) with its unit in the description. */
 const number = (description: string) => z.number({ error: typeError("a number") }).describe(description);
 const positive = (description: string) => number(description).positive({ error: "must be greater than 0" });
+/**
+ * A positive number within a plausible range. The bounds are wide — they hold section models at small scale and
+ * the largest decks at full scale — and keep the eigenproblem well away from the magnitudes where it cannot
+ * converge (a mass of 1e-300 kg/m or a width of 1e200 m left the solver iterating without end).
+ */
+const bounded = (description: string, min: number, max: number, unit: string) => {
+  const base = min > 0 ? positive(description) : number(description).min(min, { error: `must be at least ${min}` });
+  return (min > 0 ? base.refine((v) => !(v > 0 && v < min), { error: `must be at least ${min}${unit}` }) : base)
+    .refine((v) => !(v > max), { error: `must be at most ${max}${unit}` });
+};
 
 const object = <T extends z.ZodRawShape>(shape: T) =>
   z.strictObject(shape, {
@@ -33,7 +43,7 @@ const modeSchema = object({
     .max(16, { error: "must have 1 to 16 characters" })
     .describe("Mode identifier, unique in the study (1–16 characters)"),
   dof: z.enum(["heave", "torsion"], { error: 'must be "heave" or "torsion"' }).describe("Degree of freedom"),
-  frequency: positive("Natural frequency in still air, Hz"),
+  frequency: bounded("Natural frequency in still air, Hz", 0.001, 1000, " Hz"),
   damping: number("Structural damping ratio of critical, dimensionless (0.005 = 0.5 %)")
     .min(0, { error: "must be at least 0" })
     .lt(1, { error: "must be less than 1" }),
@@ -58,14 +68,24 @@ const modesSchema = z
   });
 
 const structureSchema = object({
-  mass: positive("Mass per unit length of deck, kg/m"),
-  inertia: positive("Mass moment of inertia per unit length about the deck centre (shear centre), kg·m²/m"),
+  mass: bounded("Mass per unit length of deck, kg/m", 0.001, 1e8, " kg/m"),
+  inertia: bounded(
+    "Mass moment of inertia per unit length about the deck centre (shear centre), kg·m²/m",
+    1e-9,
+    1e14,
+    " kg·m²/m",
+  ),
   modes: modesSchema,
 });
 
 const derivativeArray = (name: string) =>
   z
-    .array(number(`${name}, dimensionless`), { error: typeError("an array of numbers") })
+    .array(
+      number(`${name}, dimensionless`)
+        .min(-1e5, { error: "must be at least -100000" })
+        .max(1e5, { error: "must be at most 100000" }),
+      { error: typeError("an array of numbers") },
+    )
     .optional()
     .describe(`${name} at each reduced velocity, dimensionless, normalised with the full width B; missing = zeros`);
 
@@ -77,7 +97,10 @@ const tabulatedSchema = object({
     .enum(["linear", "monotone-cubic"], { error: 'must be "linear" or "monotone-cubic"' })
     .describe("Interpolation in reduced velocity: piecewise linear or Fritsch–Carlson monotone cubic"),
   reducedVelocity: z
-    .array(positive("Reduced velocity Ur = U/(fB), dimensionless"), { error: typeError("an array of numbers") })
+    .array(
+      positive("Reduced velocity Ur = U/(fB), dimensionless").max(1000, { error: "must be at most 1000" }),
+      { error: typeError("an array of numbers") },
+    )
     .min(2, { error: "must have at least 2 points" })
     .describe("Reduced velocities Ur = U/(fB) of the table rows, dimensionless, strictly increasing"),
   H1: derivativeArray("H1*"),
@@ -88,8 +111,11 @@ const tabulatedSchema = object({
   A2: derivativeArray("A2*"),
   A3: derivativeArray("A3*"),
   A4: derivativeArray("A4*"),
-  staticMomentSlope: number(
+  staticMomentSlope: bounded(
     "Static moment slope dC_M/dα, per radian, moment coefficient on ½ρU²B²; default K²A3* at the largest Ur",
+    -100,
+    100,
+    " per rad",
   ).optional(),
 }).superRefine((table, ctx) => {
   const ur = table.reducedVelocity;
@@ -118,9 +144,9 @@ const flatPlateSchema = object({ model: z.literal("flat-plate") });
 
 const quasiSteadySchema = object({
   model: z.literal("quasi-steady"),
-  liftSlope: number("Lift coefficient slope dC_L/dα, per radian, lift positive up, coefficient on ½ρU²B"),
-  dragCoefficient: number("Drag coefficient C_D on ½ρU²B, dimensionless").min(0, { error: "must be at least 0" }),
-  momentSlope: number("Moment coefficient slope dC_M/dα, per radian, nose-up, coefficient on ½ρU²B²"),
+  liftSlope: bounded("Lift coefficient slope dC_L/dα, per radian, lift positive up, coefficient on ½ρU²B", -100, 100, " per rad"),
+  dragCoefficient: bounded("Drag coefficient C_D on ½ρU²B, dimensionless", 0, 10, ""),
+  momentSlope: bounded("Moment coefficient slope dC_M/dα, per radian, nose-up, coefficient on ½ρU²B²", -100, 100, " per rad"),
 });
 
 export const studyAerodynamicsSchema = z.discriminatedUnion(
@@ -136,7 +162,7 @@ export const studyAerodynamicsSchema = z.discriminatedUnion(
 
 const sweepSchema = object({
   from: number("First mean wind speed at deck level, m/s").min(0, { error: "must be at least 0" }),
-  to: positive("Last mean wind speed at deck level, m/s"),
+  to: positive("Last mean wind speed at deck level, m/s").max(500, { error: "must be at most 500 m/s" }),
   step: positive("Wind-speed step, m/s"),
 }).superRefine((sweep, ctx) => {
   if (!(sweep.from < sweep.to)) {
@@ -167,10 +193,10 @@ export const studyDocumentSchema = object({
     .max(200, { error: "must have at most 200 characters" })
     .refine((name) => name.trim().length > 0, { error: "must not be blank" })
     .describe("Name of the study, e.g. the deck alternative and revision"),
-  air: object({ density: number("Air density, kg/m³ (0 = still-air check)").min(0, { error: "must be at least 0" }) }),
+  air: object({ density: bounded("Air density, kg/m³ (0 = still-air check)", 0, 5, " kg/m³") }),
   deck: object({
-    width: positive("Deck width B (the reference length of the derivatives), m"),
-    depth: positive("Deck depth, m"),
+    width: bounded("Deck width B (the reference length of the derivatives), m", 0.01, 1000, " m"),
+    depth: bounded("Deck depth, m", 0.001, 100, " m"),
   }),
   structure: structureSchema,
   aerodynamics: studyAerodynamicsSchema,

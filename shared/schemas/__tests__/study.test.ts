@@ -110,6 +110,40 @@ describe("stillspan.study/1 schema", () => {
     expect(issuesOf(mutate)).toContainEqual(expected);
   });
 
+  // Out-of-range magnitudes once left the solver iterating without end (mass 1e-300 kg/m, width 1e200 m,
+  // quasi-steady slopes of 1e300) or failing inside (inertia 1e308): each is now refused at its path.
+  it.each<[string, (doc: Doc) => void, StudyIssue]>([
+    ["a vanishing mass", (d) => (d.structure.mass = 1e-300),
+      { path: "$.structure.mass", message: "must be at least 0.001 kg/m" }],
+    ["an astronomic width", (d) => (d.deck.width = 1e200), { path: "$.deck.width", message: "must be at most 1000 m" }],
+    ["an astronomic inertia", (d) => (d.structure.inertia = 1e308),
+      { path: "$.structure.inertia", message: "must be at most 100000000000000 kg·m²/m" }],
+    ["an astronomic frequency", (d) => (d.structure.modes[1].frequency = 1e300),
+      { path: "$.structure.modes[1].frequency", message: "must be at most 1000 Hz" }],
+    ["the density of a solid", (d) => (d.air.density = 1e30), { path: "$.air.density", message: "must be at most 5 kg/m³" }],
+    ["a sweep to 1e9 m/s", (d) => (d.sweep = { from: 0, to: 1e9, step: 1e6 }),
+      { path: "$.sweep.to", message: "must be at most 500 m/s" }],
+    ["a quasi-steady slope of 1e300",
+      (d) => (d.aerodynamics = { model: "quasi-steady", liftSlope: 1e300, dragCoefficient: 1, momentSlope: 1 }),
+      { path: "$.aerodynamics.liftSlope", message: "must be at most 100 per rad" }],
+  ])("refuses %s with the path and the plausible range", (_name, mutate, expected) => {
+    expect(issuesOf(mutate)).toContainEqual(expected);
+  });
+
+  it("accepts a 1:100 section model and a heavy full-scale deck at the ends of the ranges", () => {
+    const model = fixture();
+    Object.assign(model.deck, { width: 0.01, depth: 0.001 });
+    Object.assign(model.structure, { mass: 0.001, inertia: 1e-9 });
+    model.structure.modes[0].frequency = 1000;
+    expect(parseStudy(model).ok).toBe(true);
+    const heavy = fixture();
+    Object.assign(heavy.deck, { width: 1000, depth: 100 });
+    Object.assign(heavy.structure, { mass: 1e8, inertia: 1e14 });
+    heavy.air.density = 5;
+    heavy.structure.modes[0].frequency = 0.001;
+    expect(parseStudy(heavy).ok).toBe(true);
+  });
+
   it("accepts exactly 20,000 steps", () => {
     expect(parseStudy({ ...fixture(), sweep: { from: 0, to: 100, step: 0.005 } }).ok).toBe(true);
   });
