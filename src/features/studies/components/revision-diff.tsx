@@ -2,7 +2,7 @@ import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { ApiError } from "@/lib/api-client";
 import { useRevisionDiff } from "@/features/studies/api/get-revision-diff";
-import { formatValue, readablePath } from "@/features/studies/utils/format-value";
+import { fieldLabel, formatValue } from "@/features/studies/utils/format-value";
 
 /** Field by field: what changed in the study document from one revision to another. */
 export function RevisionDiff({ fromId, toId }: { fromId: string | null; toId: string | null }) {
@@ -31,15 +31,15 @@ export function RevisionDiff({ fromId, toId }: { fromId: string | null; toId: st
             <thead>
               <tr className="border-y border-ink-200 bg-ink-50 text-xs tracking-wide text-ink-600 uppercase">
                 <th scope="col" className="px-4 py-1.5 font-semibold">Field</th>
-                <th scope="col" className="px-2 py-1.5 font-semibold">r{from.number}</th>
-                <th scope="col" className="px-2 py-1.5 font-semibold">r{to.number}</th>
+                <th scope="col" className="px-2 py-1.5 font-semibold normal-case">r{from.number}</th>
+                <th scope="col" className="px-2 py-1.5 font-semibold normal-case">r{to.number}</th>
               </tr>
             </thead>
             <tbody>
               {changes.map((change) => (
                 <tr key={change.path} className="border-b border-ink-100 align-top">
                   <th scope="row" className="px-4 py-1 font-normal">
-                    <span className="block text-ink-900">{readablePath(change.path)}</span>
+                    <span className="block text-ink-900">{fieldLabel(change.path)}</span>
                     <span className="font-mono text-xs text-ink-600">{change.path}</span>
                   </th>
                   <td className="num px-2 py-1 break-all text-ink-700">{change.kind === "added" ? "—" : formatValue(change.old)}</td>

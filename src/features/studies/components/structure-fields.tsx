@@ -42,8 +42,13 @@ export function StructureFields({ register, control, errors, readOnly }: Structu
         <thead>
           <tr className="text-xs tracking-wide text-ink-600 uppercase">
             <th scope="col" className="py-1 pr-2 font-semibold">Mode</th>
-            <th scope="col" className="py-1 pr-2 font-semibold">Frequency f</th>
-            <th scope="col" className="py-1 font-semibold">Damping ζ</th>
+            <th scope="col" className="py-1 pr-2 font-semibold">
+              Frequency <span className="normal-case">f</span>
+            </th>
+            <th scope="col" className="py-1 font-semibold">
+              {/* Upper case would turn ζ into Ζ, a letter an engineer reads as Z. */}
+              Damping <span className="normal-case">ζ</span>
+            </th>
           </tr>
         </thead>
         <tbody>
