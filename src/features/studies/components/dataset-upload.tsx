@@ -48,10 +48,12 @@ export function DatasetUpload({ alternativeId, projectId }: { alternativeId: str
       notes: String(data.get("notes") ?? ""),
     };
     const name = String(data.get("name") ?? "").trim() || file.name;
+    const angleText = String(data.get("meanAngleDeg") ?? "").trim();
+    const meanAngleDeg = angleText === "" ? 0 : Number(angleText);
     const meta: DatasetMetaInput =
       kind === "flutter-derivatives"
-        ? { kind, name, provenance, convention: { abscissa, normalisation, sign } }
-        : { kind, name, provenance, dragReference };
+        ? { kind, name, meanAngleDeg, provenance, convention: { abscissa, normalisation, sign } }
+        : { kind, name, meanAngleDeg, provenance, dragReference };
     upload.mutate({ file, meta }, { onSuccess: () => setOpen(false) });
   };
 
@@ -87,7 +89,7 @@ export function DatasetUpload({ alternativeId, projectId }: { alternativeId: str
         <SelectField label="Oncoming flow" value={flow} onChange={(v) => setFlow(v as typeof flow)}
           options={[["smooth", "Smooth"], ["turbulent", "Turbulent"]]} />
       </div>
-      <div className="grid gap-2 sm:grid-cols-[minmax(0,2fr)_8rem]">
+      <div className="grid gap-2 sm:grid-cols-[minmax(0,2fr)_8rem_8rem]">
         <div className="space-y-0.5">
           <label htmlFor={`${id}-facility`} className="block text-xs font-semibold text-ink-700">Facility</label>
           <input id={`${id}-facility`} name="facility" maxLength={1000} className={input} />
@@ -96,6 +98,13 @@ export function DatasetUpload({ alternativeId, projectId }: { alternativeId: str
           <label htmlFor={`${id}-scale`} className="block text-xs font-semibold text-ink-700">Model scale 1 :</label>
           <input id={`${id}-scale`} name="modelScale" type="number" min="1" step="any" className={input} />
         </div>
+        {kind === "flutter-derivatives" ? (
+          <div className="space-y-0.5">
+            {/* The flutter derivatives of a deck change with the mean angle of attack (0°, ±3°, ±5° are usual). */}
+            <label htmlFor={`${id}-angle`} className="block text-xs font-semibold text-ink-700">Mean angle α₀ (°, nose-up)</label>
+            <input id={`${id}-angle`} name="meanAngleDeg" type="number" min="-30" max="30" step="any" defaultValue="0" className={input} />
+          </div>
+        ) : null}
       </div>
       <div className="space-y-0.5">
         <label htmlFor={`${id}-notes`} className="block text-xs font-semibold text-ink-700">Notes</label>

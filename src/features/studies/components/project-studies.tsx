@@ -150,7 +150,7 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
               <li key={d.id} className="num flex flex-wrap gap-x-2">
                 <span className="font-semibold text-ink-900">{d.name}</span>
                 <span className="text-ink-700">
-                  {d.kind === "flutter-derivatives" ? `flutter derivatives, Ur ${d.testedRange.min}–${d.testedRange.max}` : `static coefficients, ${d.testedRange.min}° to ${d.testedRange.max}°`}
+                  {d.kind === "flutter-derivatives" ? `flutter derivatives at ${d.meanAngleDeg > 0 ? "+" : ""}${d.meanAngleDeg}°, Ur ${d.testedRange.min}–${d.testedRange.max}` : `static coefficients, ${d.testedRange.min}° to ${d.testedRange.max}°`}
                   {" · "}{d.provenance.flow} flow{d.provenance.facility ? ` · ${d.provenance.facility}` : ""}
                 </span>
                 {d.warnings.length > 0 ? <span className="text-caution-700">{d.warnings.length} warning{d.warnings.length > 1 ? "s" : ""}</span> : null}
