@@ -3,6 +3,14 @@ import { Button } from "@/components/ui/button";
 import { ApiError } from "@/lib/api-client";
 import { useCreateAlternative } from "@/features/studies/api/create-alternative";
 
+/** The form's own names for the API's fields, so a refusal names the field the analyst sees. */
+const FIELD_NAMES: Record<string, string> = {
+  name: "Name",
+  description: "Description",
+  deckWidthM: "Deck width B",
+  deckDepthM: "Deck depth D",
+};
+
 /** Adds a deck alternative to the project: its name, description and the deck's width and depth. */
 export function NewAlternativeForm({ projectId }: { projectId: string }) {
   const id = useId();
@@ -49,10 +57,20 @@ export function NewAlternativeForm({ projectId }: { projectId: string }) {
         <input id={`${id}-description`} name="description" maxLength={5000} className={input} />
       </div>
       {create.isError ? (
-        <p role="alert" className="font-semibold text-signal-700">
-          {create.error.message}
-          {details.length ? ` — ${details.map((d) => `${d.path ?? ""} ${d.message ?? ""}`.trim()).join("; ")}` : ""}
-        </p>
+        <div role="alert" className="font-semibold text-signal-700">
+          {details.length ? (
+            <>
+              <p>The alternative was not added:</p>
+              <ul className="list-disc pl-5">
+                {details.map((d, i) => (
+                  <li key={i}>{`${FIELD_NAMES[d.path ?? ""] ?? d.path ?? ""}: ${d.message ?? ""}`}</li>
+                ))}
+              </ul>
+            </>
+          ) : (
+            <p>{create.error.message}</p>
+          )}
+        </div>
       ) : null}
       <div className="flex gap-2">
         <Button type="submit" size="sm" isLoading={create.isPending}>Add alternative</Button>

@@ -37,7 +37,10 @@ export function NewStudyForm({ projectId, alternative, studies }: { projectId: s
     event.preventDefault();
     const data = new FormData(event.currentTarget);
     const name = String(data.get("name") ?? "").trim();
-    if (!name) return;
+    if (!name) {
+      setFailure("Study name: must not be blank.");
+      return;
+    }
     setFailure(null);
     let study: StudyDocument;
     try {
