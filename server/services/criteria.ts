@@ -7,6 +7,7 @@ import type {
   PutCriteriaBody,
 } from "../../shared/schemas/criteria.js";
 import type { Db } from "../db/client.js";
+import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
   findCurrentCriteria,
@@ -60,8 +61,6 @@ export async function getProjectCriteriaHistory(
   return rows.map((row) => ({ version: row.version, savedAt: row.createdAt.toISOString(), savedBy: savedBy(row), criteria: row.criteria }));
 }
 
-const UNIQUE_VIOLATION = "23505";
-
 /**
  * Saves a new version of the project's criteria (analysts and administrators), audited in the same
  * transaction. 409 when `baseVersion` is given and another version was saved since, or when a concurrent
@@ -105,8 +104,7 @@ export async function saveProjectCriteria(
       return toDto(projectId, await findCurrentCriteria(tx, projectId));
     });
   } catch (err) {
-    if ((err as { code?: string; cause?: { code?: string } }).code === UNIQUE_VIOLATION ||
-        (err as { cause?: { code?: string } }).cause?.code === UNIQUE_VIOLATION) {
+    if (isUniqueViolation(err)) {
       throw AppError.conflict("Another version of the criteria was saved at the same moment. Reload and apply your edit again.");
     }
     throw err;

@@ -11,6 +11,7 @@ import type {
 import { submitReviewSchema } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
 import type { Db, DbOrTx } from "../db/client.js";
+import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { findMembershipRole } from "../db/queries/projects.js";
 import {
@@ -31,15 +32,9 @@ import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
 import { assertRole } from "../middleware/auth.js";
 import { verificationCode } from "../signing/verification-code.js";
+import { person } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { notifyReturned, notifyReviewRequested } from "./review-mail.js";
-
-const UNIQUE_VIOLATION = "23505";
-
-export function isUniqueViolation(err: unknown): boolean {
-  const e = err as { code?: string; cause?: { code?: string } };
-  return e?.code === UNIQUE_VIOLATION || e?.cause?.code === UNIQUE_VIOLATION;
-}
 
 /** Parses a revision id from the URL; anything but a positive integer is a revision that does not exist. */
 export function parseRevisionId(raw: unknown): number {
@@ -71,8 +66,6 @@ export async function assertReviewer(db: DbOrTx, user: SessionUser, revision: Re
     throw AppError.forbidden(`You are the author of revision ${revision.number}: nobody may ${what} their own revision.`);
   }
 }
-
-const person = (id: number | null, name: string | null) => (id === null ? null : { id: String(id), name: name ?? "" });
 
 /**
  * GET /api/revisions/:id/review — state, request, comments, history and signature (analysts and reviewers).

@@ -9,6 +9,7 @@ import type {
 } from "../../shared/schemas/revisions.js";
 import { parseStudy, type StudyDocument } from "../../shared/schemas/study.js";
 import type { DbOrTx } from "../db/client.js";
+import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
   findLatestRevision,
@@ -153,11 +154,6 @@ function staleParent(
     { details },
   );
 }
-
-const isUniqueViolation = (err: unknown) => {
-  const e = err as { code?: string; cause?: { code?: string } };
-  return e.code === "23505" || e.cause?.code === "23505";
-};
 
 /** Inside the caller's transaction: lock the study, check the parent, insert the next number. */
 export async function appendRevision(

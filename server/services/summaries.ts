@@ -8,6 +8,7 @@ import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review
 import type { AppContext } from "../app-context.js";
 import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
+import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
 import { findAlternative } from "../db/queries/alternatives.js";
@@ -22,7 +23,7 @@ import { canonicalSha256Hex } from "../lib/hash.js";
 import { renderSummaryPdf } from "../pdf/summary-pdf.js";
 import { verificationCode } from "../signing/verification-code.js";
 import type { SessionUser } from "./auth.js";
-import { assertReviewer, isUniqueViolation, revisionFor } from "./review.js";
+import { assertReviewer, revisionFor } from "./review.js";
 import { notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
