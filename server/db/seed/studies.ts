@@ -18,38 +18,50 @@ async function tabulatedFrom(ctx: SeedContext, key: string): Promise<StudyDocume
   };
 }
 
-/** INVENTED structural properties of the demo decks (plausible for a ~1.2 km main span; not a real bridge). */
-function singleBoxStudy(aerodynamics: StudyDocument["aerodynamics"]): StudyDocument {
-  return {
-    format: "stillspan.study/1",
-    name: "Alternative B — single box with screens, service state (invented demo)",
-    air: { density: 1.225 },
-    deck: { width: 29.6, depth: 3.1 },
-    structure: {
-      mass: 16900,
-      inertia: 1.62e6,
-      modes: [
-        { id: "VS1", dof: "heave", frequency: 0.104, damping: 0.004 },
-        { id: "TS1", dof: "torsion", frequency: 0.286, damping: 0.004 },
-      ],
-    },
-    aerodynamics,
-    sweep: { from: 1, to: 120, step: 0.5 },
-  };
+/** INVENTED structural properties of a demo deck (plausible for a ~1.2 km main span; not a real bridge). */
+interface InventedDeck {
+  name: string;
+  widthM: number;
+  depthM: number;
+  massPerLengthKgM: number;
+  inertiaKgM2M: number;
+  heaveHz: number;
+  torsionHz: number;
 }
 
-function twinBoxStudy(aerodynamics: StudyDocument["aerodynamics"]): StudyDocument {
+const SINGLE_BOX: InventedDeck = {
+  name: "Alternative B — single box with screens, service state (invented demo)",
+  widthM: 29.6,
+  depthM: 3.1,
+  massPerLengthKgM: 16900,
+  inertiaKgM2M: 1.62e6,
+  heaveHz: 0.104,
+  torsionHz: 0.286,
+};
+
+const TWIN_BOX: InventedDeck = {
+  name: "Alternative A — twin box, service state (invented demo)",
+  widthM: 37.4,
+  depthM: 3.5,
+  massPerLengthKgM: 20300,
+  inertiaKgM2M: 3.05e6,
+  heaveHz: 0.095,
+  torsionHz: 0.248,
+};
+
+/** A demo study document: the deck's two modes (0.4 % damping), the given aerodynamics, 1–120 m/s. */
+function deckStudy(deck: InventedDeck, aerodynamics: StudyDocument["aerodynamics"]): StudyDocument {
   return {
     format: "stillspan.study/1",
-    name: "Alternative A — twin box, service state (invented demo)",
+    name: deck.name,
     air: { density: 1.225 },
-    deck: { width: 37.4, depth: 3.5 },
+    deck: { width: deck.widthM, depth: deck.depthM },
     structure: {
-      mass: 20300,
-      inertia: 3.05e6,
+      mass: deck.massPerLengthKgM,
+      inertia: deck.inertiaKgM2M,
       modes: [
-        { id: "VS1", dof: "heave", frequency: 0.095, damping: 0.004 },
-        { id: "TS1", dof: "torsion", frequency: 0.248, damping: 0.004 },
+        { id: "VS1", dof: "heave", frequency: deck.heaveHz, damping: 0.004 },
+        { id: "TS1", dof: "torsion", frequency: deck.torsionHz, damping: 0.004 },
       ],
     },
     aerodynamics,
@@ -67,7 +79,7 @@ export const demoStudies: SeedStep = {
   name: "demo studies and revisions",
   async run(ctx) {
     const analyst = await seedUser(ctx, "user:analyst");
-    const single = singleBoxStudy(await tabulatedFrom(ctx, "dataset:single"));
+    const single = deckStudy(SINGLE_BOX, await tabulatedFrom(ctx, "dataset:single"));
     const studyB = await createStudy(ctx.tx, analyst, ref(ctx, "alternative:single"), {
       name: "Flutter and divergence — alternative B",
       purpose: "INVENTED DEMO. Does the single box with wind screens stay stable well above the required speeds?",
@@ -94,7 +106,7 @@ export const demoStudies: SeedStep = {
     const studyA = await createStudy(ctx.tx, analyst, ref(ctx, "alternative:twin"), {
       name: "Flutter and divergence — alternative A",
       purpose: "INVENTED DEMO. The twin box: reference for the comparison with alternative B.",
-      study: twinBoxStudy(await tabulatedFrom(ctx, "dataset:twin")),
+      study: deckStudy(TWIN_BOX, await tabulatedFrom(ctx, "dataset:twin")),
     });
     ctx.refs.set("study:twin", Number(studyA.id));
   },

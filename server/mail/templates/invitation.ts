@@ -1,7 +1,15 @@
-import { formatUtc, greet, renderMail, type RenderedMail } from "./layout.js";
+import { formatUtc, greet, renderMail, type MailBlock, type RenderedMail } from "./layout.js";
 
 /** How long one-time links (invitation, password reset) stay valid. */
 export const ONE_TIME_LINK_TTL_HOURS = 72;
+
+/** The closing paragraph of a one-time-link message: single use, expiry, and what ignoring it means. */
+export function oneTimeLinkNote(expiresAt: Date, ifIgnored: string): MailBlock {
+  return {
+    kind: "paragraph",
+    text: `The link works once and expires on ${formatUtc(expiresAt)} (${ONE_TIME_LINK_TTL_HOURS} hours after it was sent). ${ifIgnored}`,
+  };
+}
 
 export interface InvitationMail {
   recipientName?: string | null;
@@ -27,11 +35,6 @@ export function invitationMail(m: InvitationMail): RenderedMail {
     },
     { kind: "paragraph", text: "Choose your password with the link below to activate your account." },
     { kind: "action", label: "Set your password", href: m.link },
-    {
-      kind: "paragraph",
-      text:
-        `The link works once and expires on ${formatUtc(m.expiresAt)} (${ONE_TIME_LINK_TTL_HOURS} hours after it ` +
-        "was sent). If you did not expect this invitation, ignore this message: nothing happens without the link.",
-    },
+    oneTimeLinkNote(m.expiresAt, "If you did not expect this invitation, ignore this message: nothing happens without the link."),
   ]);
 }

@@ -1,5 +1,5 @@
-import { ONE_TIME_LINK_TTL_HOURS } from "./invitation.js";
-import { formatUtc, greet, renderMail, type RenderedMail } from "./layout.js";
+import { oneTimeLinkNote } from "./invitation.js";
+import { greet, renderMail, type RenderedMail } from "./layout.js";
 
 export interface PasswordResetMail {
   recipientName?: string | null;
@@ -12,11 +12,6 @@ export function passwordResetMail(m: PasswordResetMail): RenderedMail {
   return renderMail("Choose a new Stillspan password", greet(m.recipientName), [
     { kind: "paragraph", text: "Someone asked to reset the password of your Stillspan account." },
     { kind: "action", label: "Choose a new password", href: m.link },
-    {
-      kind: "paragraph",
-      text:
-        `The link works once and expires on ${formatUtc(m.expiresAt)} (${ONE_TIME_LINK_TTL_HOURS} hours after it ` +
-        "was sent). If you did not ask for this, ignore this message: your password stays as it is.",
-    },
+    oneTimeLinkNote(m.expiresAt, "If you did not ask for this, ignore this message: your password stays as it is."),
   ]);
 }
