@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { benchmarkDeck as benchmarkDeckInputs } from "../../shared/engine/__tests__/support/benchmark-deck.js";
 import { sweepResultSchema } from "../../shared/schemas/result.js";
 import { createProjectWithMembers, openTestDb } from "../support/db.js";
 import { testEnv } from "../support/env.js";
@@ -9,22 +10,7 @@ const db = openTestDb();
 let cookies: Record<"admin" | "analyst" | "reviewer" | "viewer", string>;
 
 /** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (domain guide §5), flat plate, coarse sweep. */
-const benchmarkDeck = () => ({
-  format: "stillspan.study/1",
-  name: "Benchmark deck, domain guide §5",
-  air: { density: 1.22 },
-  deck: { width: 31, depth: 3 },
-  structure: {
-    mass: 22740,
-    inertia: 2.47e6,
-    modes: [
-      { id: "V1", dof: "heave", frequency: 0.1, damping: 0.003 },
-      { id: "T1", dof: "torsion", frequency: 0.278, damping: 0.003 },
-    ],
-  },
-  aerodynamics: { model: "flat-plate" },
-  sweep: { from: 10, to: 100, step: 1 },
-});
+const benchmarkDeck = () => benchmarkDeckInputs({ from: 10, to: 100, step: 1 });
 
 beforeAll(async () => {
   await createProjectWithMembers(db, `Sweep test crossing ${Date.now().toString(36)}`, {

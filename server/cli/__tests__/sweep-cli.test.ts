@@ -4,6 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { sweepResultSchema } from "../../../shared/schemas/result";
+import { benchmarkDeck } from "../../../shared/engine/__tests__/support/benchmark-deck";
 
 const root = path.resolve(__dirname, "../../..");
 const dir = mkdtempSync(path.join(tmpdir(), "stillspan-sweep-cli-"));
@@ -16,23 +17,8 @@ function cli(...args: string[]) {
   return { code: run.status, stdout: run.stdout, stderr: run.stderr };
 }
 
-/** Benchmark deck inputs of the domain guide §5 (IABSE TG 3.1), flat plate. */
-const study = {
-  format: "stillspan.study/1",
-  name: "Benchmark deck",
-  air: { density: 1.22 },
-  deck: { width: 31, depth: 3 },
-  structure: {
-    mass: 22740,
-    inertia: 2.47e6,
-    modes: [
-      { id: "V1", dof: "heave", frequency: 0.1, damping: 0.003 },
-      { id: "T1", dof: "torsion", frequency: 0.278, damping: 0.003 },
-    ],
-  },
-  aerodynamics: { model: "flat-plate" },
-  sweep: { from: 1, to: 150, step: 0.5 },
-};
+/** Benchmark deck inputs of the domain guide §5 (IABSE TG 3.1), flat plate, 1–150 m/s at 0.5 m/s. */
+const study = benchmarkDeck();
 
 describe("npm run sweep (server/cli/sweep.ts)", () => {
   it("prints the result JSON of a valid study, with --from/--to/--step overriding the sweep", () => {
