@@ -1,23 +1,16 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, type BrowserSession } from "../support/browser";
+import { collectPageProblems, fillSignInForm, launchBrowser, type BrowserSession } from "../support/browser";
 
-const DEMO_PASSWORD = "stillspan-demo";
 const PROJECT_NAME = `Corrow Sound Footbridge ${Date.now().toString(36)} (invented)`;
 
 describe("administration in the browser", () => {
   let browser: BrowserSession;
   /** Uncaught exceptions and console errors or warnings, except the browser's own note on a refused resource. */
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
     browser = await launchBrowser({ viewport: { width: 1280, height: 900 } });
-    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
-    browser.page.on("console", (message) => {
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[14]/;
-      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
-        problems.push(`${message.type()}: ${message.text()}`);
-      }
-    });
+    problems = collectPageProblems(browser.page);
   });
 
   afterAll(async () => {
@@ -28,10 +21,7 @@ describe("administration in the browser", () => {
     const { page } = browser;
     await page.goto(browser.url("/projects"));
     await page.waitForURL((url) => url.pathname === "/sign-in");
-    await page.getByLabel("E-mail").fill("admin@stillspan.test");
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL((url) => url.pathname === "/projects");
+    await fillSignInForm(page, "admin@stillspan.test", "/projects");
 
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Admin" }).click();
 

@@ -3,28 +3,21 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { SUMMARY_CAUTIONS } from "../../shared/schemas/summary.js";
 import { pdfText } from "../../server/pdf/__tests__/pdf-text.js";
-import { artifactsDir, baseUrl, launchBrowser, type BrowserSession } from "../support/browser";
+import { artifactsDir, baseUrl, collectPageProblems, fillSignInForm, launchBrowser, signOutInPage, type BrowserSession } from "../support/browser";
 import { api, signIn as apiSignIn } from "../support/http.js";
 import { waitForMail } from "../support/review.js";
 
-const DEMO_PASSWORD = "stillspan-demo";
 const DEMO_STUDY = "Flutter and divergence — alternative B";
 
 describe("review and signed summary in the browser", () => {
   let browser: BrowserSession;
-  const problems: string[] = [];
+  let problems: string[] = [];
   let signedRevision = 0;
   let summaryPath = "";
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
-    browser.page.on("console", (message) => {
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[14]/;
-      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
-        problems.push(`${message.type()}: ${message.text()}`);
-      }
-    });
+    problems = collectPageProblems(browser.page);
   });
   afterAll(async () => {
     await browser?.close();
@@ -35,16 +28,10 @@ describe("review and signed summary in the browser", () => {
     const { page } = browser;
     await page.goto(browser.url(landing));
     await page.waitForURL((url) => url.pathname === "/sign-in");
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL((url) => url.pathname === landing);
+    await fillSignInForm(page, email, landing);
   }
 
-  async function signOut() {
-    await browser.page.getByRole("button", { name: "Sign out" }).click();
-    await browser.page.waitForURL((url) => url.pathname === "/sign-in");
-  }
+  const signOut = () => signOutInPage(browser.page);
 
   it("the reviewer finds the demo study's latest revision in the review queue and signs it with a statement", async () => {
     const { page } = browser;
@@ -139,6 +126,7 @@ describe("review and signed summary in the browser", () => {
     await page.goto(`${page.url()}?revision=1`);
     const panel = page.getByRole("region", { name: "Review of revision 1" });
     await panel.getByText("Not submitted for review").waitFor();
+    await panel.getByLabel("Reviewer").locator("option", { hasText: "Mira Holloway" }).waitFor({ state: "attached" });
     expect(await panel.getByLabel("Reviewer").locator("option:checked").textContent()).toBe("Mira Holloway");
     await panel.getByLabel("Note to the reviewer (optional)").fill("The first sweep, for the record.");
     await panel.getByRole("button", { name: "Submit for review" }).click();
@@ -154,20 +142,14 @@ describe("review and signed summary in the browser", () => {
 
 describe("one-time links in the browser: accepting an invitation, resetting a password", () => {
   let browser: BrowserSession;
-  const problems: string[] = [];
+  let problems: string[] = [];
   const suffix = Date.now().toString(36);
   const email = `invited-${suffix}@stillspan.test`;
   let admin: string;
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
-    browser.page.on("console", (message) => {
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 4(01|04|10)/;
-      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
-        problems.push(`${message.type()}: ${message.text()}`);
-      }
-    });
+    problems = collectPageProblems(browser.page, [401, 404, 410]);
     admin = await apiSignIn(baseUrl(), "admin@stillspan.test");
   });
   afterAll(async () => {

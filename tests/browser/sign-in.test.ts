@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, type BrowserSession } from "../support/browser";
+import { collectPageProblems, launchBrowser, type BrowserSession } from "../support/browser";
 
 const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
 const DEMO_PASSWORD = "stillspan-demo";
@@ -7,17 +7,11 @@ const DEMO_PASSWORD = "stillspan-demo";
 describe("signing in and out in the browser", () => {
   let browser: BrowserSession;
   /** Uncaught exceptions and console errors or warnings, except the browser's own note on a 401/404 resource. */
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
-    browser.page.on("console", (message) => {
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[14]/;
-      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
-        problems.push(`${message.type()}: ${message.text()}`);
-      }
-    });
+    problems = collectPageProblems(browser.page);
   });
 
   afterAll(async () => {

@@ -9,46 +9,29 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runSweep } from "../../shared/engine/run-sweep";
 import type { RevisionDto } from "../../shared/schemas/revisions";
 import { parseStudy, type StudyDocument } from "../../shared/schemas/study";
-import { launchBrowser, type BrowserSession } from "../support/browser";
+import { collectPageProblems, fillSignInForm, launchBrowser, signOutInPage, type BrowserSession } from "../support/browser";
 
 const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
-const DEMO_PASSWORD = "stillspan-demo";
 
 describe("the analyst's study workspace", () => {
   let browser: BrowserSession;
   let studyPath = "";
   let startRevision: RevisionDto;
   let savedNumber = 0;
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    browser.page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
-    browser.page.on("console", (message) => {
-      // 401 (session probe), 404, and the 400 / 409 / 403 answers this file provokes on purpose.
-      const expectedRefusal = /Failed to load resource: the server responded with a status of 40[01349]/;
-      if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
-        problems.push(`${message.type()}: ${message.text()}`);
-      }
-    });
+    // 401 (session probe), 404, and the 400 / 409 / 403 answers this file provokes on purpose.
+    problems = collectPageProblems(browser.page, [400, 401, 403, 404, 409]);
     const { page } = browser;
     await page.goto(browser.url("/projects"));
     await signIn("analyst@stillspan.test", "/projects");
   });
 
   /** Fills the sign-in form the browser is on and waits for the landing page. */
-  async function signIn(email: string, landing: string) {
-    const { page } = browser;
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL((url) => url.pathname === landing);
-  }
-
-  async function signOut() {
-    await browser.page.getByRole("button", { name: "Sign out" }).click();
-    await browser.page.waitForURL((url) => url.pathname === "/sign-in");
-  }
+  const signIn = (email: string, landing: string) => fillSignInForm(browser.page, email, landing);
+  const signOut = () => signOutInPage(browser.page);
 
   /** POSTs JSON from the page (with its session cookie); returns the status and body. */
   function post(url: string, body: unknown) {

@@ -7,6 +7,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { DEMO_PASSWORD } from "./http";
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 
@@ -74,4 +75,35 @@ export async function launchBrowser(options: { viewport?: { width: number; heigh
       rmSync(profileDir, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * Collects what a clean visit never shows: uncaught exceptions, and console errors or warnings other than the
+ * browser's own "Failed to load resource" note for `expectedStatuses` (the session probe's 401, and answers a
+ * test provokes on purpose). Returns the list it fills, for a final `expect(problems).toEqual([])`.
+ */
+export function collectPageProblems(page: Page, expectedStatuses: readonly number[] = [401, 404]): string[] {
+  const problems: string[] = [];
+  const expectedRefusal = new RegExp(`Failed to load resource: the server responded with a status of (${expectedStatuses.join("|")})\\b`);
+  page.on("pageerror", (error) => problems.push(`uncaught: ${error.message}`));
+  page.on("console", (message) => {
+    if ((message.type() === "error" || message.type() === "warning") && !expectedRefusal.test(message.text())) {
+      problems.push(`${message.type()}: ${message.text()}`);
+    }
+  });
+  return problems;
+}
+
+/** Fills the sign-in form the page is on and waits for the page it lands on. */
+export async function fillSignInForm(page: Page, email: string, landing: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => url.pathname === landing);
+}
+
+/** Signs out with the header's button and waits for the sign-in page. */
+export async function signOutInPage(page: Page): Promise<void> {
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.waitForURL((url) => url.pathname === "/sign-in");
 }

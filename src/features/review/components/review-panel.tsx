@@ -51,7 +51,9 @@ function SubmitForm({ review, projectId }: { review: RevisionReviewDto; projectI
           onChange={(e) => setReviewerId(e.target.value)}
           disabled={options.length === 0}
         >
-          {options.length === 0 ? <option value="">No reviewer on this project</option> : null}
+          {options.length === 0 ? (
+            <option value="">{reviewers.isPending ? "Loading the project's reviewers…" : "No reviewer on this project"}</option>
+          ) : null}
           {options.map((r) => (
             <option key={r.userId} value={r.userId}>
               {r.name}
