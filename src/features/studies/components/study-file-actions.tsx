@@ -7,6 +7,7 @@ import { apiPaths, paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useImportRevision } from "@/features/studies/api/import-revision";
 import { useRerunRevision } from "@/features/studies/api/rerun-revision";
+import { fieldLabel } from "@/features/studies/utils/format-value";
 
 interface StudyFileActionsProps {
   projectId: string;
@@ -38,6 +39,13 @@ export function StudyFileActions({ projectId, studyId, revision, canEdit }: Stud
   };
 
   const error = importRevision.error ?? rerun.error;
+  // The server lists each bad value of a study file with its JSON path; show each once, by the field's name.
+  const studyIssues =
+    error instanceof ApiError && Array.isArray(error.details)
+      ? (error.details as Array<{ path?: unknown; message?: unknown }>).flatMap((d) =>
+          typeof d?.path === "string" && d.path.startsWith("$") ? [{ path: d.path, message: String(d.message ?? "") }] : [],
+        )
+      : [];
   return (
     <div className="space-y-2 text-sm">
       <div className="flex flex-wrap items-center gap-2">
@@ -66,12 +74,26 @@ export function StudyFileActions({ projectId, studyId, revision, canEdit }: Stud
         </p>
       ) : null}
       {error ? (
-        <p role="alert" className="font-semibold text-signal-700">
-          {error.message}
-          {error instanceof ApiError && Array.isArray(error.details)
-            ? ` — ${(error.details as Array<{ path?: string; message?: string }>).slice(0, 5).map((d) => `${d.path ?? ""} ${d.message ?? ""}`.trim()).join("; ")}`
-            : ""}
-        </p>
+        <div role="alert" className="font-semibold text-signal-700">
+          {studyIssues.length > 0 ? (
+            <>
+              <p>
+                {importRevision.error ? "The study file was not imported" : "The revision was not re-run"} ({studyIssues.length}{" "}
+                problem{studyIssues.length === 1 ? "" : "s"}); nothing was stored.
+              </p>
+              <ul className="list-disc pl-5 font-normal text-ink-900">
+                {studyIssues.slice(0, 10).map((d, i) => (
+                  <li key={i}>
+                    {fieldLabel(d.path)}: {d.message} <code className="text-xs text-ink-600">{d.path}</code>
+                  </li>
+                ))}
+                {studyIssues.length > 10 ? <li>… and {studyIssues.length - 10} more</li> : null}
+              </ul>
+            </>
+          ) : (
+            <p>{error.message}</p>
+          )}
+        </div>
       ) : null}
     </div>
   );
