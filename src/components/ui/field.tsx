@@ -23,7 +23,9 @@ export function Field({ label, unit, hint, error, className, containerClassName,
   const describedBy = [hintId, errorId].filter(Boolean).join(" ") || undefined;
 
   return (
-    <div className={cn("space-y-1", containerClassName)}>
+    // min-w-0: in a grid or flex row an input's intrinsic width (about 20 characters) would otherwise hold the
+    // column open and push the form past a phone's screen.
+    <div className={cn("min-w-0 space-y-1", containerClassName)}>
       <label htmlFor={id} className="block text-sm font-semibold text-ink-800">
         {label}
       </label>
@@ -34,7 +36,7 @@ export function Field({ label, unit, hint, error, className, containerClassName,
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy}
           className={cn(
-            "block h-9 w-full rounded-md border bg-white px-2.5 text-[0.95rem] text-ink-950 placeholder:text-ink-400",
+            "block h-9 w-full min-w-0 rounded-md border bg-white px-2.5 text-[0.95rem] text-ink-950 placeholder:text-ink-400",
             "transition-colors focus-visible:border-tide-600",
             error ? "border-signal-600" : "border-ink-300 hover:border-ink-400",
             unit ? "pr-14" : undefined,

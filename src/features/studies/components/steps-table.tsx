@@ -30,40 +30,43 @@ export function StepsTable({ result, fileName }: { result: SweepResult; fileName
           Download CSV
         </Button>
       </div>
-      <div role="table" aria-label="Sweep steps" aria-rowcount={rows.length + 1} className="text-sm">
-        <div role="rowgroup">
-          <div role="row" className={cn("grid border-y border-ink-200 bg-ink-50 px-4 text-xs font-semibold text-ink-700", COLUMNS)}>
-            {["Branch", "U (m/s)", "f (Hz)", "ζ (%)", "Re λ (1/s)", "Im λ (1/s)", "Participation", "MAC"].map((h) => (
-              <span key={h} role="columnheader" className="py-1 pr-2 text-right first:text-left">{h}</span>
-            ))}
+      {/* On a narrow screen the columns scroll sideways together instead of widening the page. */}
+      <div className="overflow-x-auto">
+        <div role="table" aria-label="Sweep steps" aria-rowcount={rows.length + 1} className="min-w-[46rem] text-sm">
+          <div role="rowgroup">
+            <div role="row" className={cn("grid border-y border-ink-200 bg-ink-50 px-4 text-xs font-semibold text-ink-700", COLUMNS)}>
+              {["Branch", "U (m/s)", "f (Hz)", "ζ (%)", "Re λ (1/s)", "Im λ (1/s)", "Participation", "MAC"].map((h) => (
+                <span key={h} role="columnheader" className="py-1 pr-2 text-right first:text-left">{h}</span>
+              ))}
+            </div>
           </div>
-        </div>
-        <div ref={scrollRef} className="h-72 overflow-auto" tabIndex={0} aria-label="Scroll the sweep steps">
-          <div role="rowgroup" style={{ height: virtualizer.getTotalSize(), position: "relative" }}>
-            {virtualizer.getVirtualItems().map((item) => {
-              const row = rows[item.index];
-              const unstable = row.damping < 0;
-              return (
-                <div
-                  key={item.key}
-                  role="row"
-                  aria-rowindex={item.index + 2}
-                  className={cn("num absolute inset-x-0 grid border-b border-ink-100 px-4", COLUMNS, unstable && "bg-signal-50 text-signal-700")}
-                  style={{ height: ROW_HEIGHT, transform: `translateY(${item.start}px)` }}
-                >
-                  <span role="cell" className="py-0.5 font-mono text-xs leading-5">{row.mode}</span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{row.speed.toFixed(2)}</span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{row.frequency.toFixed(4)}</span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{(row.damping * 100).toFixed(3)}</span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{row.re.toFixed(4)}</span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{row.im.toFixed(4)}</span>
-                  <span role="cell" className="truncate py-0.5 pr-2 text-right text-ink-700">
-                    {Object.entries(row.participation).map(([id, share]) => `${id} ${(share * 100).toFixed(0)}%`).join(" · ")}
-                  </span>
-                  <span role="cell" className="py-0.5 pr-2 text-right">{row.mac.toFixed(3)}</span>
-                </div>
-              );
-            })}
+          <div ref={scrollRef} className="h-72 overflow-auto" tabIndex={0} aria-label="Scroll the sweep steps">
+            <div role="rowgroup" style={{ height: virtualizer.getTotalSize(), position: "relative" }}>
+              {virtualizer.getVirtualItems().map((item) => {
+                const row = rows[item.index];
+                const unstable = row.damping < 0;
+                return (
+                  <div
+                    key={item.key}
+                    role="row"
+                    aria-rowindex={item.index + 2}
+                    className={cn("num absolute inset-x-0 grid border-b border-ink-100 px-4", COLUMNS, unstable && "bg-signal-50 text-signal-700")}
+                    style={{ height: ROW_HEIGHT, transform: `translateY(${item.start}px)` }}
+                  >
+                    <span role="cell" className="py-0.5 font-mono text-xs leading-5">{row.mode}</span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{row.speed.toFixed(2)}</span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{row.frequency.toFixed(4)}</span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{(row.damping * 100).toFixed(3)}</span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{row.re.toFixed(4)}</span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{row.im.toFixed(4)}</span>
+                    <span role="cell" className="truncate py-0.5 pr-2 text-right text-ink-700">
+                      {Object.entries(row.participation).map(([id, share]) => `${id} ${(share * 100).toFixed(0)}%`).join(" · ")}
+                    </span>
+                    <span role="cell" className="py-0.5 pr-2 text-right">{row.mac.toFixed(3)}</span>
+                  </div>
+                );
+              })}
+            </div>
           </div>
         </div>
       </div>

@@ -139,7 +139,7 @@ export function StudyEditor(props: StudyEditorProps) {
         </div>
       ) : null}
 
-      <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,11fr)_minmax(0,12fr)]">
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 lg:grid-cols-[minmax(0,11fr)_minmax(0,12fr)]">
         <form
           aria-label="Study inputs"
           className="space-y-4"
