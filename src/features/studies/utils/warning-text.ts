@@ -3,13 +3,13 @@ import type { SweepWarning, SweepWarningCode } from "@shared/schemas/result";
 /** One plain sentence per engine warning code: what it means for the number on the screen. */
 const EXPLANATIONS: Record<SweepWarningCode, string> = {
   "extrapolated-derivatives":
-    "Here the reduced velocity left the tested range, so the derivatives were held at the table's end values and the curves are guesswork.",
+    "Here the reduced velocity lies outside the tested range: the derivatives were held at the table's end values, so results at these speeds are extrapolated and unreliable.",
   "quasi-steady-flutter":
     "Quasi-steady aerodynamics give no torsional aerodynamic damping, so this flutter speed is likely far too low; use measured derivatives.",
   "unstable-at-start":
     "A pole is already undamped at the first speed, so the true critical speed lies at or below the start of the sweep; start lower.",
   "static-instability":
-    "A real pole crosses zero: the deck twists off statically (divergence-type) within the sweep.",
+    "A real pole crosses zero: the deck loses its static stiffness (divergence-type instability) within the sweep, and above that speed it is statically unstable.",
   "tracking-ambiguous":
     "Two poles came so close that the tracker could not tell them apart even at its smallest step; check the branches near these speeds.",
   "no-convergence":
