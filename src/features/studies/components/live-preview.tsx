@@ -13,7 +13,8 @@ export function LivePreview({ state, blockedReason }: { state: PreviewState; blo
   const figure = useMemo(() => {
     if (!result) return null;
     const f = dampingFigure([{ name: "Preview", result }]);
-    return { ...f, layout: { ...f.layout, margin: { l: 44, r: 8, t: 6, b: 34 }, showlegend: false }, showModeBar: false };
+    // The legend names the branches (which curve is heave, which torsion); it sits above the plot area.
+    return { ...f, layout: { ...f.layout, margin: { l: 44, r: 8, t: 24, b: 34 }, showlegend: true }, showModeBar: false };
   }, [result]);
 
   let line: React.ReactNode;
@@ -38,9 +39,9 @@ export function LivePreview({ state, blockedReason }: { state: PreviewState; blo
     <div className="space-y-1">
       <p className="min-h-6 text-sm" aria-live="polite">{line}</p>
       {figure ? (
-        <Plot {...figure} height={170} label="Preview of the damping ratio against wind speed" />
+        <Plot {...figure} height={190} label="Preview of the damping ratio against wind speed" />
       ) : (
-        <div className="h-[170px] rounded-md bg-ink-50" aria-hidden="true" />
+        <div className="h-[190px] rounded-md bg-ink-50" aria-hidden="true" />
       )}
     </div>
   );

@@ -35,7 +35,7 @@ export function StepsTable({ result, fileName }: { result: SweepResult; fileName
         <div role="table" aria-label="Sweep steps" aria-rowcount={rows.length + 1} className="min-w-[46rem] text-sm">
           <div role="rowgroup">
             <div role="row" className={cn("grid border-y border-ink-200 bg-ink-50 px-4 text-xs font-semibold text-ink-700", COLUMNS)}>
-              {["Branch", "U (m/s)", "f (Hz)", "ζ (%)", "Re λ (1/s)", "Im λ (1/s)", "Participation", "MAC"].map((h) => (
+              {["Branch", "U (m/s)", "f (Hz)", "ζ (%)", "Re λ (rad/s)", "Im λ (rad/s)", "Participation", "MAC"].map((h) => (
                 <span key={h} role="columnheader" className="py-1 pr-2 text-right first:text-left">{h}</span>
               ))}
             </div>

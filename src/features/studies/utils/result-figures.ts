@@ -133,7 +133,7 @@ function flutterAnnotations(runs: readonly PlotRun[]): Record<string, unknown>[]
 /** A quantity of every branch against wind speed, with each flutter speed marked. */
 function versusSpeed(
   runs: readonly PlotRun[],
-  pick: (s: SweepResult["modes"][number]["steps"][number]) => number,
+  pick: (s: SweepResult["modes"][number]["steps"][number]) => number | null,
   yTitle: string,
   hover: string,
   extraShapes: Record<string, unknown>[] = [],
@@ -177,13 +177,17 @@ export function dampingFigure(runs: readonly PlotRun[]): PlotFigure {
   let lo = 0;
   let hi = 0;
   for (const { result } of runs) for (const m of result.modes) for (const s of m.steps) {
+    if (s.frequency === 0) continue;
     lo = Math.min(lo, s.damping * 100);
     hi = Math.max(hi, s.damping * 100);
   }
   const top = Math.min(hi, 12);
   const bottom = Math.max(lo, -6);
   const pad = (top - bottom) * 0.06 || 1;
-  const figure = versusSpeed(runs, (s) => s.damping * 100, "Damping ratio ζ (%)", "ζ %{y:.2f} %", [
+  // A branch that has turned into a real (non-oscillating) pole has ζ = ±1 by definition; drawn, it is a vertical
+  // wall from +100 % to −100 % that reads as a jump in damping. Leave a gap there: the frequency plot shows f = 0.
+  const oscillating = (s: SweepResult["modes"][number]["steps"][number]) => (s.frequency === 0 ? null : s.damping * 100);
+  const figure = versusSpeed(runs, oscillating, "Damping ratio ζ (%)", "ζ %{y:.2f} %", [
     { type: "line", xref: "paper", yref: "y", x0: 0, x1: 1, y0: 0, y1: 0, line: { color: token("--color-ink-900"), width: 1.6 } },
   ]);
   (figure.layout.yaxis as Record<string, unknown>).range = [bottom - pad, top + pad];

@@ -50,6 +50,21 @@ describe("result figures", () => {
   });
 });
 
+describe("damping plot of a branch that turns into a real pole", () => {
+  it("leaves a gap where the pole does not oscillate instead of a wall from +100 % to -100 %", () => {
+    const step = (speed: number, frequency: number, damping: number) =>
+      ({ speed, frequency, damping, re: 0, im: 0, participation: { h: 1 }, mac: 1, confidence: 1 });
+    const real = {
+      ...result,
+      modes: [{ ...result.modes[0], steps: [step(10, 0.1, 0.02), step(20, 0, 1), step(30, 0, -1), step(40, 0.1, 0.03)] }],
+    } as typeof result;
+    const figure = dampingFigure([{ name: "r1", result: real }]);
+    expect((figure.data[0] as { y: Array<number | null> }).y).toEqual([2, null, null, 3]);
+    const range = (figure.layout.yaxis as { range: [number, number] }).range;
+    expect(range[1]).toBeLessThan(50);
+  });
+});
+
 describe("derivative plots", () => {
   it("shade the tested range of a table and draw its points in every panel", () => {
     const table = { model: "tabulated" as const, interpolation: "linear" as const, reducedVelocity: [2, 6, 10], H1: [-0.6, -3.3, -5.8], A2: [-0.03, -0.33, -0.79] };
