@@ -40,6 +40,13 @@ export interface TrackResult {
 export interface TrackOptions {
   /** Smallest local step as a fraction of the grid step (default 1/64: six halvings). */
   readonly minStepFraction?: number;
+  /**
+   * Most steps the tracker may take in all (grid, lead-in and local refinement), default 4 × the grid plus 2,000.
+   * When a deck refines at every interval (extreme inputs), the refinement budget runs out and the remaining
+   * speeds are solved at the grid only and reported ambiguous where the verdict is poor — instead of halving
+   * every interval six times (64 × the grid: a 20,000-step sweep then ran for a minute and held the server).
+   */
+  readonly maxSteps?: number;
 }
 
 /** A step is accepted without refinement when every branch has at least this MAC and confidence. */
@@ -149,6 +156,7 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
   const first = solveRobust(grid[0], references, references);
   accept(first, references, references, true);
 
+  const maxSteps = options.maxSteps ?? 4 * grid.length + 2000;
   for (let g = 1; g < grid.length; g++) {
     const floor = (grid[g] - grid[g - 1]) * (options.minStepFraction ?? 1 / 64);
     const targets = [grid[g]];
@@ -161,7 +169,9 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
         targets.pop();
         continue;
       }
-      if (target - last > floor * 1.0000001) {
+      // Halve only while the budget keeps room for the pending targets and the rest of the grid.
+      const room = maxSteps - branches[0].length - targets.length - (grid.length - 1 - g);
+      if (target - last > floor * 1.0000001 && room > 0) {
         targets.push(last + (target - last) / 2);
         continue;
       }
