@@ -170,6 +170,7 @@ const sweepSchema = object({
     return;
   }
   const span = sweep.to - sweep.from;
+  if (!(sweep.step > 0)) return; // already refused as "must be greater than 0"; no step count to give
   if (sweep.step > span) {
     ctx.addIssue({ code: "custom", path: ["step"], message: `must be at most to − from (${span})` });
   } else if (sweepStepCount(sweep) > MAX_SWEEP_STEPS) {

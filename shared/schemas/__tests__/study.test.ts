@@ -144,6 +144,10 @@ describe("stillspan.study/1 schema", () => {
     expect(parseStudy(heavy).ok).toBe(true);
   });
 
+  it("refuses a zero step once, without an infinite step count", () => {
+    expect(issuesOf((d) => (d.sweep.step = 0))).toEqual([{ path: "$.sweep.step", message: "must be greater than 0" }]);
+  });
+
   it("accepts exactly 20,000 steps", () => {
     expect(parseStudy({ ...fixture(), sweep: { from: 0, to: 100, step: 0.005 } }).ok).toBe(true);
   });
