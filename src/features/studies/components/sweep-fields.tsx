@@ -1,5 +1,5 @@
 import type { FieldErrors, UseFormRegister } from "react-hook-form";
-import { sweepStepCount, type StudyDocument } from "@shared/schemas/study";
+import { MAX_SWEEP_STEPS, sweepStepCount, type StudyDocument } from "@shared/schemas/study";
 import { QuantityField } from "@/features/studies/components/quantity-field";
 
 interface SweepFieldsProps {
@@ -15,7 +15,8 @@ const kmh = (value: unknown) => (typeof value === "number" && Number.isFinite(va
 export function SweepFields({ register, values, errors, readOnly, showKmh }: SweepFieldsProps) {
   const sweep = values.sweep;
   const num = { valueAsNumber: true } as const;
-  const valid = sweep && [sweep.from, sweep.to, sweep.step].every((v) => typeof v === "number" && Number.isFinite(v)) && sweep.step > 0 && sweep.to > sweep.from;
+  const valid = sweep && [sweep.from, sweep.to, sweep.step].every((v) => typeof v === "number" && Number.isFinite(v)) && sweep.step > 0 && sweep.to > sweep.from
+    && sweepStepCount(sweep) <= MAX_SWEEP_STEPS; // beyond it the Step field says why; no count beside the refusal
   return (
     <div className="space-y-2">
       <div className="grid grid-cols-3 gap-3">
