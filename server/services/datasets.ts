@@ -12,6 +12,7 @@ import {
 import { DERIVATIVE_NAMES } from "../../shared/schemas/study.js";
 import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
+import { listAlternativeRevisionAerodynamics } from "../db/queries/revisions.js";
 import {
   deleteDataset,
   findDataset,
@@ -28,6 +29,7 @@ import { requireFile } from "../lib/uploads.js";
 import { zodIssues } from "../middleware/error-handler.js";
 import { loadWithAccess, person, type Access } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
+import { matchingDataset } from "./summary-payload.js";
 import type { SessionUser } from "./auth.js";
 
 export function toDatasetDto(row: DatasetRow): DatasetDto {
@@ -205,8 +207,26 @@ export async function patchDataset(db: DbOrTx, user: SessionUser, id: number, pa
   });
 }
 
+/**
+ * Deletes a data set that no stored revision uses. A revision whose derivative table is this data set's converted
+ * table names it as the source of its aerodynamics (signed summaries print its file and facility), so while any
+ * revision uses it the deletion is refused with the revisions listed (409 `dataset_in_use`).
+ */
 export async function removeDataset(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<void> {
   const row = await loadDataset(db, user, id, "write");
+  const usedBy = (await listAlternativeRevisionAerodynamics(db, row.alternativeId)).filter(
+    (r) => matchingDataset([row], r.aerodynamics) !== undefined,
+  );
+  if (usedBy.length > 0) {
+    const named = usedBy.slice(0, 3).map((r) => `r${r.number} of “${r.studyName}”`).join(", ");
+    const more = usedBy.length > 3 ? ` and ${usedBy.length - 3} more` : "";
+    throw new AppError(
+      409,
+      "dataset_in_use",
+      `“${row.name}” is the aerodynamics of ${named}${more}; revisions are kept for good, so it cannot be deleted.`,
+      { details: usedBy.map((r) => ({ study: r.studyName, revision: r.number })) },
+    );
+  }
   await db.transaction(async (tx) => {
     await deleteDataset(tx, id);
     await writeAudit(tx, {

@@ -198,3 +198,32 @@ describe("cross-section images", () => {
     expect(res.body.error.message).toMatch(/5 MB limit/);
   });
 });
+
+describe("deleting a data set", () => {
+  it("is refused while a stored revision takes its aerodynamics from it, and allowed for an unused one", async () => {
+    const bytes = readFixture("uploads/flutter-derivatives.csv");
+    const used = await uploadDataset("flutter-derivatives.csv", bytes, flutterMeta({ name: "Used set" }));
+    const unused = await uploadDataset("flutter-derivatives.csv", bytes, flutterMeta({ name: "Unused set", meanAngleDeg: 3, convention: { abscissa: "Ur", normalisation: "2B", sign: "h-down" } }));
+    expect([used.status, unused.status]).toEqual([201, 201]);
+
+    // The workspace copies the data set's converted table into the study: save that as revision 2.
+    const latest = await api(base(), `/api/studies/${studyId}/revisions`, { cookie: analyst });
+    const top = latest.body[latest.body.length - 1];
+    const revision = await api(base(), `/api/revisions/${top.id}`, { cookie: analyst });
+    const study = { ...revision.body.study, aerodynamics: { model: "tabulated", interpolation: "linear", ...used.body.converted } };
+    const saved = await api(base(), `/api/studies/${studyId}/revisions`, {
+      cookie: analyst,
+      body: { parentRevision: top.number, changeNote: "Derivatives from the used set", study },
+    });
+    expect(saved.status).toBe(201);
+
+    const refused = await api(base(), `/api/datasets/${used.body.id}`, { cookie: analyst, method: "DELETE" });
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.code).toBe("dataset_in_use");
+    expect(refused.body.error.message).toContain(`r${saved.body.number} of “Test study”`);
+    expect((await api(base(), `/api/datasets/${used.body.id}`, { cookie: analyst })).status).toBe(200);
+
+    const removed = await api(base(), `/api/datasets/${unused.body.id}`, { cookie: analyst, method: "DELETE" });
+    expect(removed.status).toBe(204);
+  });
+});

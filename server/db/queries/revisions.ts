@@ -127,3 +127,17 @@ export async function listProjectStudies(db: DbOrTx, projectId: number) {
     .where(and(eq(alternatives.projectId, projectId)))
     .orderBy(asc(alternatives.name), asc(alternatives.id), asc(studies.name), asc(studies.id));
 }
+
+/** The aerodynamics of every revision of every study of a deck alternative (to tell which use a data set). */
+export async function listAlternativeRevisionAerodynamics(db: DbOrTx, alternativeId: number) {
+  return db
+    .select({
+      studyName: studies.name,
+      number: studyRevisions.number,
+      aerodynamics: sql<StudyDocument["aerodynamics"]>`${studyRevisions.document} -> 'aerodynamics'`,
+    })
+    .from(studyRevisions)
+    .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
+    .where(eq(studies.alternativeId, alternativeId))
+    .orderBy(asc(studies.name), asc(studyRevisions.number));
+}
