@@ -60,7 +60,10 @@ export type DerivativeConventionInput = z.infer<typeof derivativeConventionSchem
 
 const common = {
   name: text(200).min(1, "must not be blank"),
-  meanAngleDeg: finite("Mean angle of attack of the tests, degrees (nose-up positive)").default(0),
+  meanAngleDeg: finite("Mean angle of attack of the tests, degrees (nose-up positive)")
+    .min(-90, "must be at least -90°")
+    .max(90, "must be at most 90°")
+    .default(0),
   provenance: provenanceSchema,
 };
 
