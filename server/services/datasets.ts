@@ -88,6 +88,10 @@ export function parseMeta(raw: unknown): DatasetMeta {
   return result.data;
 }
 
+/** The study format's limits for a derivative table (shared/schemas/study.ts). */
+const MAX_DERIVATIVE = 100_000;
+const MAX_REDUCED_VELOCITY = 1000;
+
 type Parsed = Pick<NewAeroDataset, "delivered" | "converted" | "slopes" | "testedMin" | "testedMax" | "warnings">;
 
 function parseFlutter(bytes: Uint8Array, fileName: string, meta: Extract<DatasetMeta, { kind: "flutter-derivatives" }>): Parsed {
@@ -97,6 +101,19 @@ function parseFlutter(bytes: Uint8Array, fileName: string, meta: Extract<Dataset
   const converted = convertConvention({ ...meta.convention, abscissaValues: abscissa, ...derivatives });
   const ur = converted.reducedVelocity;
   const full = { reducedVelocity: ur, ...Object.fromEntries(DERIVATIVE_NAMES.map((n) => [n, converted[n]!])) };
+  // The study format takes |derivative| ≤ 100,000 and Ur ≤ 1,000; a file beyond them would be stored and then
+  // refused only when a study tried to use it. Refuse it here, naming the data row and the column.
+  const beyond: UploadIssue[] = [];
+  for (const name of DERIVATIVE_NAMES) {
+    (derivatives[name] ?? []).forEach((v, i) => {
+      if (Math.abs(v) > MAX_DERIVATIVE) beyond.push({ column: name, message: `data row ${i + 1}: ${v} is beyond ±${MAX_DERIVATIVE} (a typing or unit error?)` });
+    });
+  }
+  const highest = Math.max(...ur);
+  if (highest > MAX_REDUCED_VELOCITY) {
+    beyond.push({ column: meta.convention.abscissa, message: `gives a reduced velocity Ur = U/(fB) of ${Number(highest.toPrecision(6))}, beyond ${MAX_REDUCED_VELOCITY}` });
+  }
+  if (beyond.length > 0) throw invalidFile(fileName, beyond);
   return {
     delivered: read.delivered,
     converted: full,

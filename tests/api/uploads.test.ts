@@ -35,6 +35,7 @@ const CORPUS: { file: string; as: "flutter" | "static" | "study"; issue: { row?:
   { file: "utf-16.csv", as: "flutter", issue: { message: /encoded as UTF-16/ } },
   { file: "bom-and-text.csv", as: "flutter", issue: { row: 3, column: "H2", message: /"x" is not a number/ } },
   { file: "short-row.csv", as: "flutter", issue: { row: 4, message: /has 8 values; the header has 9 columns/ } },
+  { file: "derivative-beyond-range.csv", as: "flutter", issue: { column: "A4", message: /data row 2: 1e\+300 is beyond ±100000/ } },
   { file: "static-missing-column.csv", as: "static", issue: { row: 1, column: "CM", message: /column CM is missing/ } },
   { file: "study-not-json.json", as: "study", issue: { row: 4, message: /JSON/ } },
 ];
