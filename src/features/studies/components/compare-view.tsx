@@ -2,6 +2,7 @@ import { useMemo } from "react";
 import { Link, useSearchParams } from "react-router-dom";
 import type { ComparisonDto } from "@shared/schemas/comparison";
 import type { RevisionDto } from "@shared/schemas/revisions";
+import type { StudyAerodynamics } from "@shared/schemas/study";
 import { computeMargins } from "@shared/criteria/margins";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -164,7 +165,7 @@ function ComparisonTable({ revisions, comparison, required }: {
     { label: "Flutter margin", cell: ({ margins }) => <MarginCell margin={margins?.flutter ?? null} /> },
     { label: "Divergence margin", cell: ({ margins }) => <MarginCell margin={margins?.divergence ?? null} /> },
     { label: "f_h / f_α", cell: ({ revision: r }) => r.study.structure.modes.map((m) => `${m.frequency}`).join(" / ") + " Hz" },
-    { label: "Aerodynamics", cell: ({ revision: r }) => r.study.aerodynamics.model },
+    { label: "Aerodynamics", cell: ({ revision: r }) => aerodynamicsText(r.study.aerodynamics) },
     { label: "Warnings", cell: ({ revision: r }) => r.result.warnings.length ? [...new Set(r.result.warnings.map((w) => WARNING_TITLES[w.code]))].join("; ") : "none" },
   ];
   return (
@@ -205,4 +206,12 @@ function MarginCell({ margin }: { margin: ReturnType<typeof computeMargins>["flu
       {margin.margin !== null ? ` ${margin.marginIsLowerBound ? "≥" : ""}${margin.margin.toFixed(2)}` : ""}
     </span>
   );
+}
+
+/** The aerodynamic model in the trade's words, with a table's tested range ("derivative table, Ur 2–16"). */
+function aerodynamicsText(aero: StudyAerodynamics): string {
+  if (aero.model === "flat-plate") return "thin plate (Theodorsen)";
+  if (aero.model === "quasi-steady") return "quasi-steady (static slopes)";
+  const ur = aero.reducedVelocity;
+  return `derivative table, Ur ${ur[0]}–${ur[ur.length - 1]}`;
 }
