@@ -210,7 +210,7 @@ describe("reading, diffing and re-running revisions", () => {
     const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
     // Numbers that a careless store (float4, fixed decimals, text rounding) would change.
     const awkward = inventedStudy();
-    awkward.aerodynamics.H1 = [-0.30000000000000004, -1e-7, -3.3, -4.52, -5.8, -123456.78901234567];
+    awkward.aerodynamics.H1 = [-0.30000000000000004, -1e-7, -3.3, -4.52, -5.8, -12345.678901234567];
     awkward.structure.inertia = 1450000.0000000002;
     awkward.air.density = 1.2250000000000003; // the double after 1.225
     const saved = await post(studyId, analyst, { parentRevision: 1, changeNote: "awkward numbers", study: awkward });
