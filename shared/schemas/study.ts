@@ -197,7 +197,7 @@ export const studyDocumentSchema = object({
   air: object({ density: bounded("Air density, kg/m³ (0 = still-air check)", 0, 5, " kg/m³") }),
   deck: object({
     width: bounded("Deck width B (the reference length of the derivatives), m", 0.01, 1000, " m"),
-    depth: bounded("Deck depth, m", 0.001, 100, " m"),
+    depth: bounded("Deck depth, m", 0.001, 1000, " m"), // the same limit as a deck alternative's D
   }),
   structure: structureSchema,
   aerodynamics: studyAerodynamicsSchema,
