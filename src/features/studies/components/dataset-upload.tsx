@@ -101,8 +101,8 @@ export function DatasetUpload({ alternativeId, projectId }: { alternativeId: str
         {kind === "flutter-derivatives" ? (
           <div className="space-y-0.5">
             {/* The flutter derivatives of a deck change with the mean angle of attack (0°, ±3°, ±5° are usual). */}
-            <label htmlFor={`${id}-angle`} className="block text-xs font-semibold text-ink-700">Mean angle α₀ (°, nose-up)</label>
-            <input id={`${id}-angle`} name="meanAngleDeg" type="number" min="-30" max="30" step="any" defaultValue="0" className={input} />
+            <label htmlFor={`${id}-angle`} className="block text-xs font-semibold text-ink-700">Mean angle α₀ (°)</label>
+            <input id={`${id}-angle`} name="meanAngleDeg" type="number" min="-90" max="90" step="any" defaultValue="0" title="Mean angle of attack of the tests, nose-up positive" className={input} />
           </div>
         ) : null}
       </div>
