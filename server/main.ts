@@ -59,7 +59,7 @@ async function main(): Promise<void> {
   if (fakeSmtp) {
     console.log(
       `Mail goes to the local fake SMTP server on ${fakeSmtp.host}:${fakeSmtp.port} (nothing leaves this machine); ` +
-        "administrators read it at /api/dev/mailbox.",
+        "administrators read it on the Mailbox page (/admin/mailbox).",
     );
   }
   console.log("");
