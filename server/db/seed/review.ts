@@ -3,6 +3,8 @@ import type { StudyDocument } from "../../../shared/schemas/study.js";
 import { recordComment, recordSubmission } from "../../services/review.js";
 import { saveRevision } from "../../services/revisions.js";
 import { recordSignature } from "../../services/summaries.js";
+import { buildSummaryPayload } from "../../services/summary-payload.js";
+import type { SummaryPayload } from "../../../shared/schemas/summary.js";
 import { findAlternative } from "../queries/alternatives.js";
 import { findCurrentCriteria } from "../queries/criteria.js";
 import { findReviewRequest } from "../queries/review.js";
@@ -13,10 +15,51 @@ import { seedUser } from "./alternatives.js";
 import { ref, type SeedStep } from "./types.js";
 
 /** Invented review texts of the demo (fictional people, fictional crossing). */
-const SIGNED_STATEMENT =
+const REVIEW_SCOPE =
   "Reviewed for the invented Harrowmere demo: the flutter derivatives' conversion to the study convention, the " +
-  "structural properties against the deck model, the speed sweep and the margins against the project's criteria. " +
-  "Stable with margin at this design stage; to be confirmed by section-model tests.";
+  "structural properties against the deck model, the speed sweep and the margins against the project's criteria.";
+type SummaryMargin = SummaryPayload["margins"][number];
+
+const LABEL: Record<SummaryMargin["phenomenon"], string> = {
+  flutter: "flutter",
+  divergence: "torsional divergence",
+  vortexOnset: "vortex-shedding onset",
+  gallopingOnset: "galloping onset",
+};
+
+const ratio = (m: SummaryMargin) => `${m.marginIsLowerBound ? "at least " : ""}${m.margin!.toFixed(2)}`;
+
+/**
+ * The demo reviewer's statement, written from the signed revision's own margins so that it never contradicts
+ * them: adequate stability margins are named as such; a failed one is named with its number and accepted for
+ * the concept stage only, with the next revision's remedy; vortex shedding to investigate is carried forward.
+ */
+export function demoReviewerStatement(margins: readonly SummaryMargin[]): string {
+  const stability = margins.filter((m) => m.phenomenon === "flutter" || m.phenomenon === "divergence");
+  const adequate = stability.filter((m) => m.status === "pass" && m.margin !== null);
+  const failed = margins.filter((m) => m.status === "fail");
+  const open = margins.filter((m) => m.status === "investigate" || m.status === "undetermined");
+  const parts = [REVIEW_SCOPE];
+  if (adequate.length > 0) {
+    parts.push(`Margin adequate for ${adequate.map((m) => `${LABEL[m.phenomenon]} (${ratio(m)})`).join(" and ")}.`);
+  }
+  for (const m of failed) {
+    const value = m.margin !== null ? ` is ${ratio(m)}` : " is not met";
+    parts.push(
+      `The ${LABEL[m.phenomenon]} margin${value}, below the required speed of ${m.requiredSpeedMps.toFixed(1)} m/s: ` +
+        "accepted for the concept stage only; the next revision must raise the deck's torsional stiffness and mass " +
+        "moment of inertia before this alternative can go forward.",
+    );
+  }
+  if (open.length > 0) parts.push(`Still open: ${open.map((m) => LABEL[m.phenomenon]).join(", ")}.`);
+  parts.push(
+    failed.length > 0
+      ? "Not acceptable for the design stage as it stands; section-model tests are pending."
+      : "Acceptable at this concept stage; to be confirmed by section-model tests.",
+  );
+  return parts.join(" ");
+}
+
 const SUBMIT_NOTE = "Second pass with the revised torsional damping — please review the margins.";
 
 /**
@@ -85,6 +128,16 @@ export const demoReview: SeedStep = {
       body: "Derivatives are within the tested range up to flutter; the extrapolation warning above it does not affect the critical speed.",
     });
     const request = (await findReviewRequest(tx, toSign.id))!;
+    // The statement is written against the margins the summary will carry (the same computation as the signing).
+    const { margins } = await buildSummaryPayload(tx, {
+      revision: toSign,
+      projectName,
+      alternativeName: alternative.name,
+      criteria: criteria.criteria,
+      signer: { name: reviewer.name, email: reviewer.email },
+      signedAt,
+      statement: "",
+    });
     const summaryId = await recordSignature(tx, config, {
       revision: toSign,
       requestId: request.id,
@@ -93,7 +146,7 @@ export const demoReview: SeedStep = {
       criteria,
       signer: reviewer,
       signedAt,
-      statement: SIGNED_STATEMENT,
+      statement: demoReviewerStatement(margins),
     });
     ctx.refs.set("summary:demo", summaryId);
 
