@@ -90,7 +90,8 @@ export class PdfWriter {
 
   bullet(text: string, color: string = COLORS.ink): void {
     this.doc.font(FONTS.regular).fontSize(9);
-    this.ensureSpace(12);
+    // The bullet and (the first lines of) its text on the same page: the same space the text itself will ask for.
+    this.ensureSpace(Math.min(this.doc.heightOfString(text, { width: this.width - 14 }), 120));
     this.doc.fillColor(color).text("•", this.left + 4, this.y, { lineBreak: false });
     this.flow(text, FONTS.regular, 9, color, 3, 14);
   }

@@ -9,6 +9,7 @@ import path from "node:path";
 import { decodeProtectedHeader } from "jose";
 import PDFDocument from "pdfkit";
 import { SUMMARY_CAUTIONS, type SummaryPayload } from "../../shared/schemas/summary.js";
+import { explainWarningCode } from "../../shared/warning-text.js";
 import { projectRoot } from "../config.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { drawLineChart, type ChartSeries } from "./line-chart.js";
@@ -129,7 +130,7 @@ function writeCriticalSpeeds(w: PdfWriter, s: SummaryPayload): void {
           ]
         : ["Flutter", `> ${sweepEnd} m/s`, "—", "all branches stay damped up to the end of the sweep"],
       s.divergence
-        ? ["Torsional divergence", mps(s.divergence.speedMps), `${s.divergence.frequencyHz.toFixed(3)} Hz`, "static"]
+        ? ["Torsional divergence", mps(s.divergence.speedMps), "—", "static instability (a real pole, no oscillation)"]
         : ["Torsional divergence", "none", "—", "static moment slope ≤ 0: divergence cannot occur"],
     ],
     [130, 80, 75, 214],
@@ -245,7 +246,8 @@ function writeProvenance(w: PdfWriter, s: SummaryPayload): void {
 function writeWarnings(w: PdfWriter, s: SummaryPayload): void {
   w.heading("Warnings");
   if (s.warnings.length === 0) w.paragraph("The computation raised no warning.");
-  for (const warning of s.warnings) w.bullet(`${warning.message} [${warning.code}]`, COLORS.signal);
+  // The plain sentence the workspace shows; the engine's own message only for a code this build does not know.
+  for (const warning of s.warnings) w.bullet(explainWarningCode(warning.code) ?? warning.message, COLORS.signal);
 }
 
 function writeSignature(w: PdfWriter, input: SummaryPdfInput, code: string): void {

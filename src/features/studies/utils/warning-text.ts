@@ -1,32 +1,10 @@
 import type { SweepWarning, SweepWarningCode } from "@shared/schemas/result";
+import { WARNING_EXPLANATIONS, WARNING_TITLES } from "@shared/warning-text";
 
-/** One plain sentence per engine warning code: what it means for the number on the screen. */
-const EXPLANATIONS: Record<SweepWarningCode, string> = {
-  "extrapolated-derivatives":
-    "Here the reduced velocity lies outside the tested range: the derivatives were held at the table's end values, so results at these speeds are extrapolated and unreliable.",
-  "quasi-steady-flutter":
-    "Quasi-steady aerodynamics give no torsional aerodynamic damping, so this flutter speed is likely far too low; use measured derivatives.",
-  "unstable-at-start":
-    "A pole is already undamped at the first speed, so the true critical speed lies at or below the start of the sweep; start lower.",
-  "static-instability":
-    "A real pole crosses zero: the deck loses its static stiffness (divergence-type instability) within the sweep, and above that speed it is statically unstable.",
-  "tracking-ambiguous":
-    "Two poles came so close that the tracker could not tell them apart even at its smallest step; check the branches near these speeds.",
-  "no-convergence":
-    "The frequency iteration did not settle at these speeds, so the poles there are less accurate.",
-};
-
-export const WARNING_TITLES: Record<SweepWarningCode, string> = {
-  "extrapolated-derivatives": "Outside the tested range",
-  "quasi-steady-flutter": "Flutter from quasi-steady data",
-  "unstable-at-start": "Unstable at the first speed",
-  "static-instability": "Static instability",
-  "tracking-ambiguous": "Pole tracking ambiguous",
-  "no-convergence": "Iteration not converged",
-};
+export { WARNING_TITLES };
 
 export function explainWarning(code: SweepWarningCode): string {
-  return EXPLANATIONS[code];
+  return WARNING_EXPLANATIONS[code];
 }
 
 const fmt = (speed: number) => speed.toFixed(1);
