@@ -1,6 +1,7 @@
 import type { SweepResult } from "@shared/schemas/result";
 import { axis, baseLayout, seriesColour, token } from "@/components/ui/plot-theme";
 import type { PlotFigure } from "@/components/ui/plot";
+import { dampingAxisRange, oscillatingDampingPercent } from "@/lib/damping-frame";
 
 /** One result to draw; several are overlaid in comparisons (colour per run, dash per mode). */
 export interface PlotRun {
@@ -172,24 +173,13 @@ export function frequencyFigure(runs: readonly PlotRun[]): PlotFigure {
 
 /** Damping ratio in % of critical against wind speed; the zero line — where flutter starts — drawn heavy. */
 export function dampingFigure(runs: readonly PlotRun[]): PlotFigure {
-  // Heave damping grows to tens of percent at high speed; the first view keeps the region around zero readable
-  // (the full curves are one "autoscale" click away).
-  let lo = 0;
-  let hi = 0;
-  for (const { result } of runs) for (const m of result.modes) for (const s of m.steps) {
-    if (s.frequency === 0) continue;
-    lo = Math.min(lo, s.damping * 100);
-    hi = Math.max(hi, s.damping * 100);
-  }
-  const top = Math.min(hi, 12);
-  const bottom = Math.max(lo, -6);
-  const pad = (top - bottom) * 0.06 || 1;
-  // A branch that has turned into a real (non-oscillating) pole has ζ = ±1 by definition; drawn, it is a vertical
-  // wall from +100 % to −100 % that reads as a jump in damping. Leave a gap there: the frequency plot shows f = 0.
-  const oscillating = (s: SweepResult["modes"][number]["steps"][number]) => (s.frequency === 0 ? null : s.damping * 100);
-  const figure = versusSpeed(runs, oscillating, "Damping ratio ζ (%)", "ζ %{y:.2f} %", [
+  const figure = versusSpeed(runs, oscillatingDampingPercent, "Damping ratio ζ (%)", "ζ %{y:.2f} %", [
     { type: "line", xref: "paper", yref: "y", x0: 0, x1: 1, y0: 0, y1: 0, line: { color: token("--color-ink-900"), width: 1.6 } },
   ]);
-  (figure.layout.yaxis as Record<string, unknown>).range = [bottom - pad, top + pad];
+  // Heave damping grows to tens of percent at high speed; the first view keeps the region around zero readable
+  // (the full curves are one "autoscale" click away).
+  (figure.layout.yaxis as Record<string, unknown>).range = dampingAxisRange(
+    runs.flatMap(({ result }) => result.modes.flatMap((m) => m.steps)),
+  );
   return figure;
 }

@@ -2,6 +2,7 @@ import type { SummaryBranchDto } from "@shared/schemas/review";
 import type { SummaryPayload } from "@shared/schemas/summary";
 import type { PlotFigure } from "@/components/ui/plot";
 import { axis, baseLayout, seriesColour, token } from "@/components/ui/plot-theme";
+import { dampingAxisRange, oscillatingDampingPercent } from "@/lib/damping-frame";
 
 const marker = (x: number, colour: string, dash: string, label: string, side: "left" | "right") => ({
   shape: { type: "line", x0: x, x1: x, yref: "paper", y0: 0, y1: 1, line: { color: colour, width: 1.5, dash } },
@@ -35,41 +36,24 @@ function speedMarkers(summary: SummaryPayload) {
   return { shapes: list.map((m) => m.shape), annotations: list.map((m) => m.annotation) };
 }
 
-/**
- * Vertical range of the damping plot, %: that of the oscillatory steps (frequency > 0), padded. A static (real)
- * pole has ζ = ±1 and would squash the flutter crossing into a line; it is still drawn, clipped at the edge.
- */
-function dampingRange(branches: readonly SummaryBranchDto[]): [number, number] | undefined {
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (const b of branches) for (const s of b.steps) if (s.frequency > 0) {
-    lo = Math.min(lo, s.damping * 100);
-    hi = Math.max(hi, s.damping * 100);
-  }
-  if (!Number.isFinite(lo)) return undefined;
-  lo = Math.min(lo, 0);
-  hi = Math.max(hi, 0);
-  const pad = 0.08 * Math.max(hi - lo, 1);
-  return [lo - pad, hi + pad];
-}
-
 /** Damping ratio of every branch against the mean wind speed; the zero line is the stability boundary. */
 export function dampingFigure(summary: SummaryPayload, branches: readonly SummaryBranchDto[]): PlotFigure {
   const { shapes, annotations } = speedMarkers(summary);
-  const range = dampingRange(branches);
+  // Framed around zero like the workspace's plot; the curve breaks where a branch becomes a real pole.
+  const range = dampingAxisRange(branches.flatMap((b) => b.steps));
   return {
     data: branches.map((b, i) => ({
       type: "scatter",
       mode: "lines",
       name: `Branch ${b.id}`,
       x: b.steps.map((s) => s.speed),
-      y: b.steps.map((s) => s.damping * 100),
+      y: b.steps.map(oscillatingDampingPercent),
       line: { color: seriesColour(i), width: 2 },
       hovertemplate: "U = %{x:.2f} m/s<br>ζ = %{y:.3f} %<extra>%{fullData.name}</extra>",
     })),
     layout: baseLayout({
       xaxis: axis("Mean wind speed U, m/s"),
-      yaxis: axis("Damping ratio ζ, %", { zerolinecolor: token("--color-ink-900"), zerolinewidth: 1.5, ...(range ? { range } : {}) }),
+      yaxis: axis("Damping ratio ζ, %", { zerolinecolor: token("--color-ink-900"), zerolinewidth: 1.5, range }),
       shapes,
       annotations,
       margin: { l: 56, r: 12, t: 28, b: 40 },
