@@ -1,5 +1,5 @@
 import { diffJson } from "../../shared/diff-json.js";
-import { runSweep } from "../../shared/engine/run-sweep.js";
+import type { runSweep } from "../../shared/engine/run-sweep.js";
 import { ENGINE_VERSION } from "../../shared/engine/version.js";
 import type {
   RevisionDiffDto,
@@ -26,6 +26,7 @@ import { criticalSpeeds } from "../lib/critical-speeds.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
 import { requireFile } from "../lib/uploads.js";
 import { loadWithAccess, person } from "./access.js";
+import { runSweepInPool } from "./sweep-pool.js";
 import type { SessionUser } from "./auth.js";
 
 export function toRevisionSummary(row: RevisionSummaryRow): RevisionSummaryDto {
@@ -101,7 +102,7 @@ export async function saveRevision(
       details: [{ path: "changeNote", rule: "required", message: "is required from revision 2 on" }],
     });
   }
-  const { result, sha256 } = compute(study);
+  const { result, sha256 } = await compute(study);
   const id = await db
     .transaction(async (tx) => {
       const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, result, sha256);
@@ -125,11 +126,13 @@ export async function saveRevision(
   return toRevisionDto((await findRevision(db, id))!);
 }
 
-function compute(study: StudyDocument) {
+/** Runs the sweep in the worker pool, before any transaction opens; a timeout (422 `sweep_timeout`) passes through. */
+async function compute(study: StudyDocument) {
   let result;
   try {
-    result = runSweep(study);
+    result = await runSweepInPool(study);
   } catch (err) {
+    if (err instanceof AppError) throw err;
     const message = err instanceof Error ? err.message : String(err);
     throw new AppError(422, "sweep_failed", `The sweep could not be computed: ${message}. Nothing was stored.`, { cause: err });
   }
@@ -192,7 +195,7 @@ export async function appendRevision(
 
 /** Computes and appends revision 1 of a study created in the same transaction (study creation with a document). */
 export async function appendFirstRevision(tx: DbOrTx, user: { id: number }, studyId: number, study: StudyDocument) {
-  const { result, sha256 } = compute(study);
+  const { result, sha256 } = await compute(study);
   const inserted = await appendRevision(tx, user, studyId, { parentRevision: null, changeNote: "", study }, result, sha256);
   return { ...inserted, sha256, engineVersion: result.engine };
 }

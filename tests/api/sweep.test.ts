@@ -1,7 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { benchmarkDeck as benchmarkDeckInputs } from "../../shared/engine/__tests__/support/benchmark-deck.js";
+import { runSweep } from "../../shared/engine/run-sweep.js";
 import { sweepResultSchema } from "../../shared/schemas/result.js";
+import { parseStudy } from "../../shared/schemas/study.js";
 import { createProjectWithMembers, openTestDb } from "../support/db.js";
+import { startTestApp } from "../support/app.js";
 import { testEnv } from "../support/env.js";
 import { api, signIn } from "../support/http.js";
 
@@ -65,5 +68,50 @@ describe("POST /api/sweep", () => {
     const study = { ...benchmarkDeck(), name: "x".repeat(1_100_000) };
     const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: study });
     expect(res.status).toBe(413);
+  });
+
+  it("returns the same result as runSweep run in this process", async () => {
+    const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: benchmarkDeck() });
+    expect(res.status).toBe(200);
+    const parsed = parseStudy(benchmarkDeck());
+    if (!parsed.ok) throw new Error("benchmark deck must be valid");
+    expect(res.body).toEqual(JSON.parse(JSON.stringify(runSweep(parsed.study))));
+  });
+
+  it("answers /api/health while heavy sweeps run (they run in worker threads, not on the request thread)", async () => {
+    // Three sweeps at the format's maximum of 20 000 steps: each takes several hundred ms of CPU.
+    const heavy = benchmarkDeckInputs({ from: 0, to: 400, step: 0.02 });
+    let sweepsDone = 0;
+    const sweeps = [0, 1, 2].map(() =>
+      api(base(), "/api/sweep", { cookie: cookies.analyst, body: heavy }).then((r) => {
+        sweepsDone++;
+        return r;
+      }),
+    );
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    const health = await api(base(), "/api/health");
+    const doneWhenHealthAnswered = sweepsDone;
+    const results = await Promise.all(sweeps);
+    expect(health.status).toBe(200);
+    // Run on the request thread, the sweeps would have held the health check back until all three had finished.
+    expect(doneWhenHealthAnswered).toBeLessThan(3);
+    for (const r of results) expect(r.status).toBe(200);
+  });
+
+  it("stops a sweep over STILLSPAN_SWEEP_TIMEOUT_MS with 422 sweep_timeout naming the limit", async () => {
+    const app = await startTestApp();
+    const previous = process.env.STILLSPAN_SWEEP_TIMEOUT_MS;
+    process.env.STILLSPAN_SWEEP_TIMEOUT_MS = "5";
+    try {
+      const cookie = await signIn(app.baseUrl, "analyst@stillspan.test");
+      const res = await api(app.baseUrl, "/api/sweep", { cookie, body: benchmarkDeckInputs({ from: 0, to: 400, step: 0.02 }) });
+      expect(res.status).toBe(422);
+      expect(res.body.error.code).toBe("sweep_timeout");
+      expect(res.body.error.message).toContain("time limit of 5 ms");
+    } finally {
+      if (previous === undefined) delete process.env.STILLSPAN_SWEEP_TIMEOUT_MS;
+      else process.env.STILLSPAN_SWEEP_TIMEOUT_MS = previous;
+      await app.close();
+    }
   });
 });
