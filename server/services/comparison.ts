@@ -2,32 +2,32 @@ import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
 import { computeMargins, type CriticalSpeed, type Margin } from "../../shared/criteria/margins.js";
 import type { ComparisonDto, ComparisonMargin } from "../../shared/schemas/comparison.js";
 import type { CriticalSpeeds } from "../../shared/schemas/revisions.js";
-import type { Db } from "../db/client.js";
+import type { Db, DbOrTx } from "../db/client.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
 import { listProjectRevisions, listProjectStudies } from "../db/queries/revisions.js";
 import { assertRole } from "../middleware/auth.js";
 import { person, READ_ROLES } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
-function flutterFound(c: CriticalSpeeds): CriticalSpeed {
+export function flutterFound(c: CriticalSpeeds): CriticalSpeed {
   return c.flutter ? { kind: "speed", speedMps: c.flutter.speedMps } : { kind: "above", speedMps: c.sweepToMps };
 }
 
-function divergenceFound(c: CriticalSpeeds): CriticalSpeed {
+export function divergenceFound(c: CriticalSpeeds): CriticalSpeed {
   return c.divergenceSpeedMps !== null
     ? { kind: "speed", speedMps: c.divergenceSpeedMps }
     : { kind: "none", reason: c.divergenceNote ?? "divergence cannot occur" };
 }
 
 /** Flutter and divergence are stability limits: never the onset screening's "investigate" or "clear". */
-function stabilityMargin(margin: Margin): ComparisonMargin {
+export function stabilityMargin(margin: Margin): ComparisonMargin {
   const { status } = margin;
   if (status === "investigate" || status === "clear") throw new Error(`a stability check cannot be "${status}"`);
   return { ...margin, status };
 }
 
 /** The project's current criteria evaluated, or null when there are none (or they cannot be evaluated). */
-async function requiredSpeedsOf(db: Db, projectId: number) {
+export async function requiredSpeedsOf(db: DbOrTx, projectId: number) {
   const current = await findCurrentCriteria(db, projectId);
   if (!current) return null;
   try {

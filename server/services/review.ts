@@ -3,12 +3,15 @@
  * comments or sign (reviewers only, never the revision's author), comments, the reviewer's queue. Every write
  * and its audit event share one transaction; e-mail goes out after the commit and never undoes the action.
  */
+import { computeMargins } from "../../shared/criteria/margins.js";
+import type { RequiredSpeeds } from "../../shared/criteria/required-speeds.js";
 import type {
   ReviewQueueItemDto,
   RevisionReviewDto,
   SubmitReviewInput,
 } from "../../shared/schemas/review.js";
 import { submitReviewSchema } from "../../shared/schemas/review.js";
+import type { CriticalSpeeds } from "../../shared/schemas/revisions.js";
 import type { AppContext } from "../app-context.js";
 import type { Db, DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
@@ -33,6 +36,7 @@ import { AppError } from "../errors.js";
 import { assertRole } from "../middleware/auth.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { person } from "./access.js";
+import { divergenceFound, flutterFound, requiredSpeedsOf, stabilityMargin } from "./comparison.js";
 import type { SessionUser } from "./auth.js";
 import { notifyReturned, notifyReviewRequested } from "./review-mail.js";
 
@@ -231,9 +235,18 @@ export async function recordComment(
   await writeAudit(tx, { actorId: m.authorId, action: "review.comment", objectType: "revision", objectId: m.revisionId, ip: m.ip, details: { commentId: id } });
 }
 
+function queueMargins(critical: CriticalSpeeds, required: RequiredSpeeds | null): ReviewQueueItemDto["margins"] {
+  if (!required) return null;
+  const all = computeMargins({ flutter: flutterFound(critical), divergence: divergenceFound(critical) }, required);
+  return { flutter: stabilityMargin(all.flutter), divergence: stabilityMargin(all.divergence) };
+}
+
 /** GET /api/review-queue — revisions in review assigned to the caller. */
 export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<ReviewQueueItemDto[]> {
   const rows = await listReviewQueue(db, user.id);
+  // The margins against each project's current criteria, as the comparison states them.
+  const required = new Map<number, Awaited<ReturnType<typeof requiredSpeedsOf>>>();
+  for (const r of rows) if (!required.has(r.projectId)) required.set(r.projectId, await requiredSpeedsOf(db, r.projectId));
   return rows.map((r) => ({
     revisionId: String(r.revisionId),
     revisionNumber: r.revisionNumber,
@@ -250,6 +263,8 @@ export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<Review
     changeNote: r.changeNote,
     flutterSpeedMps: r.critical.flutter?.speedMps ?? null,
     divergenceSpeedMps: r.critical.divergenceSpeedMps ?? null,
+    margins: queueMargins(r.critical, required.get(r.projectId)?.required ?? null),
+    warningCount: r.critical.warningCodes.length,
     engineVersion: r.engineVersion,
     documentSha256: r.documentSha256,
   }));

@@ -4,6 +4,7 @@
  * `in-review`, and ends `returned` (with comments; it may be submitted again) or `signed` (final).
  */
 import { z } from "zod";
+import type { ComparisonMargin } from "./comparison";
 import type { SummaryPayload } from "./summary";
 
 export const REVIEW_REQUEST_STATES = ["in-review", "returned", "signed"] as const;
@@ -104,6 +105,10 @@ export interface ReviewQueueItemDto {
   changeNote: string;
   flutterSpeedMps: number | null;
   divergenceSpeedMps: number | null;
+  /** Flutter and divergence against the project's required speeds; null while the project has no criteria. */
+  margins: { flutter: ComparisonMargin; divergence: ComparisonMargin } | null;
+  /** Number of the sweep's warnings (one per kind). */
+  warningCount: number;
   engineVersion: string;
   documentSha256: string;
 }

@@ -42,6 +42,10 @@ describe("review and signed summary in the browser", () => {
     await card.waitFor();
     signedRevision = Number((await card.getAttribute("aria-label"))!.match(/revision (\d+)$/)![1]);
     expect(await card.textContent()).not.toContain("already exists"); // it is the study's latest revision
+    // Flutter and divergence each with its margin against the project's required speed, and the warning count.
+    const facts = (await card.locator("dl").first().textContent()) ?? "";
+    expect(facts.match(/margin ≥? ?\d+\.\d{2} against \d+\.\d m\/s · (pass|fail)/g)).toHaveLength(2);
+    expect(facts).toMatch(/Warnings(none|\d+ warnings?)/);
     await browser.screenshot("review-queue");
 
     await card.getByLabel("Reviewer's statement").fill("Checked the derivatives, the sweep and the margins: stable with margin at this design stage.");

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { Link } from "react-router-dom";
 import { Button } from "@/components/ui/button";
 import { TextAreaField } from "@/components/ui/textarea-field";
@@ -24,7 +24,12 @@ export function ReviewDecisionForm({
 }) {
   const [statement, setStatement] = useState("");
   const [comments, setComments] = useState("");
+  // A missing text is told on its own field (aria-describedby); the server's refusal below both forms.
+  const [statementError, setStatementError] = useState<string | undefined>();
+  const [commentsError, setCommentsError] = useState<string | undefined>();
   const [problem, setProblem] = useState<string | null>(null);
+  const statementRef = useRef<HTMLTextAreaElement>(null);
+  const commentsRef = useRef<HTMLTextAreaElement>(null);
   const sign = useSignRevision(revisionId);
   const ret = useReturnRevision(revisionId);
   const busy = sign.isPending || ret.isPending;
@@ -47,14 +52,27 @@ export function ReviewDecisionForm({
     );
   }
 
-  const onSign = () => {
+  const clear = () => {
     setProblem(null);
-    if (!statement.trim()) return setProblem("Write your statement before signing: it is signed with the summary.");
+    setStatementError(undefined);
+    setCommentsError(undefined);
+  };
+  const onSign = () => {
+    clear();
+    if (!statement.trim()) {
+      setStatementError("Write your statement before signing: it is signed with the summary.");
+      statementRef.current?.focus();
+      return;
+    }
     sign.mutate({ statement }, { onError: (e) => setProblem(e.message), onSuccess: (data) => onDecided?.({ kind: "signed", summaryId: data.summaryId }) });
   };
   const onReturn = () => {
-    setProblem(null);
-    if (!comments.trim()) return setProblem("Write what the analyst should change before returning the revision.");
+    clear();
+    if (!comments.trim()) {
+      setCommentsError("Write what the analyst should change before returning the revision.");
+      commentsRef.current?.focus();
+      return;
+    }
     ret.mutate({ comments }, { onError: (e) => setProblem(e.message), onSuccess: () => onDecided?.({ kind: "returned" }) });
   };
 
@@ -66,6 +84,8 @@ export function ReviewDecisionForm({
           hint="Signed with the summary, word for word; the owner's representative reads it."
           rows={4}
           maxLength={4000}
+          ref={statementRef}
+          error={statementError}
           value={statement}
           onChange={(e) => setStatement(e.target.value)}
         />
@@ -79,6 +99,8 @@ export function ReviewDecisionForm({
           hint="Returned unsigned; the analyst addresses them in a new revision."
           rows={4}
           maxLength={8000}
+          ref={commentsRef}
+          error={commentsError}
           value={comments}
           onChange={(e) => setComments(e.target.value)}
         />

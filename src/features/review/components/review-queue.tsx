@@ -1,4 +1,5 @@
 import { Link } from "react-router-dom";
+import type { ComparisonMargin } from "@shared/schemas/comparison";
 import type { ReviewQueueItemDto } from "@shared/schemas/review";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
@@ -11,6 +12,27 @@ import { useState } from "react";
 import { ReviewDecisionForm, type ReviewDecision } from "@/features/review/components/review-decision-form";
 
 const mps = (v: number | null) => (v === null ? "none found" : `${v.toFixed(1)} m/s`);
+
+const STATUS_TEXT: Record<ComparisonMargin["status"], { label: string; className: string }> = {
+  pass: { label: "pass", className: "text-steady-700" },
+  fail: { label: "fail", className: "text-signal-700" },
+  undetermined: { label: "undetermined", className: "text-caution-700" },
+  "not-evaluated": { label: "not evaluated", className: "text-ink-600" },
+};
+
+/** "margin 1.61 against 65.0 m/s · pass"; a lower bound is written "≥". */
+function MarginLine({ margin }: { margin: ComparisonMargin | undefined }) {
+  if (!margin) return <span className="text-ink-600">no criteria yet</span>;
+  const status = STATUS_TEXT[margin.status];
+  const ratio = margin.margin === null ? "—" : `${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}`;
+  return (
+    <span className="text-sm">
+      margin <span className="num font-semibold">{ratio}</span> against{" "}
+      <span className="num">{margin.requiredSpeedMps.toFixed(1)} m/s</span> ·{" "}
+      <span className={`font-semibold ${status.className}`}>{status.label}</span>
+    </span>
+  );
+}
 
 function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (d: ReviewDecision) => void }) {
   const newer = item.latestNumber > item.revisionNumber;
@@ -32,14 +54,26 @@ function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (
       }
       aria-label={`Review of ${item.studyName}, revision ${item.revisionNumber}`}
     >
-      <dl className="mb-3 grid grid-cols-2 gap-x-6 gap-y-1 text-[0.95rem] sm:grid-cols-4">
+      <dl className="mb-3 grid grid-cols-1 gap-x-6 gap-y-2 text-[0.95rem] sm:grid-cols-3">
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Flutter</dt>
           <dd className="num font-semibold">{mps(item.flutterSpeedMps)}</dd>
+          <dd>
+            <MarginLine margin={item.margins?.flutter} />
+          </dd>
         </div>
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Divergence</dt>
           <dd className="num font-semibold">{item.divergenceSpeedMps === null ? "not possible" : `${item.divergenceSpeedMps.toFixed(1)} m/s`}</dd>
+          <dd>
+            <MarginLine margin={item.margins?.divergence} />
+          </dd>
+        </div>
+        <div>
+          <dt className="text-xs tracking-wide text-ink-600 uppercase">Warnings</dt>
+          <dd className={item.warningCount > 0 ? "font-semibold text-caution-700" : "text-ink-700"}>
+            {item.warningCount === 0 ? "none" : `${item.warningCount} ${item.warningCount === 1 ? "warning" : "warnings"}`}
+          </dd>
         </div>
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Submitted</dt>

@@ -105,7 +105,12 @@ describe("ReviewPanel", () => {
 
     // A statement is required before anything is sent; the server's refusal is shown as it comes.
     fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
-    expect(await screen.findByRole("alert")).toHaveTextContent("Write your statement before signing");
+    // Told on the statement field itself (its accessible description), not under the buttons.
+    const statementField = screen.getByLabelText("Reviewer's statement");
+    await waitFor(() => expect(statementField).toHaveAccessibleDescription(/Write your statement before signing/));
+    expect(statementField).toHaveAttribute("aria-invalid", "true");
+    expect(statementField).toHaveFocus();
+    expect(screen.queryByRole("alert")).not.toBeInTheDocument();
     expect(fetchMock.mock.calls.some(([url]) => String(url).endsWith("/sign"))).toBe(false);
     fireEvent.change(screen.getByLabelText("Reviewer's statement"), { target: { value: "Fine." } });
     fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
