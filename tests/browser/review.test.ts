@@ -126,6 +126,17 @@ describe("review and signed summary in the browser", () => {
     await page.waitForURL((url) => /\/studies\/[^/]+$/.test(url.pathname));
     const signed = page.getByRole("region", { name: `Review of revision ${signedRevision}` });
     await signed.getByText("Signed by Mira Holloway").waitFor();
+    // At 1280 px the review runs across both columns, below them both: no blank area beside it.
+    await page.setViewportSize({ width: 1280, height: 800 });
+    const [panelBox, formBox, resultBox] = await Promise.all([
+      signed.boundingBox(),
+      page.getByRole("form", { name: "Study inputs" }).boundingBox(),
+      page.getByTestId("result-source").locator("xpath=ancestor::section[1]").boundingBox(),
+    ]);
+    expect(resultBox!.x).toBeGreaterThan(formBox!.x + formBox!.width - 1); // two columns at this width
+    expect(panelBox!.x).toBeCloseTo(formBox!.x, 0);
+    expect(panelBox!.x + panelBox!.width).toBeCloseTo(resultBox!.x + resultBox!.width, 0);
+    expect(panelBox!.y).toBeGreaterThanOrEqual(formBox!.y + formBox!.height);
 
     await page.goto(`${page.url()}?revision=1`);
     const panel = page.getByRole("region", { name: "Review of revision 1" });

@@ -30,15 +30,14 @@ export function StudyRoute() {
       projectId={projectId}
       studyId={studyId}
       readOnly={role !== "analyst"}
-      renderChecks={(study, result, revision) => (
-        <>
-          <StudyChecks projectId={projectId} study={study} result={result} />
-          {/* The review of the revision being viewed: analysts submit it, its reviewer returns or signs it. */}
-          {me.data ? (
-            <ReviewPanel revisionId={revision.id} projectId={projectId} userId={me.data.id} role={role} isAdmin={me.data.isAdmin} />
-          ) : null}
-        </>
-      )}
+      renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
+      // The review of the revision being viewed, across both columns (beside the long result column it left a
+      // hole): analysts submit it, its reviewer returns or signs it.
+      renderFullWidth={(revision) =>
+        me.data ? (
+          <ReviewPanel revisionId={revision.id} projectId={projectId} userId={me.data.id} role={role} isAdmin={me.data.isAdmin} />
+        ) : null
+      }
     />
   );
 }

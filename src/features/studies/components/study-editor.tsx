@@ -42,6 +42,8 @@ export interface StudyEditorProps {
   onRebased: (draft: RebasedDraft) => void;
   /** Further panels under the result (screening, all margins, the revision's review), composed in by the route. */
   renderChecks?: (document: StudyDocument, result: SweepResult, revision: RevisionDto) => ReactNode;
+  /** A panel across the full width under both columns (the revision's review), composed in by the route. */
+  renderFullWidth?: (revision: RevisionDto) => ReactNode;
 }
 
 interface ShownResult {
@@ -58,7 +60,7 @@ const keyOf = (value: unknown) => JSON.stringify(value);
  * server's result on the right. Run asks the server for an unsaved result; Save stores a new revision.
  */
 export function StudyEditor(props: StudyEditorProps) {
-  const { projectId, studyId, revision, draft, readOnly, criteria, datasets, datasetsError, onRebased, renderChecks } = props;
+  const { projectId, studyId, revision, draft, readOnly, criteria, datasets, datasetsError, onRebased, renderChecks, renderFullWidth } = props;
   const startDocument = draft?.document ?? revision.study;
   const form = useForm<StudyDocument>({
     resolver: zodResolver(studyDocumentSchema),
@@ -223,6 +225,7 @@ export function StudyEditor(props: StudyEditorProps) {
           {renderChecks?.(shown.document, shown.result, revision)}
         </div>
       </div>
+      {renderFullWidth?.(revision)}
       <Card title="Steps" subtitle="Every tracked pole at every speed, including locally refined steps" flush>
         <StepsTable result={shown.result} fileName={`${(values.name || "study").replace(/[^\w.-]+/g, "-").slice(0, 60)}-steps.csv`} />
       </Card>

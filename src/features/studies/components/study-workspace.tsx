@@ -21,6 +21,7 @@ interface StudyWorkspaceProps {
   /** Reviewers (and administrators who are not the project's analysts) see everything, edit nothing. */
   readOnly: boolean;
   renderChecks?: StudyEditorProps["renderChecks"];
+  renderFullWidth?: StudyEditorProps["renderFullWidth"];
 }
 
 export function queryErrorPanel(title: string, error: Error, retry: () => void, isRetrying: boolean) {
@@ -37,7 +38,7 @@ export function queryErrorPanel(title: string, error: Error, retry: () => void, 
 }
 
 /** Loads the study, the revision to start from (the latest, or `?revision=N`), the criteria and the data sets. */
-export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks }: StudyWorkspaceProps) {
+export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks, renderFullWidth }: StudyWorkspaceProps) {
   const [search] = useSearchParams();
   const wanted = Number(search.get("revision")) || null;
   const study = useStudy(studyId);
@@ -133,6 +134,7 @@ export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks }: S
         datasetsError={datasets.isError ? datasets.error.message : null}
         onRebased={setDraft}
         renderChecks={renderChecks}
+        renderFullWidth={renderFullWidth}
       />
     </>
   );
