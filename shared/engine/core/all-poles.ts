@@ -11,12 +11,16 @@ import { refinePole, type Pole } from "./refine-pole";
  * eigenvector of a complex pair at columns k, k+1 is V[:,k] + i·V[:,k+1] (JAMA layout). Each pole is then
  * polished by `refinePole` so that full and warm-started solves agree to rounding.
  * Notes: used at the first speed and where tracking is ambiguous; the per-branch Newton path is much
- * cheaper. A real pole with Im λ = 0 is returned once per real root.
+ * cheaper. A real pole with Im λ = 0 is returned once per real root. A state matrix with an entry that is not
+ * finite or exceeds ±MAX_STATE_ENTRY throws a RangeError before the QR iteration (which has no cap of its own).
  * @param mass M (n×n)
  * @param massInverse M⁻¹ (n×n)
  * @param work workspace with the assembled C (`dampTot`) and K (`stiffTot`)
  * @returns poles sorted by nothing in particular (the caller assigns them)
  */
+/** Largest |entry| of the state matrix handed to the QR algorithm (see `allPoles`). */
+export const MAX_STATE_ENTRY = 1e150;
+
 export function allPoles(mass: Float64Array, massInverse: Float64Array, work: PoleWorkspace): Pole[] {
   const n = work.n;
   const a = Matrix.zeros(2 * n, 2 * n);
@@ -31,6 +35,19 @@ export function allPoles(mass: Float64Array, massInverse: Float64Array, work: Po
       }
       a.set(n + i, j, -mk);
       a.set(n + i, n + j, -mc);
+    }
+  }
+  // ml-matrix's shifted QR (hqr2) has no iteration cap: a NaN or an entry near overflow makes it loop forever.
+  // Physical inputs stay many orders of magnitude below this bound.
+  for (let i = 0; i < 2 * n; i++) {
+    for (let j = 0; j < 2 * n; j++) {
+      const x = a.get(i, j);
+      if (!(Math.abs(x) <= MAX_STATE_ENTRY)) {
+        throw new RangeError(
+          `the state matrix has an entry of ${x} (row ${i + 1}, column ${j + 1}); entries must be finite and within ±${MAX_STATE_ENTRY}: ` +
+            "mass, inertia, width, frequencies or aerodynamic coefficients are outside any physical range",
+        );
+      }
     }
   }
   const evd = new EigenvalueDecomposition(a, { assumeSymmetric: false });

@@ -17,6 +17,9 @@ import type { Pole } from "./refine-pole";
  * @param prev each branch's previous pole, or null at the start
  * @returns the candidate index assigned to each branch
  */
+/** Above every finite cost (1 − MAC ≤ 1, distance term ≤ 1). */
+const WORST_COST = 3;
+
 export function assignPoles(n: number, mass: Float64Array, refs: Pole[], pred: Pole[], poles: Pole[], prev: Pole[] | null): Int32Array {
   const b = refs.length;
   const m = poles.length;
@@ -28,7 +31,9 @@ export function assignPoles(n: number, mass: Float64Array, refs: Pole[], pred: P
     for (let c = 0; c < m; c++) {
       const mac = modalAssurance(n, mass, refs[i].vecRe, refs[i].vecIm, poles[c].vecRe, poles[c].vecIm);
       const dist = Math.hypot(poles[c].re - pred[i].re, poles[c].im - pred[i].im) / scale;
-      cost[i * m + c] = 1 - mac + Math.min(1, dist);
+      const c_ic = 1 - mac + Math.min(1, dist);
+      // A pole or shape that overflowed to NaN (absurd inputs) is the worst possible match, never a hang.
+      cost[i * m + c] = Number.isFinite(c_ic) ? c_ic : WORST_COST;
     }
   }
   return optimalAssignment(cost, b, m);

@@ -3,7 +3,8 @@
  *
  * Method: the Hungarian method with row/column potentials and shortest augmenting paths, O(n²m) (Kuhn 1955,
  * Naval Research Logistics Quarterly 2; Jonker & Volgenant 1987, Computing 38 — the classical e-maxx form).
- * Notes: costs must be finite. Unlike a greedy pairing, the total is optimal, so one poor pair cannot steal a
+ * Notes: costs must be finite (a NaN or infinite cost throws a RangeError: with one, the augmenting-path search
+ * would find no column and never end). Each row's search visits at most m columns, which bounds the work. Unlike a greedy pairing, the total is optimal, so one poor pair cannot steal a
  * column that another row needs more.
  * @param cost cost[r*m + c], row-major n×m
  * @param n rows (branches)
@@ -12,6 +13,11 @@
  */
 export function optimalAssignment(cost: Float64Array, n: number, m: number): Int32Array {
   if (m < n) throw new Error(`optimalAssignment: need at least as many columns (${m}) as rows (${n})`);
+  for (let k = 0; k < n * m; k++) {
+    if (!Number.isFinite(cost[k])) {
+      throw new RangeError(`optimalAssignment: cost of row ${Math.floor(k / m)}, column ${k % m} is ${cost[k]}, not a finite number`);
+    }
+  }
   if (n === 2 && m === 2) {
     // the two possible assignments, compared directly (the tracker's 2-mode hot path)
     return cost[0] + cost[3] <= cost[1] + cost[2] ? Int32Array.of(0, 1) : Int32Array.of(1, 0);
@@ -27,7 +33,9 @@ export function optimalAssignment(cost: Float64Array, n: number, m: number): Int
     let j0 = 0;
     minv.fill(Number.POSITIVE_INFINITY);
     used.fill(0);
+    let visits = 0;
     do {
+      if (++visits > m + 1) throw new RangeError("optimalAssignment: no augmenting path (costs out of range)");
       used[j0] = 1;
       const i0 = p[j0];
       let delta = Number.POSITIVE_INFINITY;
@@ -52,6 +60,7 @@ export function optimalAssignment(cost: Float64Array, n: number, m: number): Int
           minv[j] -= delta;
         }
       }
+      if (j1 === 0) throw new RangeError("optimalAssignment: no augmenting path (costs out of range)");
       j0 = j1;
     } while (p[j0] !== 0);
     do {
