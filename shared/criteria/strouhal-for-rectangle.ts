@@ -43,7 +43,8 @@ export function strouhalForRectangle(alongToCrossRatio: number): StrouhalLookup 
     return {
       value: null,
       source: SOURCES.strouhalTable,
-      note: `d/b = ${alongToCrossRatio} lies outside the table (${first} to ${last}): enter a measured Strouhal number.`,
+      // Three significant figures are plenty for a ratio read against a table (10.685714… reads 10.7).
+      note: `d/b = ${Number(alongToCrossRatio.toPrecision(3))} lies outside the table (${first} to ${last}): enter a measured Strouhal number.`,
     };
   }
   for (let i = 1; i < points.length; i++) {

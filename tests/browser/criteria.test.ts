@@ -324,6 +324,38 @@ describe("design wind and criteria on the project page", () => {
       .toBe(gallopingByHand >= requiredGalloping ? "pass" : "fail");
     await analyst.screenshot("criteria-workspace-screening");
     await screeningRegion.screenshot({ path: path.join(artifactsDir, "criteria-workspace-screening-table.png") });
+
+    // On a phone the wide tables scroll sideways inside their panels; the page itself does not.
+    await page.setViewportSize({ width: 390, height: 844 });
+    for (const id of ["margins-table", "vortex-table"]) {
+      const table = page.getByTestId(id);
+      await table.scrollIntoViewIfNeeded();
+      const fit = await table.evaluate((el) => {
+        const box = el.parentElement!.getBoundingClientRect();
+        return { right: box.right, viewport: window.innerWidth, scrolls: el.parentElement!.scrollWidth > el.parentElement!.clientWidth };
+      });
+      expect(fit.right, id).toBeLessThanOrEqual(fit.viewport);
+      expect(fit.scrolls, id).toBe(true);
+    }
+    // Elements that reach past the screen's edge without a scrolling container to hold them (named, to fix).
+    const sticking = await page.evaluate(() => {
+      const clipped = (el: Element) => {
+        for (let a = el.parentElement; a && a !== document.body; a = a.parentElement) {
+          const o = getComputedStyle(a).overflowX;
+          if (o === "auto" || o === "scroll" || o === "hidden" || o === "clip") return true;
+        }
+        return false;
+      };
+      return [...document.body.querySelectorAll("*")]
+        .filter((el) => el.getBoundingClientRect().right > window.innerWidth + 0.5 && !clipped(el))
+        .map((el) => `${el.tagName.toLowerCase()}.${String(el.className).slice(0, 60)} "${(el.textContent ?? "").slice(0, 40)}"`)
+        .slice(0, 8);
+    });
+    expect(sticking).toEqual([]);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await analyst.screenshot("criteria-workspace-phone");
+    await page.setViewportSize({ width: 1280, height: 800 });
   });
 
   it("the visits logged no uncaught error and no console error or warning", () => {

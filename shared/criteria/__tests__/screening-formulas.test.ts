@@ -43,6 +43,8 @@ describe("vortex shedding (EN 1991-1-4:2005 Annex E.1.3.1 and E.1.3.3)", () => {
     expect(strouhalForRectangle(7.5).value).toBeCloseTo(0.1, 12); // midway between (5, 0.11) and (10, 0.09)
     expect(strouhalForRectangle(12).value).toBeNull();
     expect(strouhalForRectangle(12).note).toMatch(/outside the table/);
+    // The ratio is printed rounded to three significant figures, not with every digit of B/D.
+    expect(strouhalForRectangle(37.4 / 3.5).note).toMatch(/^d\/b = 10\.7 lies outside the table/);
     expect(strouhalForRectangle(5).source).toMatch(/from memory/);
   });
 });

@@ -39,7 +39,7 @@ export function CriteriaHistory({ projectId }: { projectId: string }) {
   }
   if (history.data.length === 0) return <p className="text-sm text-ink-600">No version saved yet.</p>;
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-sm">
         <caption className="sr-only">Saved versions of the design wind and criteria, newest first</caption>
         <thead>

@@ -83,7 +83,7 @@ export function DesignWindDerivation({ wind, className, live = false }: { wind: 
           {fixed(wind.probabilityFactor, 4)} × {sig(wind.basicSpeedMps)} m/s · {EN} §4.3.1, Expr. (4.3)
         </p>
       </div>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Factors of the design mean wind at deck level</caption>
           <thead>

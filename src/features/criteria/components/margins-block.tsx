@@ -14,8 +14,9 @@ import { fixed } from "@/features/criteria/utils/format";
  * for the vortex-shedding onset, not evaluated with the reason. Only a failed stability check takes the failure colour.
  */
 export function MarginsTable({ margins, className }: { margins: Margins; className?: string }) {
+  // relative: the caption's sr-only (absolute) text stays inside the scroller instead of widening the page.
   return (
-    <div className={cn("overflow-x-auto", className)}>
+    <div className={cn("relative overflow-x-auto", className)}>
       <table className="w-full text-sm" data-testid="margins-table">
         <caption className="sr-only">Margins: critical speed over required speed per phenomenon</caption>
         <thead>

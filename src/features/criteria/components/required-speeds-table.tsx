@@ -7,7 +7,7 @@ import { fixed, sig } from "@/features/criteria/utils/format";
 /** The speed each critical speed must reach: factor × gust × angle × v_m, with the basis of every factor. */
 export function RequiredSpeedsTable({ required, meanSpeedMps }: { required: RequiredSpeeds; meanSpeedMps: number }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-sm">
         <caption className="sr-only">Required speeds per phenomenon</caption>
         <thead>

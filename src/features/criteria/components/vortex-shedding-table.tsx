@@ -33,7 +33,8 @@ export function VortexSheddingTable({ vortex }: { vortex: ScreeningResult["vorte
         ) : null}
         .
       </p>
-      <div className="overflow-x-auto">
+      {/* relative: the caption's sr-only (absolute) text stays inside the scroller instead of widening the page */}
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm" data-testid="vortex-table">
           <caption className="sr-only">Vortex-shedding screening per mode</caption>
           <thead>

@@ -61,7 +61,7 @@ export function DerivativeTable({ rows, errors, readOnly, onChange }: Derivative
   };
 
   return (
-    <div className="overflow-x-auto rounded-md border border-ink-200">
+    <div className="relative overflow-x-auto rounded-md border border-ink-200">
       <table className="w-full border-collapse text-sm" aria-describedby={`${tableId}-help`}>
         <caption id={`${tableId}-help`} className="sr-only">
           Flutter derivatives by reduced velocity Ur = U/(fB), study convention. Enter moves down a row; paste a

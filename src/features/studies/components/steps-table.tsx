@@ -31,7 +31,7 @@ export function StepsTable({ result, fileName }: { result: SweepResult; fileName
         </Button>
       </div>
       {/* On a narrow screen the columns scroll sideways together instead of widening the page. */}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <div role="table" aria-label="Sweep steps" aria-rowcount={rows.length + 1} className="min-w-[46rem] text-sm">
           <div role="rowgroup">
             <div role="row" className={cn("grid border-y border-ink-200 bg-ink-50 px-4 text-xs font-semibold text-ink-700", COLUMNS)}>
