@@ -2,7 +2,7 @@ import type { StudyDocument } from "../schemas/study";
 import type { FlutterPoint, SweepResult, SweepWarning } from "../schemas/result";
 import { createAeroModel } from "./aero/create-aero-model";
 import { kineticParticipation } from "./core/participation";
-import { locateFlutter, locateStaticCrossing } from "./core/locate-critical";
+import { locateFlutter, locateStaticCrossings } from "./core/locate-critical";
 import { trackPoles, type TrackedStep } from "./core/track-poles";
 import { divergenceSpeed } from "./divergence-speed";
 import { sectionSystem } from "./section-system";
@@ -28,7 +28,7 @@ const COUPLED_PARTICIPATION = 0.1;
  * Method: the study is mapped onto the n-mode core (`sectionSystem`, domain guide §1 matrix form) with the
  * aerodynamic model of `createAeroModel`; `trackPoles` solves and tracks every branch over the grid (with local
  * refinement), `locateFlutter` finds the lowest zero-damping crossing over all oscillatory branches to 1e-4 m/s
- * (Brent), `locateStaticCrossing` a real root crossing zero (static instability); divergence from its closed
+ * (Brent), `locateStaticCrossings` the real roots crossing zero (static instability, one warning, lowest first); divergence from its closed
  * form (`divergenceSpeed`) and Selberg's estimate (`selbergSpeed`) complete the result.
  * Notes: deterministic (no randomness, no clocks); results are indicative — critical cases need wind-tunnel
  * verification and review by a licensed engineer under local codes and standards.
@@ -88,7 +88,7 @@ export function runSweep(study: StudyDocument, options: SweepOptions = {}): Swee
     track,
     ids,
     flutter: critical,
-    staticCrossing: locateStaticCrossing(system, track),
+    staticCrossings: locateStaticCrossings(system, track),
     quasiSteady: aero.kind === "quasi-steady",
   });
   return {

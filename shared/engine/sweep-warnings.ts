@@ -7,7 +7,8 @@ export interface WarningInputs {
   /** Structural mode ids in branch order. */
   readonly ids: readonly string[];
   readonly flutter: CriticalPoint | null;
-  readonly staticCrossing: CriticalPoint | null;
+  /** Physical static crossings, lowest first (`locateStaticCrossings`). */
+  readonly staticCrossings: readonly CriticalPoint[];
   readonly quasiSteady: boolean;
 }
 
@@ -15,7 +16,7 @@ const fmt = (speed: number) => `${Number(speed.toFixed(3))} m/s`;
 
 /**
  * The warnings of a sweep result, in a fixed order: unstable-at-start, quasi-steady-flutter,
- * static-instability, extrapolated-derivatives (one per contiguous speed range, `speeds` = [first, last]),
+ * static-instability (one warning for every physical static crossing, lowest first in `speeds`), extrapolated-derivatives (one per contiguous speed range, `speeds` = [first, last]),
  * tracking-ambiguous, no-convergence.
  *
  * Method: read off the tracked branches and the critical points; a speed range is extrapolated when any
@@ -23,7 +24,7 @@ const fmt = (speed: number) => `${Number(speed.toFixed(3))} m/s`;
  * @returns warnings with plain messages (the UI explains each code)
  */
 export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
-  const { track, ids, flutter, staticCrossing } = inputs;
+  const { track, ids, flutter, staticCrossings } = inputs;
   const warnings: SweepWarning[] = [];
   if (flutter?.atStart) {
     warnings.push({
@@ -40,11 +41,17 @@ export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
       speeds: [flutter.speedMps],
     });
   }
-  if (staticCrossing) {
+  if (staticCrossings.length > 0) {
+    const first = staticCrossings[0];
+    const where = (c: CriticalPoint) => `${c.atStart ? "at or below " : ""}${fmt(c.speedMps)} on the branch that started as mode ${ids[c.branch]}`;
+    const more = staticCrossings.slice(1);
     warnings.push({
       code: "static-instability",
-      message: `A real pole of branch ${ids[staticCrossing.branch]} crosses zero at ${fmt(staticCrossing.speedMps)}: static (divergence-type) instability in the sweep, with every aerodynamic term included.`,
-      speeds: [staticCrossing.speedMps],
+      message:
+        `Static (divergence-type) instability from ${where(first)}: a real pole crosses zero there, with every aerodynamic ` +
+        "term of the static balance included (H3*, H4*, A4* as well as A3*), so it can differ from the closed-form divergence speed." +
+        (more.length > 0 ? ` Further real poles cross zero at ${more.map(where).join(", ")}; the lowest speed governs.` : ""),
+      speeds: staticCrossings.map((c) => c.speedMps),
     });
   }
   const steps = track.branches[0];

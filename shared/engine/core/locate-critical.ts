@@ -39,16 +39,32 @@ export function locateFlutter(system: ModalSystem, track: TrackResult): Critical
   return lowest(system, track, (s) => s.im > 0, damping, (s) => damping(s) < -DAMPING_TOLERANCE);
 }
 
+/** Crossings closer than this (m/s) are one physical crossing seen on two branches. */
+const SAME_CROSSING_MPS = 1e-3;
+
 /**
- * Lowest speed at which a static (real) pole of a tracked branch crosses zero: static instability
+ * Every physical zero crossing of a static (real) pole in the sweep, lowest first: static instability
  * (divergence as the sweep sees it, with every aerodynamic coupling term included).
  *
- * Method: as `locateFlutter`, on branches whose poles are real at both bracket ends, with Brent's method on
- * the real root λ(U) itself.
- * @returns the critical point, or null when no real pole crosses zero
+ * Method: each branch's first step pair with real poles at both ends and λ ≤ 0 then λ > 0 is narrowed by
+ * Brent's method on the real root λ(U) itself (tolerance 1e-4 m/s), as in `locateFlutter`. A branch only
+ * counts its first crossing (beyond it the system is already statically unstable); crossings of two branches
+ * within 1e-3 m/s are one physical crossing and are listed once (the branch first in order).
+ * @returns the crossings sorted by speed (empty when no real pole crosses zero)
  */
+export function locateStaticCrossings(system: ModalSystem, track: TrackResult): CriticalPoint[] {
+  const found = firstCrossings(system, track, (s) => s.im === 0, (s) => -s.re, (s) => s.re > 0, false);
+  found.sort((a, b) => a.speedMps - b.speedMps || a.branch - b.branch);
+  const distinct: CriticalPoint[] = [];
+  for (const c of found) {
+    if (distinct.length === 0 || c.speedMps - distinct[distinct.length - 1].speedMps > SAME_CROSSING_MPS) distinct.push(c);
+  }
+  return distinct;
+}
+
+/** The lowest of `locateStaticCrossings`, or null. */
 export function locateStaticCrossing(system: ModalSystem, track: TrackResult): CriticalPoint | null {
-  return lowest(system, track, (s) => s.im === 0, (s) => -s.re, (s) => s.re > 0);
+  return locateStaticCrossings(system, track)[0] ?? null;
 }
 
 function lowest(
@@ -58,19 +74,41 @@ function lowest(
   margin: (s: TrackedStep) => number,
   unstable: (s: TrackedStep) => boolean,
 ): CriticalPoint | null {
+  const found = firstCrossings(system, track, eligible, margin, unstable, true);
+  return found.length === 0 ? null : found.reduce((a, b) => (b.speedMps < a.speedMps ? b : a));
+}
+
+/**
+ * Each branch's first crossing (margin > 0 → unstable). With `pruneAbove`, a branch's scan stops at the lowest
+ * speed found so far on earlier branches (enough for the minimum; the result then holds a candidate list whose
+ * minimum is the lowest crossing).
+ */
+function firstCrossings(
+  system: ModalSystem,
+  track: TrackResult,
+  eligible: (s: TrackedStep) => boolean,
+  margin: (s: TrackedStep) => number,
+  unstable: (s: TrackedStep) => boolean,
+  pruneAbove: boolean,
+): CriticalPoint[] {
+  const found: CriticalPoint[] = [];
   let best: CriticalPoint | null = null;
   const work = createPoleWorkspace(system.size);
   const outcome = createPkOutcome(system.size);
+  const keep = (c: CriticalPoint) => {
+    found.push(c);
+    if (!best || c.speedMps < best.speedMps) best = c;
+  };
   track.branches.forEach((steps, branch) => {
-    if (steps.length === 0 || (best && steps[0].speedMps >= best.speedMps)) return;
+    if (steps.length === 0 || (pruneAbove && best && steps[0].speedMps >= best.speedMps)) return;
     if (eligible(steps[0]) && unstable(steps[0])) {
-      best = { branch, speedMps: steps[0].speedMps, step: steps[0], atStart: true };
+      keep({ branch, speedMps: steps[0].speedMps, step: steps[0], atStart: true });
       return;
     }
     for (let k = 0; k + 1 < steps.length; k++) {
       const a = steps[k];
       const b = steps[k + 1];
-      if (best && a.speedMps >= best.speedMps) return;
+      if (pruneAbove && best && a.speedMps >= best.speedMps) return;
       if (!eligible(a) || !eligible(b) || unstable(a) || !unstable(b)) continue;
       let last: TrackedStep = b;
       const f = (speed: number) => {
@@ -79,11 +117,11 @@ function lowest(
       };
       const speed = brentRoot(f, a.speedMps, b.speedMps, margin(a), margin(b), CRITICAL_SPEED_TOLERANCE);
       if (last.speedMps !== speed) last = solveAt(system, work, outcome, a, b, speed);
-      best = { branch, speedMps: speed, step: last, atStart: false };
+      keep({ branch, speedMps: speed, step: last, atStart: false });
       return;
     }
   });
-  return best;
+  return found;
 }
 
 function solveAt(
