@@ -3,21 +3,24 @@
  * Identifiers travel as decimal strings, times as ISO 8601. Lengths in metres.
  */
 import { z } from "zod";
+import { DECK_DEPTH_LIMITS_M, DECK_WIDTH_LIMITS_M } from "./study";
 
 const text = (max: number) => z.string().trim().max(max, `must have at most ${max} characters`);
-const lengthM = (description: string) =>
+/** A length within the study format's limits for the same quantity, so a study started from the alternative is valid. */
+const lengthM = (description: string, limits: { readonly min: number; readonly max: number }) =>
   z
     .number({ error: "must be a number" })
     .positive("must be greater than 0")
-    .max(1000, "must be at most 1000")
+    .refine((v) => !(v > 0 && v < limits.min), `must be at least ${limits.min} m`)
+    .refine((v) => !(v > limits.max), `must be at most ${limits.max} m`)
     .describe(description);
 
 /** POST /api/projects/:projectId/alternatives (analysts). */
 export const createAlternativeSchema = z.strictObject({
   name: text(200).min(1, "must not be blank"),
   description: text(5000).default(""),
-  deckWidthM: lengthM("Deck width B, m (pre-fills new studies; each study document keeps its own)"),
-  deckDepthM: lengthM("Deck depth D, m"),
+  deckWidthM: lengthM("Deck width B, m (pre-fills new studies; each study document keeps its own)", DECK_WIDTH_LIMITS_M),
+  deckDepthM: lengthM("Deck depth D, m", DECK_DEPTH_LIMITS_M),
 });
 export type CreateAlternativeInput = z.input<typeof createAlternativeSchema>;
 export type CreateAlternative = z.infer<typeof createAlternativeSchema>;
@@ -27,8 +30,8 @@ export const patchAlternativeSchema = z
   .strictObject({
     name: text(200).min(1, "must not be blank"),
     description: text(5000),
-    deckWidthM: lengthM("Deck width B, m"),
-    deckDepthM: lengthM("Deck depth D, m"),
+    deckWidthM: lengthM("Deck width B, m", DECK_WIDTH_LIMITS_M),
+    deckDepthM: lengthM("Deck depth D, m", DECK_DEPTH_LIMITS_M),
   })
   .partial()
   .refine((p) => Object.keys(p).length > 0, "give at least one of name, description, deckWidthM, deckDepthM");

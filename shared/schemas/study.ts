@@ -10,6 +10,10 @@
 import { z } from "zod";
 
 export const STUDY_FORMAT = "stillspan.study/1";
+/** Limits of the deck width B and depth D, m — shared with a deck alternative's B and D (shared/schemas/alternatives.ts). */
+export const DECK_WIDTH_LIMITS_M = { min: 0.01, max: 1000 } as const;
+export const DECK_DEPTH_LIMITS_M = { min: 0.001, max: 1000 } as const;
+
 /** Largest number of sweep intervals ((to − from) / step) a study may ask for. */
 export const MAX_SWEEP_STEPS = 20_000;
 
@@ -196,8 +200,8 @@ export const studyDocumentSchema = object({
     .describe("Name of the study, e.g. the deck alternative and revision"),
   air: object({ density: bounded("Air density, kg/m³ (0 = still-air check)", 0, 5, " kg/m³") }),
   deck: object({
-    width: bounded("Deck width B (the reference length of the derivatives), m", 0.01, 1000, " m"),
-    depth: bounded("Deck depth, m", 0.001, 1000, " m"), // the same limit as a deck alternative's D
+    width: bounded("Deck width B (the reference length of the derivatives), m", DECK_WIDTH_LIMITS_M.min, DECK_WIDTH_LIMITS_M.max, " m"),
+    depth: bounded("Deck depth, m", DECK_DEPTH_LIMITS_M.min, DECK_DEPTH_LIMITS_M.max, " m"),
   }),
   structure: structureSchema,
   aerodynamics: studyAerodynamicsSchema,
