@@ -41,7 +41,8 @@ export function demoReviewerStatement(margins: readonly SummaryMargin[]): string
   const open = margins.filter((m) => m.status === "investigate" || m.status === "undetermined");
   const parts = [REVIEW_SCOPE];
   if (adequate.length > 0) {
-    parts.push(`Margin adequate for ${adequate.map((m) => `${LABEL[m.phenomenon]} (${ratio(m)})`).join(" and ")}.`);
+    const met = adequate.map((m) => `${LABEL[m.phenomenon]} (margin ${ratio(m)})`).join(" and ");
+    parts.push(`Required speed met for ${met}.`);
   }
   for (const m of failed) {
     const value = m.margin !== null ? ` is ${ratio(m)}` : " is not met";
