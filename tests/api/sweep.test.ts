@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { benchmarkDeck as benchmarkDeckInputs } from "../../shared/engine/__tests__/support/benchmark-deck.js";
 import { runSweep } from "../../shared/engine/run-sweep.js";
+import { ENGINE_VERSION } from "../../shared/engine/version.js";
 import { sweepResultSchema } from "../../shared/schemas/result.js";
 import { parseStudy } from "../../shared/schemas/study.js";
 import { createProjectWithMembers, openTestDb } from "../support/db.js";
@@ -38,7 +39,7 @@ describe("POST /api/sweep", () => {
       expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3);
       expect(result.modes.map((m) => m.id)).toEqual(["V1", "T1"]);
       expect(result.modes[0].steps).toHaveLength(91);
-      expect(result.engine).toBe("1.0.0");
+      expect(result.engine).toBe(ENGINE_VERSION);
     },
   );
 
