@@ -2,6 +2,7 @@ import { useId, useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { ApiError } from "@/lib/api-client";
 import { useCreateAlternative } from "@/features/studies/api/create-alternative";
+import { DECK_DEPTH_LIMITS_M, DECK_WIDTH_LIMITS_M } from "@shared/schemas/study";
 
 /** The form's own names for the API's fields, so a refusal names the field the analyst sees. */
 const FIELD_NAMES: Record<string, string> = {
@@ -45,11 +46,11 @@ export function NewAlternativeForm({ projectId }: { projectId: string }) {
         </div>
         <div className="space-y-0.5">
           <label htmlFor={`${id}-width`} className="block text-xs font-semibold text-ink-700">Deck width B (m)</label>
-          <input id={`${id}-width`} name="width" type="number" required min="0" step="any" className={input} />
+          <input id={`${id}-width`} name="width" type="number" required min={DECK_WIDTH_LIMITS_M.min} max={DECK_WIDTH_LIMITS_M.max} step="any" className={input} />
         </div>
         <div className="space-y-0.5">
           <label htmlFor={`${id}-depth`} className="block text-xs font-semibold text-ink-700">Deck depth D (m)</label>
-          <input id={`${id}-depth`} name="depth" type="number" required min="0" step="any" className={input} />
+          <input id={`${id}-depth`} name="depth" type="number" required min={DECK_DEPTH_LIMITS_M.min} max={DECK_DEPTH_LIMITS_M.max} step="any" className={input} />
         </div>
       </div>
       <div className="space-y-0.5">
