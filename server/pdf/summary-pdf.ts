@@ -246,8 +246,10 @@ function writeProvenance(w: PdfWriter, s: SummaryPayload): void {
 function writeWarnings(w: PdfWriter, s: SummaryPayload): void {
   w.heading("Warnings");
   if (s.warnings.length === 0) w.paragraph("The computation raised no warning.");
-  // The plain sentence the workspace shows; the engine's own message only for a code this build does not know.
-  for (const warning of s.warnings) w.bullet(explainWarningCode(warning.code) ?? warning.message, COLORS.signal);
+  // The plain sentence the workspace shows, once per kind (the engine may raise one kind at several speed ranges);
+  // the engine's own message only for a code this build does not know.
+  const sentences = new Set(s.warnings.map((warning) => explainWarningCode(warning.code) ?? warning.message));
+  for (const sentence of sentences) w.bullet(sentence, COLORS.signal);
 }
 
 function writeSignature(w: PdfWriter, input: SummaryPdfInput, code: string): void {

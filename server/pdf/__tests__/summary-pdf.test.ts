@@ -84,6 +84,16 @@ describe("renderSummaryPdf", () => {
     expect(text).toContain("2026-12-01 09:30 UTC");
   });
 
+  it("prints each kind of warning's sentence once, even when the engine raised it at two speed ranges", async () => {
+    const summary = inventedSummary();
+    summary.warnings = [
+      { code: "extrapolated-derivatives", message: "Derivatives extrapolated below the tested range at 1–15 m/s." },
+      { code: "extrapolated-derivatives", message: "Derivatives extrapolated above the tested range at 76–120 m/s." },
+    ];
+    const twice = squash((await pdfText(await renderSummaryPdf({ summary, jws, branches: [] }))).text);
+    expect(twice.split(squash(explainWarningCode("extrapolated-derivatives")!))).toHaveLength(2);
+  });
+
   it("prints the whole JWS and its verification code", () => {
     // The JWS runs over a page break: drop the page footers ("Stillspan · … page n of m") before looking.
     const withoutFooters = squash(text).replace(/Stillspan·Inventedcrossing.*?page\d+of\d+/g, "");
