@@ -5,6 +5,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
+import { stopProcessGroup } from "./lib/stop-process-group.js";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 const bin = (name: string) => path.join(root, "node_modules", ".bin", name);
@@ -25,32 +26,9 @@ function start(name: string, cmd: string, args: string[], env: NodeJS.ProcessEnv
 let stopping = false;
 const children: ChildProcess[] = [];
 
-function stop(child: ChildProcess): Promise<void> {
-  if (!child.pid || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
-  return new Promise((resolve) => {
-    const force = setTimeout(() => {
-      try {
-        process.kill(-child.pid!, "SIGKILL");
-      } catch {
-        /* gone */
-      }
-    }, 5000);
-    child.once("exit", () => {
-      clearTimeout(force);
-      resolve();
-    });
-    try {
-      process.kill(-child.pid!, "SIGTERM");
-    } catch {
-      clearTimeout(force);
-      resolve();
-    }
-  });
-}
-
 async function stopAll(code: number): Promise<never> {
   stopping = true;
-  await Promise.all(children.map(stop));
+  await Promise.all(children.map((child) => stopProcessGroup(child)));
   process.exit(code);
 }
 

@@ -24,6 +24,7 @@ import { createDatabase, dropDatabase, ensureLocalPostgres } from "../server/db/
 import { seedDemo } from "../server/db/seed.js";
 import { logger } from "../server/logger.js";
 import { ensureSigningKey } from "../server/services/signing.js";
+import { stopProcessGroup } from "./lib/stop-process-group.js";
 
 // One database per run (dropped afterwards), so two runs on one machine never reset each other's data.
 const TEST_DB = process.env.STILLSPAN_TEST_DB ?? `stillspan_test_${process.pid}`;
@@ -62,29 +63,6 @@ async function waitForHealth(baseUrl: string, child: ChildProcess, timeoutMs: nu
     await new Promise((r) => setTimeout(r, 200));
   }
   throw new Error(`the app did not answer ${baseUrl}/api/health within ${timeoutMs / 1000} s`);
-}
-
-function stopGroup(child: ChildProcess | undefined): Promise<void> {
-  if (!child?.pid || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
-  return new Promise((resolve) => {
-    const force = setTimeout(() => {
-      try {
-        process.kill(-child.pid!, "SIGKILL");
-      } catch {
-        /* already gone */
-      }
-    }, 5000);
-    child.once("exit", () => {
-      clearTimeout(force);
-      resolve();
-    });
-    try {
-      process.kill(-child.pid!, "SIGTERM");
-    } catch {
-      clearTimeout(force);
-      resolve();
-    }
-  });
 }
 
 async function prepareDatabase(): Promise<{ testUrl: string; maintenanceUrl: string }> {
@@ -161,7 +139,7 @@ async function main(): Promise<number> {
   app.stdout!.pipe(out);
   app.stderr!.pipe(out);
 
-  const stop = () => void stopGroup(app).then(() => process.exit(130));
+  const stop = () => void stopProcessGroup(app).then(() => process.exit(130));
   process.once("SIGINT", stop);
   process.once("SIGTERM", stop);
   try {
@@ -187,7 +165,7 @@ async function main(): Promise<number> {
     step(`vitest finished (exit ${vitest.status ?? vitest.signal})`);
     return vitest.status ?? 1;
   } finally {
-    await stopGroup(app);
+    await stopProcessGroup(app);
     rmSync(clientDir, { recursive: true, force: true });
     if (!process.env.STILLSPAN_TEST_DB) await dropDatabase(maintenanceUrl, TEST_DB).catch(() => undefined);
   }
