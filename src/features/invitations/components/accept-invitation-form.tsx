@@ -1,8 +1,8 @@
 import { useState } from "react";
 import { Link } from "react-router-dom";
-import { PASSWORD_MIN_LENGTH } from "@shared/schemas/invitations";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { NewPasswordFields, newPasswordProblem } from "@/components/ui/new-password-fields";
 import { paths } from "@/config/paths";
 import { useAcceptInvitation } from "@/features/invitations/api/accept-invitation";
 
@@ -36,21 +36,13 @@ export function AcceptInvitationForm({ token }: { token: string }) {
         e.preventDefault();
         setProblem(null);
         if (!name.trim()) return setProblem("Enter your name as colleagues should see it.");
-        if (password.length < PASSWORD_MIN_LENGTH) return setProblem(`Choose a password of at least ${PASSWORD_MIN_LENGTH} characters.`);
-        if (password !== repeat) return setProblem("The two passwords differ.");
+        const passwordProblem = newPasswordProblem(password, repeat);
+        if (passwordProblem) return setProblem(passwordProblem);
         accept.mutate({ token, name, password }, { onError: (err) => setProblem(err.message) });
       }}
     >
       <Field label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} />
-      <Field
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
-        value={password}
-        onChange={(e) => setPassword(e.target.value)}
-      />
-      <Field label="Password again" type="password" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} />
+      <NewPasswordFields label="Password" password={password} repeat={repeat} onPasswordChange={setPassword} onRepeatChange={setRepeat} />
       {problem ? (
         <p role="alert" className="text-sm font-semibold text-signal-700">
           {problem}

@@ -1,8 +1,8 @@
 import { useState } from "react";
 import { Link } from "react-router-dom";
-import { PASSWORD_MIN_LENGTH } from "@shared/schemas/invitations";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { NewPasswordFields, newPasswordProblem } from "@/components/ui/new-password-fields";
 import { paths } from "@/config/paths";
 import { useConfirmPasswordReset } from "@/features/password-reset/api/confirm-password-reset";
 import { useRequestPasswordReset } from "@/features/password-reset/api/request-password-reset";
@@ -62,20 +62,12 @@ export function ChooseNewPasswordForm({ token }: { token: string }) {
       onSubmit={(e) => {
         e.preventDefault();
         setProblem(null);
-        if (password.length < PASSWORD_MIN_LENGTH) return setProblem(`Choose a password of at least ${PASSWORD_MIN_LENGTH} characters.`);
-        if (password !== repeat) return setProblem("The two passwords differ.");
+        const passwordProblem = newPasswordProblem(password, repeat);
+        if (passwordProblem) return setProblem(passwordProblem);
         confirm.mutate({ token, password }, { onError: (err) => setProblem(err.message) });
       }}
     >
-      <Field
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
-        value={password}
-        onChange={(e) => setPassword(e.target.value)}
-      />
-      <Field label="New password again" type="password" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} />
+      <NewPasswordFields label="New password" password={password} repeat={repeat} onPasswordChange={setPassword} onRepeatChange={setRepeat} />
       {problem ? (
         <p role="alert" className="text-sm font-semibold text-signal-700">
           {problem}
