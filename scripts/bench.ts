@@ -15,6 +15,7 @@ import { trackPoles } from "../shared/engine/core/track-poles";
 import { generalizedSystem, type GeneralizedModeInput } from "../shared/engine/generalized";
 import { runSweep } from "../shared/engine/run-sweep";
 import { sweepGrid } from "../shared/engine/sweep-grid";
+import { benchmarkDeck } from "../shared/engine/__tests__/support/benchmark-deck";
 import type { StudyDocument } from "../shared/schemas/study";
 
 interface BenchCase {
@@ -25,22 +26,7 @@ interface BenchCase {
 }
 
 /** Benchmark deck of the domain guide §5 (IABSE TG 3.1 inputs), flat plate, 1–150 m/s at 0.25 m/s. */
-const benchmarkDeck: StudyDocument = {
-  format: "stillspan.study/1",
-  name: "Benchmark deck (domain guide §5), flat plate",
-  air: { density: 1.22 },
-  deck: { width: 31, depth: 3 },
-  structure: {
-    mass: 22740,
-    inertia: 2.47e6,
-    modes: [
-      { id: "V1", dof: "heave", frequency: 0.1, damping: 0.003 },
-      { id: "T1", dof: "torsion", frequency: 0.278, damping: 0.003 },
-    ],
-  },
-  aerodynamics: { model: "flat-plate" },
-  sweep: { from: 1, to: 150, step: 0.25 },
-};
+const sectionDeck: StudyDocument = benchmarkDeck({ step: 0.25 });
 
 const grid = sweepGrid(1, 150, 0.25);
 
@@ -83,7 +69,7 @@ const cases: BenchCase[] = [
     name: "section-2dof",
     speeds: grid.length,
     run() {
-      const result = runSweep(benchmarkDeck);
+      const result = runSweep(sectionDeck);
       return { solvedSpeeds: result.modes[0].steps.length, modes: result.modes.length };
     },
   },
