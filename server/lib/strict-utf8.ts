@@ -3,16 +3,14 @@ import type { IncomingMessage, ServerResponse } from "node:http";
 import { decodeUtf8Strict, describeUtf8Error } from "../../shared/utf8.js";
 import { AppError } from "../errors.js";
 
-/** 400 `invalid_utf8` naming `what` and the first bad byte. */
-function invalidUtf8(what: string, bytes: Uint8Array): AppError {
+/** 400 `invalid_utf8` naming `what` (its `path` in the details: "(body)" or the field) and the first bad byte. */
+function invalidUtf8(what: string, path: string, bytes: Uint8Array): AppError {
   const decoded = decodeUtf8Strict(bytes);
   const where = decoded.ok ? "" : `: ${describeUtf8Error(decoded)}`;
-  return new AppError(
-    400,
-    "invalid_utf8",
-    `${what} is not valid UTF-8${where}. Send text as UTF-8; nothing was stored.`,
-    { details: decoded.ok ? undefined : [{ path: what, line: decoded.line, offset: decoded.offset }] },
-  );
+  const message = `is not valid UTF-8${where}`;
+  return new AppError(400, "invalid_utf8", `${what} ${message}. Send text as UTF-8; nothing was stored.`, {
+    details: [{ path, rule: "utf8", message, ...(decoded.ok ? {} : { line: decoded.line, offset: decoded.offset }) }],
+  });
 }
 
 /**
@@ -20,7 +18,7 @@ function invalidUtf8(what: string, bytes: Uint8Array): AppError {
  * decoded with U+FFFD in their place and stored (the study import already refused the same bytes in a file).
  */
 export function refuseInvalidUtf8Body(_req: IncomingMessage, _res: ServerResponse, body: Buffer): void {
-  if (!isUtf8(body)) throw invalidUtf8("The request body", body);
+  if (!isUtf8(body)) throw invalidUtf8("The request body", "(body)", body);
 }
 
 /**
@@ -31,7 +29,7 @@ export function refuseInvalidUtf8Body(_req: IncomingMessage, _res: ServerRespons
 export function decodeLatin1FieldsAsUtf8(fields: unknown, name = ""): unknown {
   if (typeof fields === "string") {
     const bytes = Buffer.from(fields, "latin1");
-    if (!isUtf8(bytes)) throw invalidUtf8(`The field "${name}"`, bytes);
+    if (!isUtf8(bytes)) throw invalidUtf8(`The field "${name}"`, name, bytes);
     return bytes.toString("utf8");
   }
   if (Array.isArray(fields)) return fields.map((v, i) => decodeLatin1FieldsAsUtf8(v, `${name}[${i}]`));

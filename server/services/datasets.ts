@@ -65,9 +65,12 @@ function loadDataset(db: DbOrTx, user: SessionUser, id: number, access: Access) 
 
 function invalidFile(fileName: string, issues: UploadIssue[]): AppError {
   const first = issues[0];
-  const where = [first.row !== undefined ? `line ${first.row}` : "", first.column ? `column ${first.column}` : ""].filter(Boolean).join(", ");
+  // A blank header cell's column is already named "column 3"; a message that ends with a period keeps one.
+  const column = first.column ? (/^column \d+$/.test(first.column) ? first.column : `column ${first.column}`) : "";
+  const where = [first.row !== undefined ? `line ${first.row}` : "", column].filter(Boolean).join(", ");
   const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : "";
-  return new AppError(400, "invalid_file", `${clipValue(fileName)}: ${where ? `${where}: ` : ""}${first.message}${more}. Nothing was stored.`, {
+  const message = first.message.replace(/\.$/, "");
+  return new AppError(400, "invalid_file", `${clipValue(fileName)}: ${where ? `${where}: ` : ""}${message}${more}. Nothing was stored.`, {
     details: issues,
   });
 }

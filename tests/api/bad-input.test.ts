@@ -31,6 +31,7 @@ describe("bytes that are not UTF-8", () => {
     const answer = await res.json();
     expect(res.status).toBe(400);
     expect(answer.error).toMatchObject({ code: "invalid_utf8", message: expect.stringMatching(/not valid UTF-8: byte 0xe9 at line 1/) });
+    expect(answer.error.details).toEqual([{ path: "(body)", rule: "utf8", message: "is not valid UTF-8: byte 0xe9 at line 1", line: 1, offset: 15 }]);
     const study = await api(base(), `/api/studies/${ws.studyId}`, { cookie: ws.cookie });
     expect(study.body.purpose).toBe("API test");
   });
@@ -59,6 +60,7 @@ describe("bytes that are not UTF-8", () => {
     ], { cookie: ws.cookie });
     expect(bad.status).toBe(400);
     expect(bad.body.error).toMatchObject({ code: "invalid_utf8", message: expect.stringMatching(/The field "changeNote" is not valid UTF-8: byte 0xe9/) });
+    expect(bad.body.error.details[0]).toMatchObject({ path: "changeNote", line: 1 });
     expect(await rowCounts(db)).toEqual(before);
 
     const name = "Windkanal Ærø — 1:60 🌉";
@@ -89,11 +91,18 @@ describe("CSV files that once crashed the reader or came back whole", () => {
     const before = await rowCounts(db);
     const res = await uploadCsv("long-k.csv", text);
     expect(res.status).toBe(400);
-    expect(res.body.error.code).toBe("invalid_file");
-    expect(res.body.error.details).toEqual([
-      { row: 10_002, message: "The file has 125000 data rows; at most 10000 are accepted (line 10002 is row 10001)." },
-    ]);
+    expect(res.body.error).toMatchObject({
+      code: "invalid_file",
+      message: "long-k.csv: line 10002: The file has 125000 data rows; at most 10000 are accepted (line 10002 is row 10001). Nothing was stored.",
+      details: [{ row: 10_002, message: "The file has 125000 data rows; at most 10000 are accepted (line 10002 is row 10001)." }],
+    });
     expect(await rowCounts(db)).toEqual(before);
+  });
+
+  it("a file of only commas (once a 500: the reader crashed) → 400 naming line 1, column 1", async () => {
+    const res = await uploadCsv("only-commas.csv", readFixture("bad-uploads/only-commas.csv"));
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toMatch(/^only-commas\.csv: line 1, column 1: the header has no column names/);
   });
 
   it("a K table that converts to Ur below 0.01 is refused like one beyond 1000", async () => {
