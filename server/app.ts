@@ -8,6 +8,7 @@ import type { Config } from "./config.js";
 import { projectRoot } from "./config.js";
 import type { Db } from "./db/client.js";
 import { AppError } from "./errors.js";
+import { refuseInvalidUtf8Body } from "./lib/strict-utf8.js";
 import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
@@ -45,7 +46,7 @@ export function createApp(options: CreateAppOptions): Express {
       strictTransportSecurity: ctx.config.trustProxy,
     }),
   );
-  app.use(express.json({ limit: "1mb" }));
+  app.use(express.json({ limit: "1mb", verify: refuseInvalidUtf8Body }));
   app.use(cookieParser());
 
   app.use("/api", apiRouter(ctx), apiNotFound);

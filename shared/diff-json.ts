@@ -12,6 +12,11 @@ const child = (path: string, key: string | number) =>
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
+/** Appends `more` to `out` one by one: `out.push(...more)` overflows the stack for a long list of changes. */
+function appendAll<T>(out: T[], more: readonly T[]): void {
+  for (const item of more) out.push(item);
+}
+
 /**
  * Field-by-field differences from `a` to `b`: every leaf that changed, every member or array element that was
  * added or removed, each with its JSON path and the old and new values. Objects are compared by key (in sorted
@@ -24,7 +29,7 @@ export function diffJson(a: unknown, b: unknown, path = "$"): JsonChange[] {
     for (let i = 0; i < Math.max(a.length, b.length); i++) {
       if (i >= b.length) out.push({ path: child(path, i), kind: "removed", old: a[i] });
       else if (i >= a.length) out.push({ path: child(path, i), kind: "added", new: b[i] });
-      else out.push(...diffJson(a[i], b[i], child(path, i)));
+      else appendAll(out, diffJson(a[i], b[i], child(path, i)));
     }
     return out;
   }
@@ -34,7 +39,7 @@ export function diffJson(a: unknown, b: unknown, path = "$"): JsonChange[] {
     for (const key of keys) {
       if (!(key in b)) out.push({ path: child(path, key), kind: "removed", old: a[key] });
       else if (!(key in a)) out.push({ path: child(path, key), kind: "added", new: b[key] });
-      else out.push(...diffJson(a[key], b[key], child(path, key)));
+      else appendAll(out, diffJson(a[key], b[key], child(path, key)));
     }
     return out;
   }

@@ -1,5 +1,6 @@
-import type { ErrorRequestHandler, RequestHandler } from "express";
+import type { ErrorRequestHandler, Request, RequestHandler } from "express";
 import { ZodError } from "zod";
+import { capList, clipValue } from "../../shared/message-bounds.js";
 import { AppError } from "../errors.js";
 import type { Logger } from "../logger.js";
 
@@ -8,10 +9,21 @@ export interface ErrorBody {
   error: { code: string; message: string; details?: unknown };
 }
 
-/** One line per invalid field: its path, the rule it broke and the message. */
+/**
+ * One line per invalid field: its path, the rule it broke and the message — at most 50 lines, each path and
+ * message clipped, so an answer never repeats a huge input (zod's own messages quote unknown keys).
+ */
 export function zodIssues(err: ZodError): { path: string; rule: string; message: string }[] {
-  return err.issues.map((i) => ({ path: i.path.length ? i.path.join(".") : "(body)", rule: i.code, message: i.message }));
+  const issues = err.issues.map((i) => ({
+    path: i.path.length ? clipValue(i.path.join("."), 200) : "(body)",
+    rule: i.code,
+    message: clipValue(i.message, 300),
+  }));
+  return capList(issues, (count) => ({ path: "(body)", rule: "more", message: `… and ${count} more problems` }));
 }
+
+/** Where a request went, for the log: method and path, never the query string (it may carry user data). */
+const requestPath = (req: Request) => clipValue(req.originalUrl.split("?")[0], 300);
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new AppError(404, "not_found", `No API route ${req.method} ${req.baseUrl}${req.path}.`));
@@ -24,7 +36,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const send = (status: number, error: ErrorBody["error"]) => res.status(status).json({ error } satisfies ErrorBody);
 
     if (err instanceof AppError) {
-      if (err.status >= 500) logger.error({ err, url: req.originalUrl }, err.message);
+      if (err.status >= 500) logger.error({ err, method: req.method, path: requestPath(req) }, clipValue(err.message, 300));
       return send(err.status, { code: err.code, message: err.message, details: err.details });
     }
     if (err instanceof ZodError) {
@@ -42,9 +54,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     const status = (err as { status?: number }).status;
     if (typeof status === "number" && status >= 400 && status < 500) {
-      return send(status, { code: "bad_request", message: (err as Error).message || "Bad request." });
+      return send(status, { code: "bad_request", message: clipValue((err as Error).message || "Bad request.", 300) });
     }
-    logger.error({ err, url: req.originalUrl, method: req.method }, "unhandled error");
+    logger.error({ err, method: req.method, path: requestPath(req) }, "unhandled error");
     return send(500, { code: "internal", message: "Something went wrong on the server. The error was logged." });
   };
 }

@@ -4,6 +4,7 @@
  * Vector lines keep the PDF small and sharp at any zoom.
  */
 import type PDFDocument from "pdfkit";
+import { extent } from "../../shared/extent.js";
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -73,10 +74,12 @@ export function drawLineChart(doc: Doc, spec: LineChartSpec): void {
   const all = spec.series.flatMap((s) => s.points);
   const xs = [...all.map((p) => p[0]), ...(spec.markers ?? []).map((m) => m.x)];
   const ys = all.map((p) => p[1]);
-  const xAxis = niceAxis(xs.length ? Math.min(...xs) : 0, xs.length ? Math.max(...xs) : 1, 6);
+  const xRange = extent(xs);
+  const yData = extent(ys);
+  const xAxis = niceAxis(xs.length ? xRange.min : 0, xs.length ? xRange.max : 1, 6);
   const yAxis = spec.yRange
     ? niceAxis(spec.yRange[0], spec.yRange[1], 5)
-    : niceAxis(ys.length ? Math.min(...ys) : 0, ys.length ? Math.max(...ys) : 1, 5);
+    : niceAxis(ys.length ? yData.min : 0, ys.length ? yData.max : 1, 5);
   const px = (v: number) => plot.left + ((v - xAxis.min) / (xAxis.max - xAxis.min)) * (plot.right - plot.left);
   const py = (v: number) => plot.bottom - ((v - yAxis.min) / (yAxis.max - yAxis.min)) * (plot.bottom - plot.top);
 

@@ -8,6 +8,7 @@
 import path from "node:path";
 import { decodeProtectedHeader } from "jose";
 import PDFDocument from "pdfkit";
+import { extent } from "../../shared/extent.js";
 import { SUMMARY_CAUTIONS, type SummaryPayload } from "../../shared/schemas/summary.js";
 import { explainWarningCode } from "../../shared/warning-text.js";
 import { projectRoot } from "../config.js";
@@ -198,7 +199,8 @@ function writeCharts(w: PdfWriter, input: SummaryPdfInput): void {
   ];
   const damping = series((st) => st.damping * 100);
   const values = damping.flatMap((d) => d.points.map((p) => p[1]));
-  const yRange: [number, number] = [Math.max(Math.min(0, ...values), -10), Math.min(Math.max(...values, 1), 30)];
+  const range = extent(values);
+  const yRange: [number, number] = [Math.max(Math.min(0, range.min), -10), Math.min(Math.max(range.max, 1), 30)];
   const height = 215;
   w.heading("Damping and frequency of every pole path", 2 * height + 40);
   const xLabel = "Mean wind speed at deck level U (m/s)";

@@ -1,5 +1,6 @@
 import { convertConvention } from "../../shared/engine/aero/convert-convention.js";
 import { fitStaticSlopes } from "../../shared/datasets/fit-static-slopes.js";
+import { capIssues } from "../../shared/datasets/read-csv-table.js";
 import { readFlutterDerivativesCsv } from "../../shared/datasets/read-flutter-derivatives-csv.js";
 import { readStaticCoefficientsCsv } from "../../shared/datasets/read-static-coefficients-csv.js";
 import {
@@ -9,7 +10,9 @@ import {
   type PatchDataset,
   type UploadIssue,
 } from "../../shared/schemas/datasets.js";
-import { DERIVATIVE_NAMES } from "../../shared/schemas/study.js";
+import { DERIVATIVE_NAMES, MAX_DERIVATIVE_MAGNITUDE, REDUCED_VELOCITY_LIMITS } from "../../shared/schemas/study.js";
+import { extent } from "../../shared/extent.js";
+import { clipValue } from "../../shared/message-bounds.js";
 import type { DbOrTx } from "../db/client.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { listAlternativeRevisionAerodynamics } from "../db/queries/revisions.js";
@@ -62,9 +65,12 @@ function loadDataset(db: DbOrTx, user: SessionUser, id: number, access: Access) 
 
 function invalidFile(fileName: string, issues: UploadIssue[]): AppError {
   const first = issues[0];
-  const where = [first.row !== undefined ? `line ${first.row}` : "", first.column ? `column ${first.column}` : ""].filter(Boolean).join(", ");
+  // A blank header cell's column is already named "column 3"; a message that ends with a period keeps one.
+  const column = first.column ? (/^column \d+$/.test(first.column) ? first.column : `column ${first.column}`) : "";
+  const where = [first.row !== undefined ? `line ${first.row}` : "", column].filter(Boolean).join(", ");
   const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : "";
-  return new AppError(400, "invalid_file", `${fileName}: ${where ? `${where}: ` : ""}${first.message}${more}. Nothing was stored.`, {
+  const message = first.message.replace(/\.$/, "");
+  return new AppError(400, "invalid_file", `${clipValue(fileName)}: ${where ? `${where}: ` : ""}${message}${more}. Nothing was stored.`, {
     details: issues,
   });
 }
@@ -88,10 +94,6 @@ export function parseMeta(raw: unknown): DatasetMeta {
   return result.data;
 }
 
-/** The study format's limits for a derivative table (shared/schemas/study.ts). */
-const MAX_DERIVATIVE = 100_000;
-const MAX_REDUCED_VELOCITY = 1000;
-
 type Parsed = Pick<NewAeroDataset, "delivered" | "converted" | "slopes" | "testedMin" | "testedMax" | "warnings">;
 
 function parseFlutter(bytes: Uint8Array, fileName: string, meta: Extract<DatasetMeta, { kind: "flutter-derivatives" }>): Parsed {
@@ -101,19 +103,25 @@ function parseFlutter(bytes: Uint8Array, fileName: string, meta: Extract<Dataset
   const converted = convertConvention({ ...meta.convention, abscissaValues: abscissa, ...derivatives });
   const ur = converted.reducedVelocity;
   const full = { reducedVelocity: ur, ...Object.fromEntries(DERIVATIVE_NAMES.map((n) => [n, converted[n]!])) };
-  // The study format takes |derivative| ≤ 100,000 and Ur ≤ 1,000; a file beyond them would be stored and then
-  // refused only when a study tried to use it. Refuse it here, naming the data row and the column.
+  // The study format takes |derivative| ≤ 100,000 and 0.01 ≤ Ur ≤ 1,000; a file beyond them would be stored and
+  // then refused only when a study tried to use it. Refuse it here, naming the data row and the column.
   const beyond: UploadIssue[] = [];
   for (const name of DERIVATIVE_NAMES) {
     (derivatives[name] ?? []).forEach((v, i) => {
-      if (Math.abs(v) > MAX_DERIVATIVE) beyond.push({ column: name, message: `data row ${i + 1}: ${v} is beyond ±${MAX_DERIVATIVE} (a typing or unit error?)` });
+      if (Math.abs(v) > MAX_DERIVATIVE_MAGNITUDE) {
+        beyond.push({ column: name, message: `data row ${i + 1}: ${v} is beyond ±${MAX_DERIVATIVE_MAGNITUDE} (a typing or unit error?)` });
+      }
     });
   }
-  const highest = Math.max(...ur);
-  if (highest > MAX_REDUCED_VELOCITY) {
-    beyond.push({ column: meta.convention.abscissa, message: `gives a reduced velocity Ur = U/(fB) of ${Number(highest.toPrecision(6))}, beyond ${MAX_REDUCED_VELOCITY}` });
+  const { min: lowest, max: highest } = extent(ur);
+  const { min, max } = REDUCED_VELOCITY_LIMITS;
+  if (highest > max) {
+    beyond.push({ column: meta.convention.abscissa, message: `gives a reduced velocity Ur = U/(fB) of ${Number(highest.toPrecision(6))}, beyond ${max}` });
   }
-  if (beyond.length > 0) throw invalidFile(fileName, beyond);
+  if (lowest < min) {
+    beyond.push({ column: meta.convention.abscissa, message: `gives a reduced velocity Ur = U/(fB) of ${Number(lowest.toPrecision(6))}, below ${min}` });
+  }
+  if (beyond.length > 0) throw invalidFile(fileName, capIssues(beyond));
   return {
     delivered: read.delivered,
     converted: full,

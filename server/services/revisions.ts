@@ -1,6 +1,7 @@
 import { diffJson } from "../../shared/diff-json.js";
 import type { runSweep } from "../../shared/engine/run-sweep.js";
 import { ENGINE_VERSION } from "../../shared/engine/version.js";
+import { clipValue } from "../../shared/message-bounds.js";
 import type {
   RevisionDiffDto,
   RevisionDto,
@@ -8,6 +9,7 @@ import type {
   StaleParentDetails,
 } from "../../shared/schemas/revisions.js";
 import { parseStudy, type StudyDocument } from "../../shared/schemas/study.js";
+import { decodeUtf8Strict, describeUtf8Error } from "../../shared/utf8.js";
 import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
@@ -260,12 +262,14 @@ export async function importRevision(
 
 /** Reads an uploaded study file (UTF-8 JSON) — 400 `invalid_file` with line and column when it is not JSON. */
 export function readStudyFile(bytes: Uint8Array, fileName: string): unknown {
-  let text: string;
-  try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes).replace(/^\uFEFF/, "");
-  } catch {
-    throw new AppError(400, "invalid_file", `${fileName}: the file is not UTF-8 text. Nothing was stored.`, { details: [{ message: "not UTF-8" }] });
+  const decoded = decodeUtf8Strict(bytes);
+  if (!decoded.ok) {
+    const where = describeUtf8Error(decoded);
+    throw new AppError(400, "invalid_file", `${clipValue(fileName)}: the file is not UTF-8 text (${where}). Nothing was stored.`, {
+      details: [{ row: decoded.line, message: `not UTF-8: ${where}` }],
+    });
   }
+  const text = decoded.text;
   try {
     return JSON.parse(text);
   } catch (err) {
@@ -280,6 +284,6 @@ export function readStudyFile(bytes: Uint8Array, fileName: string): unknown {
       where = ` at line ${line}, column ${column}`;
       details[0] = { row: line, column: String(column), message };
     }
-    throw new AppError(400, "invalid_file", `${fileName}: not valid JSON${where} (${message}). Nothing was stored.`, { details });
+    throw new AppError(400, "invalid_file", `${clipValue(fileName)}: not valid JSON${where} (${message}). Nothing was stored.`, { details });
   }
 }

@@ -22,4 +22,12 @@ describe("diffJson", () => {
   it("reports a change of type as one change", () => {
     expect(diffJson({ a: { b: 1 } }, { a: 5 })).toEqual([{ path: "$.a", kind: "changed", old: { b: 1 }, new: 5 }]);
   });
+
+  it("lists 300,000 changes of one long array without overflowing the stack", () => {
+    const a = { table: { values: Array.from({ length: 300_000 }, (_, i) => i) } };
+    const b = { table: { values: Array.from({ length: 300_000 }, (_, i) => i + 1) } };
+    const changes = diffJson(a, b);
+    expect(changes).toHaveLength(300_000);
+    expect(changes[299_999]).toEqual({ path: "$.table.values[299999]", kind: "changed", old: 299_999, new: 300_000 });
+  });
 });

@@ -1,5 +1,9 @@
 import Papa from "papaparse";
+import { capList, clipValue, quoteValue } from "../message-bounds";
+import { denormalProblem } from "../schemas/input-rules";
 import type { UploadIssue } from "../schemas/datasets";
+import { MAX_TABLE_ROWS } from "../schemas/study";
+import { decodeUtf8Strict, describeUtf8Error } from "../utf8";
 
 /** A CSV file read into trimmed cells, with the line number of every data row (the header is line 1). */
 export interface CsvTable {
@@ -10,32 +14,6 @@ export interface CsvTable {
 export type CsvReadResult = { ok: true; table: CsvTable } | { ok: false; issues: UploadIssue[] };
 
 const UTF8_BOM = [0xef, 0xbb, 0xbf];
-
-/** Line number (1-based) of byte `offset` in `bytes`. */
-function lineOfByte(bytes: Uint8Array, offset: number): number {
-  let line = 1;
-  for (let i = 0; i < offset && i < bytes.length; i++) if (bytes[i] === 0x0a) line++;
-  return line;
-}
-
-/** Offset of the first byte that is not part of a valid UTF-8 sequence. */
-function firstInvalidUtf8(bytes: Uint8Array): number {
-  const decoder = new TextDecoder("utf-8", { fatal: true });
-  let lo = 0;
-  let hi = bytes.length;
-  // Binary search on the longest valid prefix; a cut inside a multi-byte sequence is tolerated by `stream`.
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    try {
-      decoder.decode(bytes.subarray(0, mid), { stream: true });
-      decoder.decode();
-      lo = mid;
-    } catch {
-      hi = mid;
-    }
-  }
-  return lo;
-}
 
 /**
  * Decodes an uploaded CSV as UTF-8 (a BOM is removed) and splits it with papaparse into a header and data rows.
@@ -50,30 +28,53 @@ export function readCsvTable(bytes: Uint8Array): CsvReadResult {
     return fail("The file is encoded as UTF-16. Save it as UTF-8 (\"CSV UTF-8\") and upload it again.");
   }
   const body = UTF8_BOM.every((b, i) => bytes[i] === b) ? bytes.subarray(3) : bytes;
-  let text: string;
-  try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(body);
-  } catch {
-    const at = firstInvalidUtf8(body);
+  const decoded = decodeUtf8Strict(body);
+  if (!decoded.ok) {
     return {
       ok: false,
       issues: [
         {
-          row: lineOfByte(body, at),
+          row: decoded.line,
           message:
-            `The file is not UTF-8: byte 0x${body[at]?.toString(16).padStart(2, "0")} at line ${lineOfByte(body, at)} ` +
-            "cannot be read (Windows-1252 or Latin-1?). Save it as UTF-8 (\"CSV UTF-8\") and upload it again.",
+            `The file is not UTF-8: ${describeUtf8Error(decoded)} cannot be read (Windows-1252 or Latin-1?). ` +
+            "Save it as UTF-8 (\"CSV UTF-8\") and upload it again.",
         },
       ],
     };
   }
+  const text = decoded.text;
   if (text.includes("\u0000")) return fail("The file contains NUL bytes: it is not a text CSV file.");
   if (text.trim() === "") return fail("The file is empty.");
 
   const parsed = Papa.parse<string[]>(text, { delimiter: ",", header: false, skipEmptyLines: false });
   const records = parsed.data.map((cells, i) => ({ line: i + 1, cells: cells.map((c) => c.trim()) }));
   const nonBlank = records.filter((r) => r.cells.some((c) => c !== ""));
+  if (nonBlank.length === 0) {
+    // Only separators (",,,") and blanks: no header cell has a name, and there is no value to read.
+    const first = records.find((r) => r.cells.length > 1) ?? records[0];
+    return {
+      ok: false,
+      issues: [
+        {
+          row: first.line,
+          column: "column 1",
+          message: "the header has no column names: the file holds only commas and blank values, no header and no numbers",
+        },
+      ],
+    };
+  }
   const [head, ...rows] = nonBlank;
+  if (rows.length > MAX_TABLE_ROWS) {
+    return {
+      ok: false,
+      issues: [
+        {
+          row: rows[MAX_TABLE_ROWS].line,
+          message: `The file has ${rows.length} data rows; at most ${MAX_TABLE_ROWS} are accepted (line ${rows[MAX_TABLE_ROWS].line} is row ${MAX_TABLE_ROWS + 1}).`,
+        },
+      ],
+    };
+  }
   const headerLine = text.split(/\r?\n/).find((l) => l.trim() !== "") ?? "";
   if (head.cells.length === 1 && /[;\t]/.test(headerLine)) {
     const separator = headerLine.includes(";") ? "semicolons (;)" : "tabs";
@@ -93,7 +94,7 @@ export function readCsvTable(bytes: Uint8Array): CsvReadResult {
   if (quoteErrors.length > 0) {
     return {
       ok: false,
-      issues: quoteErrors.map((e) => ({ row: (e.row ?? 0) + 1, message: `Unbalanced quotes: ${e.message}.` })),
+      issues: capIssues(quoteErrors.map((e) => ({ row: (e.row ?? 0) + 1, message: `Unbalanced quotes: ${e.message}.` }))),
     };
   }
   return { ok: true, table: { header: head.cells, rows } };
@@ -111,17 +112,21 @@ export function readNumber(cell: string): { ok: true; value: number } | { ok: fa
   if (/^[+-]?(nan|inf|infinity)$/i.test(cell)) return { ok: false, message: `is ${cell}: only finite numbers are accepted` };
   if (!NUMBER.test(cell)) {
     const hint = /^[+-]?\d+,\d+$/.test(cell) ? " (decimal comma? use a point)" : "";
-    return { ok: false, message: `"${cell}" is not a number${hint}` };
+    return { ok: false, message: `${quoteValue(cell)} is not a number${hint}` };
   }
   const value = Number(cell);
-  if (!Number.isFinite(value)) return { ok: false, message: `"${cell}" is out of the range of numbers` };
+  if (!Number.isFinite(value)) return { ok: false, message: `${quoteValue(cell)} is out of the range of numbers` };
+  const denormal = denormalProblem(value);
+  if (denormal) return { ok: false, message: `${quoteValue(cell)} ${denormal}` };
   return { ok: true, value };
 }
 
-/** Most issues reported for one file; the rest are summarised in one line. */
-export const MAX_ISSUES = 50;
-
+/** At most `MAX_REPORTED_ISSUES` problems of one file; the rest are summarised in one line. */
 export function capIssues(issues: UploadIssue[]): UploadIssue[] {
-  if (issues.length <= MAX_ISSUES) return issues;
-  return [...issues.slice(0, MAX_ISSUES), { message: `… and ${issues.length - MAX_ISSUES} more problems.` }];
+  return capList(issues, (count) => ({ message: `… and ${count} more problems.` }));
+}
+
+/** A header cell as an issue's `column`: at most 100 characters, or its position when it is blank. */
+export function columnLabel(cell: string, index: number): string {
+  return cell ? clipValue(cell) : `column ${index + 1}`;
 }

@@ -1,6 +1,7 @@
 import type { DerivativeConventionInput, UploadIssue } from "../schemas/datasets";
 import { DERIVATIVE_NAMES, type DerivativeName } from "../schemas/study";
-import { capIssues, readCsvTable } from "./read-csv-table";
+import { quoteValue } from "../message-bounds";
+import { capIssues, columnLabel, readCsvTable } from "./read-csv-table";
 import { checkHeader, readNumericColumns } from "./read-numeric-columns";
 
 /** Flutter derivatives as delivered: the abscissa column and all eight derivatives (missing ones as zeros). */
@@ -48,14 +49,14 @@ export function readFlutterDerivativesCsv(
   if (issues.length === 0 && names[0] !== expectedFirst) {
     issues.push({
       row: 1,
-      column: header[0],
-      message: `the first column must be the abscissa "${expectedFirst}" (convention: ${abscissa}); found "${header[0]}"`,
+      column: columnLabel(header[0], 0),
+      message: `the first column must be the abscissa "${expectedFirst}" (convention: ${abscissa}); found ${quoteValue(header[0])}`,
     });
   }
   if (issues.length === 0 && names.slice(1).some((n) => n === "Ur" || n === "K")) {
     issues.push({ row: 1, message: "only the first column may be the abscissa (Ur or K)" });
   }
-  if (issues.length > 0) return { ok: false, issues };
+  if (issues.length > 0) return { ok: false, issues: capIssues(issues) };
 
   const label = expectedFirst === "Ur" ? "reduced velocity (Ur)" : "reduced frequency (K)";
   // A table in K is often sorted by Ur, i.e. by decreasing K: either direction is accepted for K.
@@ -66,7 +67,7 @@ export function readFlutterDerivativesCsv(
   if (nonPositive >= 0) {
     return {
       ok: false,
-      issues: [{ row: columns.data.lines[nonPositive], column: header[0], message: `${x[nonPositive]} must be greater than 0` }],
+      issues: [{ row: columns.data.lines[nonPositive], column: columnLabel(header[0], 0), message: `${x[nonPositive]} must be greater than 0` }],
     };
   }
   if (rows.length < 2) {

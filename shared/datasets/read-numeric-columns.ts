@@ -1,5 +1,6 @@
 import type { UploadIssue } from "../schemas/datasets";
-import { readNumber, type CsvTable } from "./read-csv-table";
+import { quoteValue } from "../message-bounds";
+import { columnLabel, readNumber, type CsvTable } from "./read-csv-table";
 
 export interface NumericColumns {
   /** Values by canonical column name, in file order. */
@@ -72,11 +73,11 @@ export function checkHeader(header: string[], canonical: (cell: string) => strin
     if (name === null) {
       issues.push({
         row: 1,
-        column: cell || `column ${j + 1}`,
-        message: cell ? `"${cell}" is not a known column; expected ${expected}` : `column ${j + 1} has no name; expected ${expected}`,
+        column: columnLabel(cell, j),
+        message: cell ? `${quoteValue(cell)} is not a known column; expected ${expected}` : `column ${j + 1} has no name; expected ${expected}`,
       });
     } else if (seen.has(name)) {
-      issues.push({ row: 1, column: cell, message: `column ${name} appears twice` });
+      issues.push({ row: 1, column: columnLabel(cell, j), message: `column ${name} appears twice` });
     } else seen.add(name);
   });
   return issues;

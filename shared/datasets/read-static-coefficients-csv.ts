@@ -1,5 +1,6 @@
 import type { UploadIssue } from "../schemas/datasets";
-import { capIssues, readCsvTable } from "./read-csv-table";
+import { quoteValue } from "../message-bounds";
+import { capIssues, columnLabel, readCsvTable } from "./read-csv-table";
 import { checkHeader, readNumericColumns } from "./read-numeric-columns";
 
 export interface StaticRow {
@@ -37,9 +38,9 @@ export function readStaticCoefficientsCsv(bytes: Uint8Array): StaticCsvResult {
     if (issues.length === 0 && !names.includes(name)) issues.push({ row: 1, column: name, message: `column ${name} is missing; expected ${expected}` });
   }
   if (issues.length === 0 && names[0] !== "angleDeg") {
-    issues.push({ row: 1, column: header[0], message: `the first column must be angleDeg; found "${header[0]}"` });
+    issues.push({ row: 1, column: columnLabel(header[0], 0), message: `the first column must be angleDeg; found ${quoteValue(header[0])}` });
   }
-  if (issues.length > 0) return { ok: false, issues };
+  if (issues.length > 0) return { ok: false, issues: capIssues(issues) };
   const columns = readNumericColumns(read.table, names, "angle of attack (angleDeg)");
   if (!columns.ok) return { ok: false, issues: capIssues(columns.issues) };
   if (rows.length < 2) {

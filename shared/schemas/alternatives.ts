@@ -3,13 +3,13 @@
  * Identifiers travel as decimal strings, times as ISO 8601. Lengths in metres.
  */
 import { z } from "zod";
+import { normalNumber, userText } from "./input-rules";
 import { DECK_DEPTH_LIMITS_M, DECK_WIDTH_LIMITS_M } from "./study";
 
-const text = (max: number) => z.string().trim().max(max, `must have at most ${max} characters`);
+const text = (max: number) => userText().trim().max(max, `must have at most ${max} characters`);
 /** A length within the study format's limits for the same quantity, so a study started from the alternative is valid. */
 const lengthM = (description: string, limits: { readonly min: number; readonly max: number }) =>
-  z
-    .number({ error: "must be a number" })
+  normalNumber({ error: "must be a number" })
     .positive("must be greater than 0")
     .refine((v) => !(v > 0 && v < limits.min), `must be at least ${limits.min} m`)
     .refine((v) => !(v > limits.max), `must be at most ${limits.max} m`)

@@ -7,16 +7,16 @@
  */
 import { z } from "zod";
 import type { EvaluatedCriteria } from "../criteria/evaluate-criteria";
+import { normalNumber, userText } from "./input-rules";
 import { formatStudyIssues, studyDocumentSchema, type StudyIssue } from "./study";
 
 const typeError = (expected: string) => (issue: { input?: unknown }) =>
   issue.input === undefined ? "is required" : `must be ${expected}`;
 
-const number = (description: string) => z.number({ error: typeError("a number") }).describe(description);
+const number = (description: string) => normalNumber({ error: typeError("a number") }).describe(description);
 const positive = (description: string) => number(description).positive({ error: "must be greater than 0" });
 const text = (description: string, max: number) =>
-  z
-    .string({ error: typeError("a string") })
+  userText({ error: typeError("a string") })
     .max(max, { error: `must have at most ${max} characters` })
     .refine((value) => value.trim().length > 0, { error: "must not be blank" })
     .describe(description);
@@ -121,8 +121,7 @@ export const projectCriteriaSchema = object({
     vortexOnset: requirementSchema,
     gallopingOnset: requirementSchema,
   }),
-  notes: z
-    .string({ error: typeError("a string") })
+  notes: userText({ error: typeError("a string") })
     .max(4000, { error: "must have at most 4000 characters" })
     .optional()
     .describe("Free notes on the criteria (governing specification, agreements with the owner)"),
@@ -139,8 +138,7 @@ export type ProbabilityInput = DesignWind["probability"];
 /** Body of PUT /api/projects/:id/criteria. `baseVersion` (the version the editor started from) guards against lost updates. */
 export const putCriteriaBodySchema = object({
   criteria: projectCriteriaSchema,
-  baseVersion: z
-    .number({ error: typeError("a whole number or null") })
+  baseVersion: normalNumber({ error: typeError("a whole number or null") })
     .int({ error: "must be a whole number" })
     .positive({ error: "must be greater than 0" })
     .nullable()

@@ -7,9 +7,10 @@
  * L downward, α and M nose-up); static coefficients keep C_D on B or D as delivered and are also given on B.
  */
 import { z } from "zod";
+import { normalNumber, userText, zeroOrAtLeast } from "./input-rules";
 
-const text = (max: number) => z.string().trim().max(max, `must have at most ${max} characters`);
-const finite = (description: string) => z.number({ error: "must be a number" }).describe(description);
+const text = (max: number) => userText().trim().max(max, `must have at most ${max} characters`);
+const finite = (description: string) => normalNumber({ error: "must be a number" }).describe(description);
 
 export const DATASET_KINDS = ["flutter-derivatives", "static-coefficients"] as const;
 export const datasetKindSchema = z.enum(DATASET_KINDS);
@@ -21,22 +22,21 @@ export const MAX_DATASET_FILE_BYTES = 1024 * 1024;
 /** Where and how the section model was tested. Every field but `flow` is optional. */
 export const provenanceSchema = z.strictObject({
   facility: text(1000).default("").describe("Test facility (wind tunnel, section-model rig)"),
-  modelScale: z
-    .number({ error: "must be a number" })
-    .positive("must be greater than 0")
+  modelScale: normalNumber({ error: "must be a number" })
+    .min(1, "must be at least 1: give the scale's denominator (60 for 1:60), not the ratio")
     .nullable()
     .default(null)
     .describe("Length-scale denominator of the section model, dimensionless (60 for 1:60)"),
-  reynoldsNumber: z
-    .number({ error: "must be a number" })
-    .positive("must be greater than 0")
+  reynoldsNumber: normalNumber({ error: "must be a number" })
+    .min(1, "must be at least 1")
     .nullable()
     .default(null)
     .describe("Reynolds number of the tests, on the deck width B, dimensionless"),
-  turbulenceIntensityPct: z
-    .number({ error: "must be a number" })
-    .min(0, "must be at least 0")
-    .max(100, "must be at most 100")
+  turbulenceIntensityPct: zeroOrAtLeast(
+    normalNumber({ error: "must be a number" }).min(0, "must be at least 0").max(100, "must be at most 100"),
+    0.01,
+    " %",
+  )
     .nullable()
     .default(null)
     .describe("Longitudinal turbulence intensity of the oncoming flow, %"),

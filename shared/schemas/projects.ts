@@ -2,6 +2,7 @@
  * Contract of the projects API (`/api/projects*`). Identifiers travel as decimal strings; times as ISO 8601.
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import { projectRoleSchema } from "./auth";
 
 export const projectSchema = z.object({
@@ -19,9 +20,9 @@ export type ProjectDto = z.infer<typeof projectSchema>;
 /** PATCH /api/projects/:id — analysts (and administrators) edit the project's texts. */
 export const projectPatchSchema = z
   .strictObject({
-    name: z.string().trim().min(1, "must not be blank").max(200, "must have at most 200 characters"),
-    description: z.string().trim().max(5000, "must have at most 5000 characters"),
-    siteNotes: z.string().trim().max(20000, "must have at most 20000 characters"),
+    name: userText().trim().min(1, "must not be blank").max(200, "must have at most 200 characters"),
+    description: userText().trim().max(5000, "must have at most 5000 characters"),
+    siteNotes: userText().trim().max(20000, "must have at most 20000 characters"),
   })
   .partial()
   .refine((p) => Object.keys(p).length > 0, "give at least one of name, description, siteNotes");
@@ -35,13 +36,13 @@ export const projectMemberSchema = z.object({
 });
 export type ProjectMember = z.infer<typeof projectMemberSchema>;
 
-const projectNameSchema = z.string().trim().min(1, "must not be blank").max(200, "must have at most 200 characters");
+const projectNameSchema = userText().trim().min(1, "must not be blank").max(200, "must have at most 200 characters");
 
 /** POST /api/projects — administrators create a project; description and site notes may be left out (empty). */
 export const projectCreateSchema = z.strictObject({
   name: projectNameSchema,
-  description: z.string().trim().max(5000, "must have at most 5000 characters").optional(),
-  siteNotes: z.string().trim().max(20000, "must have at most 20000 characters").optional(),
+  description: userText().trim().max(5000, "must have at most 5000 characters").optional(),
+  siteNotes: userText().trim().max(20000, "must have at most 20000 characters").optional(),
 });
 export type ProjectCreateInput = z.infer<typeof projectCreateSchema>;
 

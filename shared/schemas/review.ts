@@ -4,6 +4,7 @@
  * `in-review`, and ends `returned` (with comments; it may be submitted again) or `signed` (final).
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import type { ComparisonMargin } from "./comparison";
 import type { SummaryPayload } from "./summary";
 
@@ -15,8 +16,7 @@ export const REVIEW_EVENT_KINDS = ["submitted", "returned", "signed", "commented
 export type ReviewEventKind = (typeof REVIEW_EVENT_KINDS)[number];
 
 const text = (max: number) =>
-  z
-    .string({ error: "must be a string" })
+  userText({ error: "must be a string" })
     .trim()
     .min(1, "must not be blank")
     .max(max, `must have at most ${max} characters`);
@@ -29,7 +29,7 @@ const userId = z
 /** POST /api/revisions/:id/submit (analysts). */
 export const submitReviewSchema = z.strictObject({
   reviewerId: userId,
-  note: z.string().trim().max(4000, "must have at most 4000 characters").default(""),
+  note: userText().trim().max(4000, "must have at most 4000 characters").default(""),
 });
 export type SubmitReviewInput = z.input<typeof submitReviewSchema>;
 

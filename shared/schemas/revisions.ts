@@ -5,6 +5,7 @@
  * It is `superseded` when a newer revision of the same study exists.
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import { flutterKindSchema, sweepResultSchema } from "./result";
 import { studyDocumentSchema } from "./study";
 
@@ -21,7 +22,7 @@ export const createRevisionSchema = z.strictObject({
     .int("must be a whole number")
     .positive("must be greater than 0")
     .nullable(),
-  changeNote: z.string().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
+  changeNote: userText().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
   study: studyDocumentSchema,
 });
 export type CreateRevisionInput = z.input<typeof createRevisionSchema>;
@@ -33,7 +34,7 @@ export const importRevisionFieldsSchema = z.strictObject({
     .string()
     .regex(/^(\d{1,9}|null|)$/, "must be a revision number, or empty for the first revision")
     .transform((v) => (v === "" || v === "null" ? null : Number(v))),
-  changeNote: z.string().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
+  changeNote: userText().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
 });
 
 export const personSchema = z.object({ id: z.string(), name: z.string() });

@@ -3,10 +3,11 @@
  * alternative; its content lives in numbered, immutable revisions (shared/schemas/revisions.ts).
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import { revisionSummarySchema } from "./revisions";
 import { studyDocumentSchema } from "./study";
 
-const text = (max: number) => z.string().trim().max(max, `must have at most ${max} characters`);
+const text = (max: number) => userText().trim().max(max, `must have at most ${max} characters`);
 
 /**
  * POST /api/alternatives/:id/studies (analysts). With `study`, revision 1 is computed and stored at once

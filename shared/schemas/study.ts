@@ -8,6 +8,8 @@
  * of the offending value ("$.structure.modes[1].frequency").
  */
 import { z } from "zod";
+import { capList, clipValue } from "../message-bounds";
+import { normalNumber, userText, zeroOrAtLeast } from "./input-rules";
 
 export const STUDY_FORMAT = "stillspan.study/1";
 /** Limits of the deck width B and depth D, m — shared with a deck alternative's B and D (shared/schemas/alternatives.ts). */
@@ -17,11 +19,26 @@ export const DECK_DEPTH_LIMITS_M = { min: 0.001, max: 1000 } as const;
 /** Largest number of sweep intervals ((to − from) / step) a study may ask for. */
 export const MAX_SWEEP_STEPS = 20_000;
 
+/**
+ * Most rows of a derivative table (here, and in an uploaded CSV file). Measured tables hold tens of rows; the
+ * cap keeps every table far below sizes that overflow argument lists or make interpolation and diffs slow.
+ */
+export const MAX_TABLE_ROWS = 10_000;
+
+/** Range of the reduced velocity Ur = U/(fB) of a derivative table (also applied to uploaded data sets). */
+export const REDUCED_VELOCITY_LIMITS = { min: 0.01, max: 1000 } as const;
+/** Largest magnitude of a flutter derivative (a larger one is a typing or unit error). */
+export const MAX_DERIVATIVE_MAGNITUDE = 100_000;
+/** Largest structural damping ratio accepted: above it the value is almost surely a percentage typed as a ratio. */
+export const MAX_DAMPING_RATIO = 0.2;
+/** Damping ratios above this are accepted but unusual for a bridge deck: the study form warns. */
+export const HIGH_DAMPING_RATIO = 0.05;
+
 const typeError = (expected: string) => (issue: { input?: unknown }) =>
   issue.input === undefined ? "is required" : `must be ${expected}`;
 
-/** A finite number (zod 4 rejects NaN and ±Infinity by default) with its unit in the description. */
-const number = (description: string) => z.number({ error: typeError("a number") }).describe(description);
+/** A finite, not denormal number (shared/schemas/input-rules.ts) with its unit in the description. */
+const number = (description: string) => normalNumber({ error: typeError("a number") }).describe(description);
 const positive = (description: string) => number(description).positive({ error: "must be greater than 0" });
 /**
  * A positive number within a plausible range. The bounds are wide — they hold section models at small scale and
@@ -41,16 +58,23 @@ const object = <T extends z.ZodRawShape>(shape: T) =>
   });
 
 const modeSchema = object({
-  id: z
-    .string({ error: typeError("a string") })
+  id: userText({ error: typeError("a string") })
     .min(1, { error: "must have 1 to 16 characters" })
     .max(16, { error: "must have 1 to 16 characters" })
     .describe("Mode identifier, unique in the study (1–16 characters)"),
   dof: z.enum(["heave", "torsion"], { error: 'must be "heave" or "torsion"' }).describe("Degree of freedom"),
   frequency: bounded("Natural frequency in still air, Hz", 0.001, 1000, " Hz"),
-  damping: number("Structural damping ratio of critical, dimensionless (0.005 = 0.5 %)")
-    .min(0, { error: "must be at least 0" })
-    .lt(1, { error: "must be less than 1" }),
+  damping: zeroOrAtLeast(
+    number("Structural damping ratio of critical, dimensionless (0.005 = 0.5 %)")
+      .min(0, { error: "must be at least 0" })
+      .max(MAX_DAMPING_RATIO, {
+        error: (issue) =>
+          `must be at most ${MAX_DAMPING_RATIO}: damping is a ratio: 0.005 is 0.5 % ` +
+          `(${String(issue.input)} would be ${Number(((issue.input as number) * 100).toPrecision(6))} %)`,
+      }),
+    0.0001,
+    "",
+  ),
 });
 
 const modesSchema = z
@@ -86,10 +110,11 @@ const derivativeArray = (name: string) =>
   z
     .array(
       number(`${name}, dimensionless`)
-        .min(-1e5, { error: "must be at least -100000" })
-        .max(1e5, { error: "must be at most 100000" }),
+        .min(-MAX_DERIVATIVE_MAGNITUDE, { error: `must be at least -${MAX_DERIVATIVE_MAGNITUDE}` })
+        .max(MAX_DERIVATIVE_MAGNITUDE, { error: `must be at most ${MAX_DERIVATIVE_MAGNITUDE}` }),
       { error: typeError("an array of numbers") },
     )
+    .max(MAX_TABLE_ROWS, { error: `must have at most ${MAX_TABLE_ROWS} values` })
     .optional()
     .describe(`${name} at each reduced velocity, dimensionless, normalised with the full width B; missing = zeros`);
 
@@ -102,10 +127,16 @@ const tabulatedSchema = object({
     .describe("Interpolation in reduced velocity: piecewise linear or Fritsch–Carlson monotone cubic"),
   reducedVelocity: z
     .array(
-      positive("Reduced velocity Ur = U/(fB), dimensionless").max(1000, { error: "must be at most 1000" }),
+      bounded(
+        "Reduced velocity Ur = U/(fB), dimensionless",
+        REDUCED_VELOCITY_LIMITS.min,
+        REDUCED_VELOCITY_LIMITS.max,
+        "",
+      ),
       { error: typeError("an array of numbers") },
     )
     .min(2, { error: "must have at least 2 points" })
+    .max(MAX_TABLE_ROWS, { error: `must have at most ${MAX_TABLE_ROWS} points` })
     .describe("Reduced velocities Ur = U/(fB) of the table rows, dimensionless, strictly increasing"),
   H1: derivativeArray("H1*"),
   H2: derivativeArray("H2*"),
@@ -149,7 +180,7 @@ const flatPlateSchema = object({ model: z.literal("flat-plate") });
 const quasiSteadySchema = object({
   model: z.literal("quasi-steady"),
   liftSlope: bounded("Lift coefficient slope dC_L/dα, per radian, lift positive up, coefficient on ½ρU²B", -100, 100, " per rad"),
-  dragCoefficient: bounded("Drag coefficient C_D on ½ρU²B, dimensionless", 0, 10, ""),
+  dragCoefficient: zeroOrAtLeast(bounded("Drag coefficient C_D on ½ρU²B, dimensionless", 0, 10, ""), 0.0001, ""),
   momentSlope: bounded("Moment coefficient slope dC_M/dα, per radian, nose-up, coefficient on ½ρU²B²", -100, 100, " per rad"),
 });
 
@@ -165,9 +196,10 @@ export const studyAerodynamicsSchema = z.discriminatedUnion(
 );
 
 const sweepSchema = object({
-  from: number("First mean wind speed at deck level, m/s").min(0, { error: "must be at least 0" }),
-  to: positive("Last mean wind speed at deck level, m/s").max(500, { error: "must be at most 500 m/s" }),
-  step: positive("Wind-speed step, m/s"),
+  // Speeds below 1 cm/s and steps below 1 mm/s mean nothing for wind, and a tiny speed makes K = Bω/U overflow.
+  from: zeroOrAtLeast(number("First mean wind speed at deck level, m/s").min(0, { error: "must be at least 0" }), 0.01, " m/s"),
+  to: bounded("Last mean wind speed at deck level, m/s", 0.01, 500, " m/s"),
+  step: bounded("Wind-speed step, m/s", 0.001, 500, " m/s"),
 }).superRefine((sweep, ctx) => {
   if (!(sweep.from < sweep.to)) {
     ctx.addIssue({ code: "custom", path: ["to"], message: `must be greater than from (${sweep.from})` });
@@ -193,12 +225,11 @@ export function sweepStepCount(sweep: { from: number; to: number; step: number }
 
 export const studyDocumentSchema = object({
   format: z.literal(STUDY_FORMAT, { error: `must be "${STUDY_FORMAT}"` }),
-  name: z
-    .string({ error: typeError("a string") })
+  name: userText({ error: typeError("a string") })
     .max(200, { error: "must have at most 200 characters" })
     .refine((name) => name.trim().length > 0, { error: "must not be blank" })
     .describe("Name of the study, e.g. the deck alternative and revision"),
-  air: object({ density: bounded("Air density, kg/m³ (0 = still-air check)", 0, 5, " kg/m³") }),
+  air: object({ density: zeroOrAtLeast(bounded("Air density, kg/m³ (0 = still-air check)", 0, 5, " kg/m³"), 0.01, " kg/m³") }),
   deck: object({
     width: bounded("Deck width B (the reference length of the derivatives), m", DECK_WIDTH_LIMITS_M.min, DECK_WIDTH_LIMITS_M.max, " m"),
     depth: bounded("Deck depth, m", DECK_DEPTH_LIMITS_M.min, DECK_DEPTH_LIMITS_M.max, " m"),
@@ -227,15 +258,16 @@ function jsonPath(path: readonly PropertyKey[]): string {
   let out = "$";
   for (const key of path) {
     if (typeof key === "number") out += `[${key}]`;
-    else if (typeof key === "string" && IDENTIFIER.test(key)) out += `.${key}`;
-    else out += `[${JSON.stringify(String(key))}]`;
+    // An unknown key of 1 MB is named by its first 100 characters, not repeated whole.
+    else if (typeof key === "string" && IDENTIFIER.test(key)) out += `.${clipValue(key)}`;
+    else out += `[${JSON.stringify(clipValue(String(key)))}]`;
   }
   return out;
 }
 
 /**
  * Turns a zod error of `studyDocumentSchema` into JSON-path issues, one per bad value (each unknown key listed
- * at its own path).
+ * at its own path); at most 50, the rest counted in a last entry.
  */
 export function formatStudyIssues(error: z.ZodError): StudyIssue[] {
   const issues: StudyIssue[] = [];
@@ -246,7 +278,7 @@ export function formatStudyIssues(error: z.ZodError): StudyIssue[] {
       issues.push({ path: jsonPath(issue.path), message: issue.message });
     }
   }
-  return issues;
+  return capList(issues, (count) => ({ path: "$", message: `… and ${count} more problems` }));
 }
 
 export type ParseStudyResult = { ok: true; study: StudyDocument } | { ok: false; issues: StudyIssue[] };

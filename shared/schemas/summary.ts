@@ -8,6 +8,7 @@
  * margins), never recomputed for the summary.
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import { PHENOMENA } from "./criteria";
 import { flutterKindSchema } from "./result";
 
@@ -18,7 +19,7 @@ export const SUMMARY_JWS_ALG = "EdDSA";
 export const SUMMARY_JWS_TYP = "stillspan-summary+jws";
 
 const text = (max: number) =>
-  z.string().trim().min(1, "must not be blank").max(max, `must have at most ${max} characters`);
+  userText().trim().min(1, "must not be blank").max(max, `must have at most ${max} characters`);
 const id = z.string().min(1).max(64).describe("Database identifier of the object");
 const sha256 = z.string().regex(/^[0-9a-f]{64}$/, "must be 64 lower-case hex digits (SHA-256)");
 const speedMps = (what: string) => z.number().nonnegative().describe(`${what}, m/s (mean wind at deck level)`);

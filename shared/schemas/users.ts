@@ -3,6 +3,7 @@
  * decimal strings; times as ISO 8601.
  */
 import { z } from "zod";
+import { userText } from "./input-rules";
 import { projectRoleSchema } from "./auth";
 
 /** One account as the administration page lists it, with every project membership. */
@@ -19,7 +20,7 @@ export type AdminUser = z.infer<typeof adminUserSchema>;
 /** PATCH /api/users/:id — rename an account or set its administrator flag (not one's own flag to false). */
 export const userPatchSchema = z
   .strictObject({
-    name: z.string().trim().min(1, "must not be blank").max(200, "must have at most 200 characters"),
+    name: userText().trim().min(1, "must not be blank").max(200, "must have at most 200 characters"),
     isAdmin: z.boolean(),
   })
   .partial()

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { createProjectWithMembers, openTestDb } from "../support/db.js";
+import { openTestDb } from "../support/db.js";
 import { testEnv } from "../support/env.js";
-import { api, signIn } from "../support/http.js";
-import { createAlternativeAndStudy, flutterMeta, readFixture, rowCounts, staticMeta, upload } from "../support/workspace.js";
+import { api } from "../support/http.js";
+import { analystWorkspace, flutterMeta, readFixture, rowCounts, staticMeta, upload } from "../support/workspace.js";
 
 const base = () => testEnv.baseUrl;
 const db = openTestDb();
@@ -11,9 +11,7 @@ let alternativeId: string;
 let studyId: string;
 
 beforeAll(async () => {
-  const projectId = await createProjectWithMembers(db, `Uploads test ${Date.now().toString(36)}`, { "analyst@stillspan.test": "analyst" });
-  analyst = await signIn(base(), "analyst@stillspan.test");
-  ({ alternativeId, studyId } = await createAlternativeAndStudy(base(), analyst, projectId));
+  ({ cookie: analyst, alternativeId, studyId } = await analystWorkspace(db, base(), "Uploads test"));
 });
 afterAll(() => db.$client.end());
 
@@ -37,6 +35,7 @@ const CORPUS: { file: string; as: "flutter" | "static" | "study"; issue: { row?:
   { file: "short-row.csv", as: "flutter", issue: { row: 4, message: /has 8 values; the header has 9 columns/ } },
   { file: "derivative-beyond-range.csv", as: "flutter", issue: { column: "A4", message: /data row 2: 1e\+300 is beyond ±100000/ } },
   { file: "static-missing-column.csv", as: "static", issue: { row: 1, column: "CM", message: /column CM is missing/ } },
+  { file: "only-commas.csv", as: "flutter", issue: { row: 1, column: "column 1", message: /no column names: the file holds only commas/ } },
   { file: "study-not-json.json", as: "study", issue: { row: 4, message: /JSON/ } },
 ];
 

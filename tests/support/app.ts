@@ -3,7 +3,7 @@ import type { AddressInfo } from "node:net";
 import { createApp } from "../../server/app.js";
 import { loadConfig, type Config } from "../../server/config.js";
 import { createDb, type Db } from "../../server/db/client.js";
-import { logger } from "../../server/logger.js";
+import { logger, type Logger } from "../../server/logger.js";
 import { testEnv } from "./env.js";
 
 export interface TestApp {
@@ -18,6 +18,8 @@ export interface StartTestAppOptions {
   databaseUrl?: string;
   /** Environment overrides on top of the test environment (e.g. { TRUST_PROXY: "1" }). */
   env?: Record<string, string>;
+  /** The app's logger (default: silent), e.g. one from createLogger writing to a stream the test measures. */
+  logger?: Logger;
 }
 
 export async function startTestApp(options: StartTestAppOptions = {}): Promise<TestApp> {
@@ -28,7 +30,7 @@ export async function startTestApp(options: StartTestAppOptions = {}): Promise<T
     ...options.env,
   });
   const db = createDb(options.databaseUrl ?? testEnv.databaseUrl, { max: 3, connectionTimeoutMillis: 2000 });
-  const app = createApp({ db, config, logger: logger.child({}, { level: "silent" }), clientDir: "/nonexistent" });
+  const app = createApp({ db, config, logger: options.logger ?? logger.child({}, { level: "silent" }), clientDir: "/nonexistent" });
   const server = app.listen(0, "127.0.0.1");
   await new Promise<void>((resolve, reject) => {
     server.once("listening", resolve);

@@ -4,7 +4,8 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { sql } from "drizzle-orm";
 import type { Db } from "../../server/db/client.js";
-import { api, type ApiResponse } from "./http.js";
+import { createProjectWithMembers } from "./db.js";
+import { api, signIn, type ApiResponse } from "./http.js";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 export const fixturesDir = path.resolve(here, "../fixtures");
@@ -96,4 +97,11 @@ export async function createAlternativeAndStudy(baseUrl: string, cookie: string,
   });
   if (study.status !== 201) throw new Error(`study: ${study.status} ${JSON.stringify(study.body)}`);
   return { alternativeId: alt.body.id as string, studyId: study.body.id as string, revision1Id: study.body.latestRevision.id as string };
+}
+
+/** A fresh project whose analyst is the demo analyst, signed in, with an alternative and a study (revision 1). */
+export async function analystWorkspace(db: Db, baseUrl: string, label: string) {
+  const projectId = await createProjectWithMembers(db, `${label} ${Date.now().toString(36)}`, { "analyst@stillspan.test": "analyst" });
+  const cookie = await signIn(baseUrl, "analyst@stillspan.test");
+  return { projectId, cookie, ...(await createAlternativeAndStudy(baseUrl, cookie, projectId)) };
 }

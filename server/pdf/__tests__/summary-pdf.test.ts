@@ -127,3 +127,15 @@ describe("renderSummaryPdf", () => {
     expect(none.text).toContain("all branches stay damped");
   });
 });
+
+describe("renderSummaryPdf with very long pole paths", () => {
+  it("draws branches of 70,000 steps each (Math.max(...values) once overflowed the stack there)", async () => {
+    const speeds = Array.from({ length: 70_000 }, (_, i) => i * 0.002);
+    const branches: PdfBranch[] = [
+      { id: "V1", steps: speeds.map((u) => ({ speed: u, frequency: 0.124, damping: 0.005 + 0.003 * u })) },
+      { id: "T1", steps: speeds.map((u) => ({ speed: u, frequency: 0.342, damping: 0.004 - 0.0001 * u })) },
+    ];
+    const long = await renderSummaryPdf({ summary: inventedSummary(), jws, branches });
+    expect(long.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+  });
+});

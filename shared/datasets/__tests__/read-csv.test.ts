@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { fitStaticSlopes } from "../fit-static-slopes";
 import { readFlutterDerivativesCsv } from "../read-flutter-derivatives-csv";
+import { readStaticCoefficientsCsv } from "../read-static-coefficients-csv";
 import { readNumber } from "../read-csv-table";
 
 const utf8 = (text: string) => new TextEncoder().encode(text);
@@ -25,6 +26,7 @@ describe("readNumber", () => {
     ["-inf", /is -inf: only finite numbers/],
     ["1e999", /out of the range/],
     ["0x10", /is not a number/],
+    ["1e-320", /"1e-320" is a denormal number/],
   ])("refuses %j", (cell, message) => {
     const read = readNumber(cell);
     expect(read.ok).toBe(false);
@@ -93,5 +95,62 @@ describe("fitStaticSlopes", () => {
       ok: false,
       pointCount: 1,
     });
+  });
+});
+
+describe("files that once crashed the reader or echoed themselves", () => {
+  it("a file of only commas is refused with the line and column, not a crash", () => {
+    for (const text of [",,,,,,,,\n,,,,,,,,\n", ",\n\n,,\n", ",,,"]) {
+      const read = readFlutterDerivativesCsv(utf8(text), "Ur");
+      expect(read.ok, JSON.stringify(text)).toBe(false);
+      if (!read.ok) expect(read.issues).toEqual([{ row: 1, column: "column 1", message: expect.stringMatching(/no column names: the file holds only commas/) }]);
+    }
+    expect(readStaticCoefficientsCsv(utf8(",,,\n")).ok).toBe(false);
+  });
+
+  it("a K file of 125,000 rows (under 1 MB) is refused with the row limit and the first line past it", () => {
+    const rows = Array.from({ length: 125_000 }, (_, i) => `${(125_000 - i) / 1000}`);
+    const bytes = utf8(`K\n${rows.join("\n")}\n`);
+    expect(bytes.length).toBeLessThan(1024 * 1024);
+    const read = readFlutterDerivativesCsv(bytes, "K");
+    expect(read.ok).toBe(false);
+    if (!read.ok) {
+      expect(read.issues).toEqual([
+        { row: 10_002, message: "The file has 125000 data rows; at most 10000 are accepted (line 10002 is row 10001)." },
+      ]);
+    }
+  });
+
+  it("a table at the row limit is read", () => {
+    const rows = Array.from({ length: 10_000 }, (_, i) => `${1 + i / 100},${-i / 1000}`);
+    const read = readFlutterDerivativesCsv(utf8(`Ur,H1\n${rows.join("\n")}\n`), "Ur");
+    expect(read.ok).toBe(true);
+    if (read.ok) expect(read.delivered.abscissa).toHaveLength(10_000);
+  });
+
+  it("a 1 MB header cell is quoted to 100 characters, in the message and in the column", () => {
+    const cell = "Z".repeat(1024 * 1024);
+    const read = readFlutterDerivativesCsv(utf8(`Ur,${cell}\n1,2\n2,3\n`), "Ur");
+    expect(read.ok).toBe(false);
+    if (!read.ok) {
+      expect(JSON.stringify(read.issues).length).toBeLessThan(1000);
+      expect(read.issues[0].message).toMatch(/^"Z{100}…" \(1048576 characters\) is not a known column/);
+      expect(read.issues[0].column).toHaveLength(100);
+    }
+  });
+
+  it("a long bad number is quoted to 100 characters", () => {
+    const read = readNumber("9".repeat(400) + "x");
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(read.message.length).toBeLessThan(160);
+  });
+
+  it("a header of 200,000 unknown columns lists 50 problems and counts the rest", () => {
+    const read = readFlutterDerivativesCsv(utf8(`Ur,${Array.from({ length: 200_000 }, (_, i) => `c${i}`).join(",")}\n`), "Ur");
+    expect(read.ok).toBe(false);
+    if (!read.ok) {
+      expect(read.issues).toHaveLength(51);
+      expect(read.issues[50]).toEqual({ message: "… and 199950 more problems." });
+    }
   });
 });

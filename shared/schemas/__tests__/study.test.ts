@@ -58,7 +58,7 @@ describe("stillspan.study/1 schema", () => {
     ["zero frequency", (d) => (d.structure.modes[1].frequency = 0),
       { path: "$.structure.modes[1].frequency", message: "must be greater than 0" }],
     ["damping 1", (d) => (d.structure.modes[0].damping = 1),
-      { path: "$.structure.modes[0].damping", message: "must be less than 1" }],
+      { path: "$.structure.modes[0].damping", message: "must be at most 0.2: damping is a ratio: 0.005 is 0.5 % (1 would be 100 %)" }],
     ["negative damping", (d) => (d.structure.modes[0].damping = -0.01),
       { path: "$.structure.modes[0].damping", message: "must be at least 0" }],
     ["bad dof", (d) => (d.structure.modes[1].dof = "sway"),

@@ -1,10 +1,11 @@
+import type { ReactNode } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 
 interface QuantityFieldProps {
   label: string;
   unit?: string;
-  hint?: string;
+  hint?: ReactNode;
   error?: string;
   /** react-hook-form registration (numbers are registered with valueAsNumber). */
   registration: UseFormRegisterReturn;

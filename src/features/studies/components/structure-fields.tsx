@@ -1,5 +1,6 @@
 import { useWatch, type Control, type FieldErrors, type UseFormRegister } from "react-hook-form";
 import type { StudyDocument } from "@shared/schemas/study";
+import { dampingWarning } from "@/features/studies/utils/damping-warning";
 import { derivedQuantities, type DeepPartial } from "@/features/studies/utils/derived-quantities";
 import { QuantityField } from "@/features/studies/components/quantity-field";
 
@@ -56,6 +57,8 @@ export function StructureFields({ register, control, errors, readOnly }: Structu
             const modeErrors = errors.structure?.modes?.[index];
             const label = mode?.dof === "torsion" ? "Torsional" : "Vertical (heave)";
             const damping = typeof mode?.damping === "number" && Number.isFinite(mode.damping) ? mode.damping : null;
+            const warning = dampingWarning(damping);
+            const dampingText = damping !== null ? `${(damping * 100).toFixed(2)} % · δ ${(2 * Math.PI * damping).toFixed(3)}` : undefined;
             return (
               <tr key={index} className="align-top">
                 <th scope="row" className="py-1 pr-2 font-semibold text-ink-800">
@@ -71,7 +74,14 @@ export function StructureFields({ register, control, errors, readOnly }: Structu
                   <QuantityField label={`${label} damping ratio`} unit="ratio" readOnly={readOnly} value={mode?.damping}
                     registration={register(`structure.modes.${index}.damping`, num)}
                     error={modeErrors?.damping?.message}
-                    hint={damping !== null ? `${(damping * 100).toFixed(2)} % · δ ${(2 * Math.PI * damping).toFixed(3)}` : undefined}
+                    hint={
+                      warning ? (
+                        <>
+                          {dampingText}
+                          <span className="block font-semibold text-caution-700">{warning}</span>
+                        </>
+                      ) : dampingText
+                    }
                     className="[&_label]:sr-only [&>span:first-child]:sr-only" />
                 </td>
               </tr>
