@@ -1,3 +1,5 @@
+import type { ZodError } from "zod";
+
 /**
  * The one error type the server throws on purpose. `status` is the HTTP status, `code` a stable machine-readable
  * word the client can switch on, `message` a sentence safe to show the user, `details` optional structured data
@@ -31,4 +33,9 @@ export class AppError extends Error {
   static conflict(message: string, details?: unknown): AppError {
     return new AppError(409, "conflict", message, { details });
   }
+}
+
+/** One line per invalid field: its path, the rule it broke and the message (the `details` of a 400). */
+export function zodIssues(err: ZodError): { path: string; rule: string; message: string }[] {
+  return err.issues.map((i) => ({ path: i.path.length ? i.path.join(".") : "(body)", rule: i.code, message: i.message }));
 }

@@ -1,16 +1,11 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import { ZodError } from "zod";
-import { AppError } from "../errors.js";
+import { AppError, zodIssues } from "../errors.js";
 import type { Logger } from "../logger.js";
 
 /** Body of every error response: `{ error: { code, message, details? } }`. */
 export interface ErrorBody {
   error: { code: string; message: string; details?: unknown };
-}
-
-/** One line per invalid field: its path, the rule it broke and the message. */
-export function zodIssues(err: ZodError): { path: string; rule: string; message: string }[] {
-  return err.issues.map((i) => ({ path: i.path.length ? i.path.join(".") : "(body)", rule: i.code, message: i.message }));
 }
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
