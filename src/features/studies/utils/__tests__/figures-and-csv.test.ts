@@ -4,6 +4,7 @@ import type { StudyDocument } from "@shared/schemas/study";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
 import { stepRows, stepsCsv } from "@/features/studies/utils/result-csv";
 import { dampingFigure, polePathFigure } from "@/features/studies/utils/result-figures";
+import { dampingAxisRange } from "@/lib/damping-frame";
 
 /** The IABSE TG 3.1 benchmark deck's inputs (domain guide §5) on a short coarse sweep; only the plot and CSV plumbing is checked. */
 const study: StudyDocument = {
@@ -62,6 +63,7 @@ describe("damping plot of a branch that turns into a real pole", () => {
     expect((figure.data[0] as { y: Array<number | null> }).y).toEqual([2, null, null, 3]);
     const range = (figure.layout.yaxis as { range: [number, number] }).range;
     expect(range[1]).toBeLessThan(50);
+    expect(range).toEqual(dampingAxisRange(real.modes[0].steps)); // the framing shared with the signed summary
   });
 });
 
