@@ -13,7 +13,6 @@ const finite = (description: string) => z.number({ error: "must be a number" }).
 
 export const DATASET_KINDS = ["flutter-derivatives", "static-coefficients"] as const;
 export const datasetKindSchema = z.enum(DATASET_KINDS);
-export type DatasetKind = z.infer<typeof datasetKindSchema>;
 
 /** Largest CSV accepted, bytes. */
 export const MAX_DATASET_FILE_BYTES = 1024 * 1024;

@@ -210,8 +210,6 @@ export const studyDocumentSchema = object({
 
 export type StudyDocument = z.infer<typeof studyDocumentSchema>;
 export type StudyAerodynamics = z.infer<typeof studyAerodynamicsSchema>;
-export type StudyMode = StudyDocument["structure"]["modes"][number];
-export type StudySweep = StudyDocument["sweep"];
 export type DerivativeName = (typeof DERIVATIVE_NAMES)[number];
 export { DERIVATIVE_NAMES };
 

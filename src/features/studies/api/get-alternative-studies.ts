@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
+import { queryOptions } from "@tanstack/react-query";
 import type { StudyDto } from "@shared/schemas/studies";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
@@ -12,8 +12,4 @@ export function getAlternativeStudiesQueryOptions(alternativeId: string) {
     queryKey: ["studies", "list", alternativeId],
     queryFn: ({ signal }) => getAlternativeStudies(alternativeId, signal),
   });
-}
-
-export function useAlternativeStudies(alternativeId: string) {
-  return useQuery(getAlternativeStudiesQueryOptions(alternativeId));
 }
