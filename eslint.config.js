@@ -102,6 +102,14 @@ export default tseslint.config(
     rules: {
       "react-hooks/rules-of-hooks": "error",
       "react-hooks/exhaustive-deps": "error",
+      // One home per query key (src/lib/query-keys.ts), so an invalidation in one feature matches another's query.
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector: "Property[key.name='queryKey'][value.type='ArrayExpression']",
+          message: "Query keys have one home: take this key from queryKeys in src/lib/query-keys.ts.",
+        },
+      ],
     },
   },
   {
