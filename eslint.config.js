@@ -113,6 +113,25 @@ export default tseslint.config(
     },
   },
   {
+    // Services reach the database through server/db/queries (which accept a transaction); types may be imported.
+    files: ["server/services/**/*.ts"],
+    ignores: ["server/**/__tests__/**"],
+    rules: {
+      "@typescript-eslint/no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["drizzle-orm", "drizzle-orm/*", "pg", "**/db/schema", "**/db/schema/*"],
+              allowTypeImports: true,
+              message: "Database access goes through server/db/queries (functions that take `(db, params)`).",
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // No database access from the HTTP layer: no driver, no query builder (see the zones above for our own modules).
     files: ["server/routes/**/*.ts", "server/middleware/**/*.ts"],
     rules: {

@@ -56,6 +56,8 @@ describe("POST /api/sweep", () => {
     const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: study });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("invalid_study");
+    // one format of the invalid_study message, the same as saving or importing a revision
+    expect(res.body.error.message).toMatch(/^The study document is not valid \(\d+ problems\): \$\.\S+ /);
     expect(res.body.error.details).toEqual(
       expect.arrayContaining([
         { path: "$.structure.modes[1].frequency", message: "must be greater than 0" },
