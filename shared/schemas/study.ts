@@ -1,7 +1,7 @@
 /**
  * The study document `stillspan.study/1`: one deck section model (2 DOF) with its structure, its
  * aerodynamics and the wind-speed sweep. Units are SI throughout; each numeric field's `.describe()` names
- * its unit. Conventions (domain guide §1): Scanlan's self-excited forces normalised with the full deck width
+ * its unit. Conventions (docs/conventions.md §Self-excited forces): Scanlan's self-excited forces normalised with the full deck width
  * B, K = Bω/U, Ur = U/(fB) = 2π/K, h and L positive downward, α and M nose-up.
  *
  * Messages are plain rule text ("must be greater than 0"); `formatStudyIssues` pairs each with the JSON path

@@ -13,7 +13,7 @@ const base = () => testEnv.baseUrl;
 const db = openTestDb();
 let cookies: Record<"admin" | "analyst" | "reviewer" | "viewer", string>;
 
-/** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (domain guide §5), flat plate, coarse sweep. */
+/** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (docs/conventions.md §Benchmark deck), flat plate, coarse sweep. */
 const benchmarkDeck = () => benchmarkDeckInputs({ from: 10, to: 100, step: 1 });
 
 beforeAll(async () => {
@@ -31,7 +31,7 @@ afterAll(() => db.$client.end());
 
 describe("POST /api/sweep", () => {
   it.each(["analyst", "reviewer", "admin"] as const)(
-    "runs the benchmark deck for an %s: 77.24 m/s flutter (domain guide §5, computed) in the result format",
+    "runs the benchmark deck for an %s: 77.24 m/s flutter (docs/conventions.md §Benchmark deck, computed) in the result format",
     async (role) => {
       const res = await api(base(), "/api/sweep", { cookie: cookies[role], body: benchmarkDeck() });
       expect(res.status).toBe(200);
