@@ -25,7 +25,7 @@ interface BenchCase {
   speeds: number;
 }
 
-/** Benchmark deck of the domain guide §5 (IABSE TG 3.1 inputs), flat plate, 1–150 m/s at 0.25 m/s. */
+/** Benchmark deck of docs/conventions.md §Benchmark deck (IABSE TG 3.1 inputs), flat plate, 1–150 m/s at 0.25 m/s. */
 const sectionDeck: StudyDocument = benchmarkDeck({ step: 0.25 });
 
 const grid = sweepGrid(1, 150, 0.25);

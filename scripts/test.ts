@@ -1,6 +1,8 @@
 /**
  * `npm test`: everything the README's test command promises, on a database of its own.
  *
+ *   0. the static checks, `npm run lint` (ESLint and knip) and `npm run typecheck` (tsc): a failure of either
+ *      ends the run before anything starts (skipped when arguments name what vitest runs, a focused run)
  *   1. Debian's Chromium for the browser tests (scripts/ensure-chromium.sh)
  *   2. the project's PostgreSQL cluster (started when needed), a database of its own (`stillspan_test_<pid>`, dropped afterwards) created,
  *      migrated and seeded with the demo data
@@ -10,7 +12,8 @@
  *      TEST_DATABASE_URL, TEST_SESSION_SECRET, SMTP_PORT (the app's fake SMTP server) and STILLSPAN_TEST=1;
  *      arguments after `--` go to vitest
  *
- * The app child is always stopped (its whole process group); the exit code is vitest's.
+ * The app child is always stopped (its whole process group); the exit code is vitest's, or 1 when a static
+ * check failed.
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -94,9 +97,29 @@ async function prepareDatabase(): Promise<{ testUrl: string; maintenanceUrl: str
   return { testUrl, maintenanceUrl };
 }
 
+/** `npm run lint` and `npm run typecheck`, both even when the first fails (one run shows every problem). */
+function staticChecks(): boolean {
+  let ok = true;
+  for (const script of ["lint", "typecheck"]) {
+    step(`npm run ${script}`);
+    const result = spawnSync("npm", ["run", "--silent", script], { cwd: projectRoot, stdio: "inherit" });
+    if (result.status !== 0) {
+      console.error(`[test] npm run ${script} failed (exit ${result.status ?? result.signal})`);
+      ok = false;
+    }
+  }
+  return ok;
+}
+
 async function main(): Promise<number> {
   const vitestArgs = process.argv.slice(2).filter((a, i) => !(i === 0 && a === "--"));
   mkdirSync(artifacts, { recursive: true });
+
+  if (vitestArgs.length === 0) {
+    if (!staticChecks()) return 1;
+  } else {
+    step("focused run: skipping lint and typecheck (a full `npm test` runs them)");
+  }
 
   step("checking Chromium");
   run("bash", [path.join(projectRoot, "scripts", "ensure-chromium.sh")]);

@@ -14,8 +14,6 @@ import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
 import { wellKnownRoutes } from "./routes/well-known.js";
 
-export type { AppContext } from "./app-context.js";
-
 export interface CreateAppOptions {
   db: Db;
   config: Config;

@@ -1,3 +1,6 @@
+import type { ZodError } from "zod";
+import { capList, clipValue } from "../shared/message-bounds.js";
+
 /**
  * The one error type the server throws on purpose. `status` is the HTTP status, `code` a stable machine-readable
  * word the client can switch on, `message` a sentence safe to show the user, `details` optional structured data
@@ -31,4 +34,17 @@ export class AppError extends Error {
   static conflict(message: string, details?: unknown): AppError {
     return new AppError(409, "conflict", message, { details });
   }
+}
+
+/**
+ * One line per invalid field: its path, the rule it broke and the message (the `details` of a 400) — at most 50
+ * lines, each path and message clipped, so an answer never repeats a huge input (zod quotes unknown keys).
+ */
+export function zodIssues(err: ZodError): { path: string; rule: string; message: string }[] {
+  const issues = err.issues.map((i) => ({
+    path: i.path.length ? clipValue(i.path.join("."), 200) : "(body)",
+    rule: i.code,
+    message: clipValue(i.message, 300),
+  }));
+  return capList(issues, (count) => ({ path: "(body)", rule: "more", message: `… and ${count} more problems` }));
 }

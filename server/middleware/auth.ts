@@ -1,14 +1,14 @@
 /**
  * Access control. `requireAuth` turns the session cookie into `req.user` (401 otherwise); `requireAdmin` and
- * `requireRole` guard routes; `assertRole` is the same rule for services. Administrators pass every role check.
+ * `requireRole` guard routes; `requireRole` applies `assertRole` (server/services/access.ts), the same rule the
+ * services apply. Administrators pass every role check.
  * The client hides what a role cannot do; these guards are what actually enforces it.
  */
 import type { Request, RequestHandler } from "express";
 import type { ProjectRole } from "../../shared/schemas/auth.js";
 import { appContext } from "../app-context.js";
-import type { DbOrTx } from "../db/client.js";
-import { findMembershipRole, projectExists } from "../db/queries/projects.js";
 import { AppError } from "../errors.js";
+import { assertRole, parseProjectId } from "../services/access.js";
 import { SESSION_COOKIE, userFromSession, type SessionUser } from "../services/auth.js";
 
 declare global {
@@ -43,37 +43,6 @@ export const requireAdmin: RequestHandler = (req, _res, next) => {
   if (!currentUser(req).isAdmin) throw AppError.forbidden("Only an administrator can do this.");
   next();
 };
-
-/** Parses a project id from the URL; anything but a positive integer is a project that does not exist. */
-export function parseProjectId(raw: string | number | undefined): number {
-  const id = typeof raw === "number" ? raw : /^\d{1,9}$/.test(raw ?? "") ? Number(raw) : NaN;
-  if (!Number.isSafeInteger(id) || id <= 0) throw AppError.notFound("Project");
-  return id;
-}
-
-/**
- * Service-level guard: the caller's role in the project when it is one of `roles`.
- * 404 when the project does not exist, 403 when the caller is not a member or has another role.
- * Administrators pass; their role is null unless they are also members.
- */
-export async function assertRole(
-  db: DbOrTx,
-  user: SessionUser,
-  projectId: number,
-  roles: readonly ProjectRole[],
-): Promise<ProjectRole | null> {
-  const role = await findMembershipRole(db, user.id, projectId);
-  if (role === undefined && !(await projectExists(db, projectId))) throw AppError.notFound("Project");
-  if (user.isAdmin) return role ?? null;
-  if (role === undefined) throw AppError.forbidden("You are not a member of this project.");
-  if (!roles.includes(role)) {
-    throw AppError.forbidden(`This needs the role ${roles.join(" or ")} on this project; yours is ${role}.`);
-  }
-  return role;
-}
-
-/** Every project role: for routes any member may use. */
-export const ANY_ROLE: readonly ProjectRole[] = ["analyst", "reviewer", "viewer"];
 
 /**
  * Route guard: lets the request through when the signed-in user holds one of `roles` in the project named by

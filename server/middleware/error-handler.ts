@@ -1,25 +1,12 @@
 import type { ErrorRequestHandler, Request, RequestHandler } from "express";
 import { ZodError } from "zod";
-import { capList, clipValue } from "../../shared/message-bounds.js";
-import { AppError } from "../errors.js";
+import { clipValue } from "../../shared/message-bounds.js";
+import { AppError, zodIssues } from "../errors.js";
 import type { Logger } from "../logger.js";
 
 /** Body of every error response: `{ error: { code, message, details? } }`. */
 export interface ErrorBody {
   error: { code: string; message: string; details?: unknown };
-}
-
-/**
- * One line per invalid field: its path, the rule it broke and the message — at most 50 lines, each path and
- * message clipped, so an answer never repeats a huge input (zod's own messages quote unknown keys).
- */
-export function zodIssues(err: ZodError): { path: string; rule: string; message: string }[] {
-  const issues = err.issues.map((i) => ({
-    path: i.path.length ? clipValue(i.path.join("."), 200) : "(body)",
-    rule: i.code,
-    message: clipValue(i.message, 300),
-  }));
-  return capList(issues, (count) => ({ path: "(body)", rule: "more", message: `… and ${count} more problems` }));
 }
 
 /** Where a request went, for the log: method and path, never the query string (it may carry user data). */

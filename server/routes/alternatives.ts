@@ -2,8 +2,8 @@ import { Router } from "express";
 import { createAlternativeSchema, MAX_IMAGE_BYTES, patchAlternativeSchema } from "../../shared/schemas/alternatives.js";
 import type { AppContext } from "../app-context.js";
 import { uploadOne } from "../lib/uploads.js";
-import { currentUser, fromParam, parseProjectId, requireAuth } from "../middleware/auth.js";
-import { parseObjectId } from "../services/access.js";
+import { currentUser, fromParam, requireAuth } from "../middleware/auth.js";
+import { parseObjectId, parseProjectId } from "../services/access.js";
 import {
   createAlternative,
   getAlternative,

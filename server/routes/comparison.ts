@@ -1,6 +1,7 @@
 import { Router } from "express";
 import type { AppContext } from "../app-context.js";
-import { currentUser, fromParam, parseProjectId, requireAuth } from "../middleware/auth.js";
+import { currentUser, fromParam, requireAuth } from "../middleware/auth.js";
+import { parseProjectId } from "../services/access.js";
 import { getComparison } from "../services/comparison.js";
 
 /** /api/projects/:projectId/comparison (analysts, reviewers). */

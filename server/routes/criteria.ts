@@ -1,7 +1,8 @@
 import { Router } from "express";
 import { putCriteriaBodySchema } from "../../shared/schemas/criteria.js";
 import type { AppContext } from "../app-context.js";
-import { ANY_ROLE, currentUser, fromParam, parseProjectId, requireAuth, requireRole } from "../middleware/auth.js";
+import { currentUser, fromParam, requireAuth, requireRole } from "../middleware/auth.js";
+import { ANY_ROLE, parseProjectId } from "../services/access.js";
 import { getProjectCriteria, getProjectCriteriaHistory, saveProjectCriteria } from "../services/criteria.js";
 
 /** /api/projects/:projectId/criteria: read (members), save a new version (analysts), history (members). */

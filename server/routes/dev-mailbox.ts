@@ -1,10 +1,9 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../app-context.js";
-import { listDevMail } from "../db/queries/dev-mail.js";
 import { AppError } from "../errors.js";
 import { requireAdmin, requireAuth } from "../middleware/auth.js";
-import { usesFakeSmtp } from "../services/mail.js";
+import { listDevMailbox, usesFakeSmtp } from "../services/mail.js";
 
 const mailboxQuerySchema = z.object({
   to: z.email().optional(),
@@ -22,19 +21,7 @@ export function devMailboxRoutes({ db, config }: AppContext): Router {
 
   router.get("/", async (req, res) => {
     const { to, limit } = mailboxQuerySchema.parse(req.query);
-    const messages = await listDevMail(db, { to: to?.toLowerCase(), limit });
-    res.json({
-      messages: messages.map((m) => ({
-        id: m.id,
-        from: m.fromAddress,
-        to: m.toAddresses,
-        subject: m.subject,
-        text: m.text,
-        html: m.html,
-        sizeBytes: m.sizeBytes,
-        receivedAt: m.receivedAt.toISOString(),
-      })),
-    });
+    res.json({ messages: await listDevMailbox(db, { to, limit }) });
   });
 
   return router;

@@ -1,7 +1,8 @@
 import { Router } from "express";
 import { acceptInvitationSchema, createInvitationSchema } from "../../shared/schemas/invitations.js";
 import type { AppContext } from "../app-context.js";
-import { currentUser, fromParam, parseProjectId, requireAdmin, requireAuth } from "../middleware/auth.js";
+import { currentUser, fromParam, requireAdmin, requireAuth } from "../middleware/auth.js";
+import { parseProjectId } from "../services/access.js";
 import { acceptInvitation, inviteToProject } from "../services/one-time-links.js";
 
 /** /api/projects/:projectId/invitations (administrators): invite someone to a project by e-mail. */

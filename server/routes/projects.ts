@@ -1,15 +1,8 @@
 import { Router } from "express";
 import { memberRoleInputSchema, projectCreateSchema, projectPatchSchema } from "../../shared/schemas/projects.js";
 import type { AppContext } from "../app-context.js";
-import {
-  ANY_ROLE,
-  currentUser,
-  fromParam,
-  parseProjectId,
-  requireAdmin,
-  requireAuth,
-  requireRole,
-} from "../middleware/auth.js";
+import { currentUser, fromParam, requireAdmin, requireAuth, requireRole } from "../middleware/auth.js";
+import { ANY_ROLE, parseObjectId, parseProjectId } from "../services/access.js";
 import { removeMember, setMember } from "../services/memberships.js";
 import {
   createProject,
@@ -19,7 +12,6 @@ import {
   listProjects,
   updateProject,
 } from "../services/projects.js";
-import { parseUserId } from "./users.js";
 
 /** /api/projects: list, read, edit (analysts), members; create, delete and membership (administrators). */
 export function projectRoutes({ db }: AppContext): Router {
@@ -55,7 +47,7 @@ export function projectRoutes({ db }: AppContext): Router {
 
   router.put("/:projectId/members/:userId", requireAdmin, async (req, res) => {
     const projectId = parseProjectId(fromParam()(req));
-    const userId = parseUserId(req);
+    const userId = parseObjectId(req.params.userId, "User");
     const input = memberRoleInputSchema.parse(req.body ?? {});
     const { member, created } = await setMember(db, currentUser(req), { projectId, userId, input, ip: req.ip });
     res.status(created ? 201 : 200).json(member);
@@ -63,7 +55,7 @@ export function projectRoutes({ db }: AppContext): Router {
 
   router.delete("/:projectId/members/:userId", requireAdmin, async (req, res) => {
     const projectId = parseProjectId(fromParam()(req));
-    await removeMember(db, currentUser(req), { projectId, userId: parseUserId(req), ip: req.ip });
+    await removeMember(db, currentUser(req), { projectId, userId: parseObjectId(req.params.userId, "User"), ip: req.ip });
     res.status(204).end();
   });
 

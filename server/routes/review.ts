@@ -2,17 +2,17 @@ import { Router, type Request } from "express";
 import { createCommentSchema, returnReviewSchema, signReviewSchema } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
 import { currentUser, requireAuth } from "../middleware/auth.js";
+import { parseObjectId } from "../services/access.js";
 import {
   addComment,
   getRevisionReview,
-  parseRevisionId,
   returnRevision,
   reviewQueue,
   submitForReview,
 } from "../services/review.js";
 import { signRevision } from "../services/summaries.js";
 
-const revisionId = (req: Request) => parseRevisionId(req.params.id);
+const revisionId = (req: Request) => parseObjectId(req.params.id, "Revision");
 
 /**
  * /api/revisions/:id/{review,submit,return,sign,comments}: the review workflow of one revision. Mounted beside

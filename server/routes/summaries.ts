@@ -1,7 +1,8 @@
 import { Router } from "express";
 import type { AppContext } from "../app-context.js";
 import { currentUser, requireAuth } from "../middleware/auth.js";
-import { getSummary, getSummaryPdf, listSummaries, parseSummaryId } from "../services/summaries.js";
+import { parseObjectId } from "../services/access.js";
+import { getSummary, getSummaryPdf, listSummaries } from "../services/summaries.js";
 
 /** /api/summaries: signed stability summaries of the caller's projects (viewers included), their PDF copies. */
 export function summaryRoutes({ db }: AppContext): Router {
@@ -13,11 +14,11 @@ export function summaryRoutes({ db }: AppContext): Router {
   });
 
   router.get("/:id", async (req, res) => {
-    res.json(await getSummary(db, currentUser(req), parseSummaryId(req.params.id)));
+    res.json(await getSummary(db, currentUser(req), parseObjectId(req.params.id, "Signed summary")));
   });
 
   router.get("/:id/pdf", async (req, res) => {
-    const { pdf, fileName } = await getSummaryPdf(db, currentUser(req), parseSummaryId(req.params.id));
+    const { pdf, fileName } = await getSummaryPdf(db, currentUser(req), parseObjectId(req.params.id, "Signed summary"));
     res.setHeader("Content-Type", "application/pdf");
     res.setHeader("Content-Disposition", `attachment; filename="${fileName}"`);
     res.setHeader("Cache-Control", "private, no-store");

@@ -1,16 +1,9 @@
-import { Router, type Request } from "express";
+import { Router } from "express";
 import { userPatchSchema } from "../../shared/schemas/users.js";
 import type { AppContext } from "../app-context.js";
-import { AppError } from "../errors.js";
-import { currentUser, fromParam, requireAdmin, requireAuth } from "../middleware/auth.js";
+import { currentUser, requireAdmin, requireAuth } from "../middleware/auth.js";
+import { parseObjectId } from "../services/access.js";
 import { listUsers, updateUser } from "../services/users.js";
-
-/** A user id from the URL (`:userId`); anything but a positive integer is a user that does not exist. */
-export function parseUserId(req: Request): number {
-  const raw = fromParam("userId")(req) ?? "";
-  if (!/^\d{1,9}$/.test(raw) || Number(raw) <= 0) throw AppError.notFound("User");
-  return Number(raw);
-}
 
 /** /api/users: account administration (administrators only). */
 export function userRoutes({ db }: AppContext): Router {
@@ -22,7 +15,7 @@ export function userRoutes({ db }: AppContext): Router {
   });
 
   router.patch("/:userId", async (req, res) => {
-    const userId = parseUserId(req);
+    const userId = parseObjectId(req.params.userId, "User");
     const patch = userPatchSchema.parse(req.body ?? {});
     res.json(await updateUser(db, currentUser(req), { userId, patch, ip: req.ip }));
   });

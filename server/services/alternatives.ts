@@ -15,8 +15,7 @@ import { AppError } from "../errors.js";
 import { checkImage } from "../lib/check-image.js";
 import { requireFile } from "../lib/uploads.js";
 import { sha256Hex } from "../lib/hash.js";
-import { assertRole } from "../middleware/auth.js";
-import { loadWithAccess, READ_ROLES, WRITE_ROLES, type Access } from "./access.js";
+import { assertRole, loadWithAccess, READ_ROLES, WRITE_ROLES, type Access } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
 export function toAlternativeDto(row: AlternativeRow): AlternativeDto {

@@ -5,8 +5,7 @@ import type { CriticalSpeeds } from "../../shared/schemas/revisions.js";
 import type { Db, DbOrTx } from "../db/client.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
 import { listProjectRevisions, listProjectStudies } from "../db/queries/revisions.js";
-import { assertRole } from "../middleware/auth.js";
-import { person, READ_ROLES } from "./access.js";
+import { assertRole, person, READ_ROLES } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
 export function flutterFound(c: CriticalSpeeds): CriticalSpeed {

@@ -16,7 +16,7 @@ import {
   type CriteriaVersionRow,
 } from "../db/queries/criteria.js";
 import { AppError } from "../errors.js";
-import { ANY_ROLE, assertRole } from "../middleware/auth.js";
+import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
 const savedBy = (row: CriteriaVersionRow) =>

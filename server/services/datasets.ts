@@ -26,10 +26,9 @@ import {
   type DatasetRow,
 } from "../db/queries/datasets.js";
 import type { NewAeroDataset } from "../db/schema/index.js";
-import { AppError } from "../errors.js";
+import { AppError, zodIssues } from "../errors.js";
 import { sha256Hex } from "../lib/hash.js";
 import { requireFile } from "../lib/uploads.js";
-import { zodIssues } from "../middleware/error-handler.js";
 import { loadWithAccess, person, type Access } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
 import { matchingDataset } from "./summary-payload.js";

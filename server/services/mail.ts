@@ -5,7 +5,7 @@
  */
 import type { Config } from "../config.js";
 import type { Db } from "../db/client.js";
-import { insertDevMail } from "../db/queries/dev-mail.js";
+import { insertDevMail, listDevMail } from "../db/queries/dev-mail.js";
 import type { Logger } from "../logger.js";
 import { startFakeSmtp, type FakeSmtp } from "../mail/fake-smtp.js";
 import { createMailer, DEFAULT_FROM, type Mailer, type OutgoingMail, type SmtpSettings } from "../mail/mailer.js";
@@ -81,4 +81,19 @@ export async function deliverMail(
     ctx.logger.error({ err, to: mail.to, subject: mail.subject }, "mail could not be sent");
     return false;
   }
+}
+
+/** What the local fake SMTP server received, newest first, as the mailbox API shows it; `to` keeps one recipient's. */
+export async function listDevMailbox(db: Db, filter: { to?: string; limit: number }) {
+  const messages = await listDevMail(db, { to: filter.to?.toLowerCase(), limit: filter.limit });
+  return messages.map((m) => ({
+    id: m.id,
+    from: m.fromAddress,
+    to: m.toAddresses,
+    subject: m.subject,
+    text: m.text,
+    html: m.html,
+    sizeBytes: m.sizeBytes,
+    receivedAt: m.receivedAt.toISOString(),
+  }));
 }

@@ -21,9 +21,9 @@ import {
   insertInvitation,
   insertPasswordReset,
 } from "../db/queries/one-time-tokens.js";
+import { upsertMembership } from "../db/queries/memberships.js";
 import { findProjectById } from "../db/queries/projects.js";
 import { findUserByEmail, insertUser, setPassword } from "../db/queries/users.js";
-import { memberships } from "../db/schema/index.js";
 import { AppError } from "../errors.js";
 import { sha256Hex } from "../lib/hash.js";
 import { invitationMail, ONE_TIME_LINK_TTL_HOURS } from "../mail/templates/invitation.js";
@@ -128,10 +128,7 @@ export async function acceptInvitation(
     if (!(await consumeInvitation(tx, invitation.id, user.id, new Date()))) {
       throw linkGone("invitation", "used"); // a concurrent accept won; the transaction rolls back
     }
-    await tx
-      .insert(memberships)
-      .values({ userId: user.id, projectId: invitation.projectId, role: invitation.role })
-      .onConflictDoUpdate({ target: [memberships.userId, memberships.projectId], set: { role: invitation.role } });
+    await upsertMembership(tx, { projectId: invitation.projectId, userId: user.id, role: invitation.role });
     await writeAudit(tx, {
       actorId: user.id,
       action: "invitation.accept",

@@ -14,7 +14,7 @@ import {
   type ProjectWithRole,
 } from "../db/queries/projects.js";
 import { AppError } from "../errors.js";
-import { ANY_ROLE, assertRole } from "../middleware/auth.js";
+import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
 export function toProjectDto(p: ProjectWithRole): ProjectDto {

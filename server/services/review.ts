@@ -33,19 +33,11 @@ import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignatureOfRevision } from "../db/queries/signatures.js";
 import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
-import { assertRole } from "../middleware/auth.js";
 import { verificationCode } from "../signing/verification-code.js";
-import { person } from "./access.js";
+import { assertRole, person } from "./access.js";
 import { divergenceFound, flutterFound, requiredSpeedsOf, stabilityMargin } from "./comparison.js";
 import type { SessionUser } from "./auth.js";
 import { notifyReturned, notifyReviewRequested } from "./review-mail.js";
-
-/** Parses a revision id from the URL; anything but a positive integer is a revision that does not exist. */
-export function parseRevisionId(raw: unknown): number {
-  const id = typeof raw === "string" && /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
-  if (!Number.isSafeInteger(id) || id <= 0) throw AppError.notFound("Revision");
-  return id;
-}
 
 /** The revision, after checking the caller holds one of `roles` in its project (404 / 403 otherwise). */
 async function revisionFor(

@@ -3,7 +3,7 @@ import type { ScreeningRequest } from "../../shared/schemas/criteria.js";
 import type { Db } from "../db/client.js";
 import { findCurrentCriteria, hasRoleInAnyProject } from "../db/queries/criteria.js";
 import { AppError } from "../errors.js";
-import { assertRole, parseProjectId } from "../middleware/auth.js";
+import { assertRole, parseProjectId } from "./access.js";
 import type { SessionUser } from "./auth.js";
 
 const SCREENING_ROLES = ["analyst", "reviewer"] as const;

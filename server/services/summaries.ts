@@ -18,10 +18,10 @@ import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignature, findSignatureByJws, insertSignature, listSignatures, type SignatureRow } from "../db/queries/signatures.js";
 import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
-import { ANY_ROLE, assertRole } from "../middleware/auth.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
 import { renderSummaryPdf } from "../pdf/summary-pdf.js";
 import { verificationCode } from "../signing/verification-code.js";
+import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { assertReviewer, revisionFor } from "./review.js";
 import { notifySigned } from "./review-mail.js";
@@ -175,12 +175,6 @@ export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<Summ
     current: r.currentSignatureId === r.id,
     newerUnsigned: r.newerUnsigned,
   }));
-}
-
-export function parseSummaryId(raw: unknown): number {
-  const id = typeof raw === "string" && /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
-  if (!Number.isSafeInteger(id) || id <= 0) throw AppError.notFound("Signed summary");
-  return id;
 }
 
 async function readableSignature(db: DbOrTx, user: SessionUser, id: number): Promise<SignatureRow> {

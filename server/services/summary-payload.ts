@@ -119,7 +119,7 @@ export async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Prom
   const { revision, criteria } = input;
   const { document, result } = revision;
   const evaluated = evaluateCriteria(criteria);
-  let screening = null;
+  let screening: ReturnType<typeof screenStudy> | null;
   try {
     screening = document.air.density > 0 ? screenStudy(document, criteria) : null;
   } catch {

@@ -15,7 +15,7 @@ export interface DenHartogResult {
  * dC_L/dα + C_D < 0 and ζ + ζ_a ≤ 0, i.e. from U = 4 m ζ ω / (−ρ B (dC_L/dα + C_D)).
  *
  * **Notes**: criterion from J.P. Den Hartog, *Mechanical Vibrations* (galloping of iced cables); the onset
- * speed is derived from the quasi-steady lift (domain guide §3, H1* = −(C_L′ + C_D)/K) and is identical to
+ * speed is derived from the quasi-steady lift (docs/conventions.md §Quasi-steady derivatives, H1* = −(C_L′ + C_D)/K) and is identical to
  * EN 1991-1-4 E.2.2 (E.18) with a_G = −(dC_L/dα + C_D) when Sc uses b = B. Signs: lift positive up, α
  * nose-up, slope per radian. Valid for low-frequency galloping (high reduced velocity) only.
  *

@@ -6,7 +6,7 @@ import { requirePositive } from "./check-input";
  * **Method**: v_div = [2 k_Θ / (ρ b² dc_M/dΘ)]^0.5 with k_Θ = I ω_α² (torsional stiffness per unit length)
  * and b = B.
  *
- * **Notes**: EN 1991-1-4:2005 Annex E.4.3, Expr. (E.24); the same closed form as the domain guide §4
+ * **Notes**: EN 1991-1-4:2005 Annex E.4.3, Expr. (E.24); the same closed form as docs/conventions.md §Divergence
  * (U_div = √(2 I ω_α² / (ρ B² S))). dc_M/dΘ per radian with the moment on ½ρU²B². No divergence when the
  * slope is ≤ 0 (returns null). Flat plate: S = π/2.
  *

@@ -22,9 +22,6 @@ export type CriticalSpeed =
  */
 export type MarginStatus = "pass" | "fail" | "undetermined" | "investigate" | "clear" | "not-evaluated";
 
-/** The statuses in the order a reader should attend to them (worst first). */
-export const MARGIN_STATUS_ORDER: readonly MarginStatus[] = ["fail", "undetermined", "investigate", "not-evaluated", "clear", "pass"];
-
 /** How a phenomenon's speed is judged: a stability limit, or an onset that triggers further checks. */
 export const CHECK_KIND: Record<Phenomenon, "stability" | "onset"> = {
   flutter: "stability",

@@ -7,7 +7,7 @@ import { screenVortexShedding, type VortexSheddingScreening } from "./screen-vor
 import { screeningCriticals } from "./screening-criticals";
 import { CAUTIONS } from "./sources";
 
-export type { LockIn, VortexModeCheck } from "./screen-vortex-shedding";
+export type { LockIn } from "./screen-vortex-shedding";
 
 export interface ScreeningResult {
   designWind: EvaluatedCriteria["designWind"] | null;

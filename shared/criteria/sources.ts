@@ -40,13 +40,14 @@ export const SOURCES = {
     `${EN_1991_1_4}, Annex E.2.2(2), Expr. (E.19): v_CG > 1.25 v_m (from memory: verify)`,
   denHartog:
     "J.P. Den Hartog, Mechanical Vibrations (4th ed., McGraw-Hill 1956), galloping criterion dC_L/dα + C_D < 0; " +
-    "onset speed U = 4 m ζ ω / (−ρ B (dC_L/dα + C_D)) derived from the quasi-steady heave damping (domain guide §3)",
+    "onset speed U = 4 m ζ ω / (−ρ B (dC_L/dα + C_D)), derived from the quasi-steady aerodynamic heave damping " +
+    "ratio ρ U B (dC_L/dα + C_D) / (4 m ω)",
   vortexAmplitude:
     `${EN_1991_1_4}, Annex E.1.5: vortex-induced cross-wind amplitudes (and, for a deck, the accelerations that ` +
     "follow from them) where lock-in is possible (clause from memory: verify)",
   gallopingBySweep:
     "Flutter sweep with the heave derivative H1* (measured, or quasi-steady H1* = −(dC_L/dα + C_D)/K): the heave " +
-    "branch's damping includes the aerodynamic heave damping whose loss is galloping (domain guide §3)",
+    "branch's damping includes the aerodynamic heave damping whose loss is galloping",
   divergence:
     `${EN_1991_1_4}, Annex E.4.3, Expr. (E.24): v_div = [2 k_Θ / (ρ b² dc_M/dΘ)]^0.5, with k_Θ = I ω_α² and b = B`,
   divergenceCriterion: `${EN_1991_1_4}, Annex E.4.3(3): v_div > 2 v_m(z_s) (from memory: verify)`,
@@ -56,7 +57,7 @@ export const SOURCES = {
   logDecrement: "Logarithmic decrement δ_s = 2π ζ (small-damping relation between decrement and damping ratio)",
 } as const;
 
-/** Cautions that belong on every screening and criteria result (domain guide §9). */
+/** Cautions that belong on every screening and criteria result (docs/conventions.md §Cautions). */
 export const CAUTIONS: readonly string[] = [
   "Results are indicative.",
   "Screening formulas (EN 1991-1-4 Annex E) are simplified single-mode checks; bridge decks with unusual " +

@@ -8,7 +8,7 @@ export interface MomentSlope {
 }
 
 /**
- * Static moment slope S = dC_M/dα of a study's aerodynamics, in the order of the domain guide §4.
+ * Static moment slope S = dC_M/dα of a study's aerodynamics, in the order of docs/conventions.md §Divergence.
  *
  * **Method**: an explicit value first; else π/2 for the flat plate (Theodorsen's steady limit), the
  * quasi-steady model's momentSlope, a tabulated set's staticMomentSlope, or K²A3* at the table's largest

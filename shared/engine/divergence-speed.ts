@@ -2,7 +2,7 @@
  * Torsional divergence speed of a deck section from its static moment slope.
  *
  * Method: U_div = √(2 I ω_α² / (ρ B² S)), the speed at which the aerodynamic moment ½ρU²B²·S·α cancels the
- * torsional stiffness I ω_α² (domain guide §4; the same expression as EN 1991-1-4:2005 Annex E.4.3,
+ * torsional stiffness I ω_α² (docs/conventions.md §Divergence; the same expression as EN 1991-1-4:2005 Annex E.4.3,
  * Expr. (E.24) with k_Θ = I ω_α²).
  * Notes: no divergence (null) when S ≤ 0, S unknown, or ρ = 0.
  * @param inertiaKgM2PerM mass moment of inertia I, kg·m²/m

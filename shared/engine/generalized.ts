@@ -51,7 +51,7 @@ export interface GeneralizedSystem extends ModalSystem {
  * with G_{r_i s_j} = (1/ℓ)∫ r_i s_j dx by the trapezoidal rule on the stations; structurally
  * M = diag(M_i), C_s = diag(2 M_i ζ_i ω_i), K_s = diag(M_i ω_i²) (still-air modes are mass-orthogonal).
  * Source: Jain, Jones & Scanlan 1996, J. Struct. Eng. 122(7); Chen & Kareem 2006, J. Eng. Mech. 132(10)
- * (domain guide §6; lateral terms P1*..P6* and H5*, H6*, A5*, A6* are not included yet).
+ * (docs/conventions.md §Multimode; lateral terms P1*..P6* and H5*, H6*, A5*, A6* are not included yet).
  * Notes: one vertical and one torsional shape with the same sine reproduce the section model exactly.
  * @param input stations, deck properties, modes and aerodynamics (SI units)
  */

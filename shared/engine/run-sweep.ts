@@ -25,7 +25,7 @@ const COUPLED_PARTICIPATION = 0.1;
  * Runs the aeroelastic stability sweep of a section-model study: every pole tracked through the wind-speed
  * sweep by the p-k method, with the flutter speed, the divergence speed and Selberg's estimate.
  *
- * Method: the study is mapped onto the n-mode core (`sectionSystem`, domain guide §1 matrix form) with the
+ * Method: the study is mapped onto the n-mode core (`sectionSystem`, docs/conventions.md §Equations of motion) with the
  * aerodynamic model of `createAeroModel`; `trackPoles` solves and tracks every branch over the grid (with local
  * refinement), `locateFlutter` finds the lowest zero-damping crossing over all oscillatory branches to 1e-4 m/s
  * (Brent), `locateStaticCrossings` the real roots crossing zero (static instability, one warning, lowest first); divergence from its closed

@@ -15,7 +15,7 @@ export const SECTION_MIN_REDUCED_FREQUENCY = 1e-3;
  * (heave h in m, positive down; rotation α in rad, nose-up).
  *
  * Method: M = diag(m, I), C_s = diag(2 m ζ_h ω_h, 2 I ζ_α ω_α), K_s = diag(m ω_h², I ω_α²), and with the
- * products of the aerodynamic model (domain guide §1, Scanlan's form on the full width B)
+ * products of the aerodynamic model (docs/conventions.md §Self-excited forces, Scanlan's form on the full width B)
  *   K_ae = ½ρU² [[K²H4*, B K²H3*], [B K²A4*, B² K²A3*]],
  *   C_ae = ½ρUB [[K H1*, B K H2*], [B K A1*, B² K A2*]]    (rows/columns h, α; permuted to the input order).
  * Source: Jain, Jones & Scanlan 1996, J. Struct. Eng. 122(7) (force form); Scanlan & Tomko 1971.

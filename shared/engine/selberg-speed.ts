@@ -3,7 +3,7 @@
  *
  * Method: U_F = 3.71 f_α B √( √(m I) / (ρ B³) · (1 − (f_h / f_α)²) ) (Selberg 1961, "Oscillation and
  * aerodynamic stability of suspension bridges", Acta Polytechnica Scandinavica Ci 13; this grouping as in the
- * domain guide §4 — form from memory, checked numerically against thin-plate flutter).
+ * docs/conventions.md §Selberg — form from memory, checked numerically against thin-plate flutter).
  * Notes: defined only for f_α > f_h (null otherwise, or when ρ = 0). Within ~1–3 % of thin-plate flutter for
  * f_α/f_h ≥ 2, increasingly low below; an empirical reference whatever the aerodynamic model.
  * @param massKgPerM mass per unit length m, kg/m

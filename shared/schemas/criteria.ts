@@ -8,7 +8,7 @@
 import { z } from "zod";
 import type { EvaluatedCriteria } from "../criteria/evaluate-criteria";
 import { normalNumber, userText } from "./input-rules";
-import { formatStudyIssues, studyDocumentSchema, type StudyIssue } from "./study";
+import { studyDocumentSchema } from "./study";
 
 const typeError = (expected: string) => (issue: { input?: unknown }) =>
   issue.input === undefined ? "is required" : `must be ${expected}`;
@@ -127,13 +127,9 @@ export const projectCriteriaSchema = object({
     .describe("Free notes on the criteria (governing specification, agreements with the owner)"),
 });
 
-export type DesignWind = z.infer<typeof designWindSchema>;
 export type DesignWindInput = z.input<typeof designWindSchema>;
-export type Requirement = z.infer<typeof requirementSchema>;
 export type ProjectCriteria = z.infer<typeof projectCriteriaSchema>;
 export type ProjectCriteriaInput = z.input<typeof projectCriteriaSchema>;
-export type TerrainInput = DesignWind["terrain"];
-export type ProbabilityInput = DesignWind["probability"];
 
 /** Body of PUT /api/projects/:id/criteria. `baseVersion` (the version the editor started from) guards against lost updates. */
 export const putCriteriaBodySchema = object({
@@ -224,15 +220,3 @@ export const screeningRequestSchema = object({
 export type ScreeningStudy = z.infer<typeof screeningStudySchema>;
 export type ScreeningOptions = z.infer<typeof screeningOptionsSchema>;
 export type ScreeningRequest = z.infer<typeof screeningRequestSchema>;
-
-export type ParseResult<T> = { ok: true; value: T } | { ok: false; issues: StudyIssue[] };
-
-function parseWith<T>(schema: z.ZodType<T>, json: unknown): ParseResult<T> {
-  const result = schema.safeParse(json);
-  return result.success ? { ok: true, value: result.data } : { ok: false, issues: formatStudyIssues(result.error) };
-}
-
-/** Validates JSON-decoded project criteria; issues carry JSON paths such as "$.wind.deckHeight". */
-export const parseProjectCriteria = (json: unknown) => parseWith(projectCriteriaSchema, json);
-/** Validates a JSON-decoded screening request. */
-export const parseScreeningRequest = (json: unknown) => parseWith(screeningRequestSchema, json);

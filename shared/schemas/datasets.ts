@@ -3,7 +3,7 @@
  *
  * A data set is uploaded as `multipart/form-data` with two parts: `file` (the CSV, kept byte for byte with its
  * SHA-256) and `meta` (a JSON text matching `datasetMetaSchema`). Flutter derivatives are stored as delivered and
- * converted to the study convention (domain guide §1: Ur = U/(fB), Scanlan's forces on the full width B, h and
+ * converted to the study convention (docs/conventions.md §Self-excited forces: Ur = U/(fB), Scanlan's forces on the full width B, h and
  * L downward, α and M nose-up); static coefficients keep C_D on B or D as delivered and are also given on B.
  */
 import { z } from "zod";
@@ -14,7 +14,6 @@ const finite = (description: string) => normalNumber({ error: "must be a number"
 
 export const DATASET_KINDS = ["flutter-derivatives", "static-coefficients"] as const;
 export const datasetKindSchema = z.enum(DATASET_KINDS);
-export type DatasetKind = z.infer<typeof datasetKindSchema>;
 
 /** Largest CSV accepted, bytes. */
 export const MAX_DATASET_FILE_BYTES = 1024 * 1024;

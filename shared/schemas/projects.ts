@@ -49,11 +49,3 @@ export type ProjectCreateInput = z.infer<typeof projectCreateSchema>;
 /** PUT /api/projects/:id/members/:userId — administrators add a member or change their role. */
 export const memberRoleInputSchema = z.strictObject({ role: projectRoleSchema });
 export type MemberRoleInput = z.infer<typeof memberRoleInputSchema>;
-
-/** Body of a 409 on DELETE /api/projects/:id: what keeps the project (revisions are kept for good). */
-export const projectContentCountsSchema = z.object({
-  alternatives: z.number().int(),
-  studies: z.number().int(),
-  datasets: z.number().int(),
-});
-export type ProjectContentCounts = z.infer<typeof projectContentCountsSchema>;

@@ -58,7 +58,6 @@ export const sweepResultSchema = z.object({
 });
 
 export type SweepResult = z.infer<typeof sweepResultSchema>;
-export type SweepStep = z.infer<typeof sweepStepSchema>;
 export type SweepWarning = z.infer<typeof sweepWarningSchema>;
 export type SweepWarningCode = (typeof WARNING_CODES)[number];
 export type FlutterPoint = z.infer<typeof flutterSchema>;

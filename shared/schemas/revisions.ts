@@ -26,7 +26,6 @@ export const createRevisionSchema = z.strictObject({
   study: studyDocumentSchema,
 });
 export type CreateRevisionInput = z.input<typeof createRevisionSchema>;
-export type CreateRevision = z.infer<typeof createRevisionSchema>;
 
 /** Multipart fields of POST /api/studies/:id/import besides the `file` part (a study JSON file). */
 export const importRevisionFieldsSchema = z.strictObject({
@@ -104,7 +103,6 @@ export const documentChangeSchema = z.object({
   /** Absent when kind is "removed". */
   new: z.unknown().optional(),
 });
-export type DocumentChange = z.infer<typeof documentChangeSchema>;
 
 /** GET /api/revisions/:a/diff/:b: what changed from revision a to revision b. */
 export const revisionDiffSchema = z.object({

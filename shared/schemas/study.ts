@@ -1,7 +1,7 @@
 /**
  * The study document `stillspan.study/1`: one deck section model (2 DOF) with its structure, its
  * aerodynamics and the wind-speed sweep. Units are SI throughout; each numeric field's `.describe()` names
- * its unit. Conventions (domain guide §1): Scanlan's self-excited forces normalised with the full deck width
+ * its unit. Conventions (docs/conventions.md §Self-excited forces): Scanlan's self-excited forces normalised with the full deck width
  * B, K = Bω/U, Ur = U/(fB) = 2π/K, h and L positive downward, α and M nose-up.
  *
  * Messages are plain rule text ("must be greater than 0"); `formatStudyIssues` pairs each with the JSON path
@@ -241,8 +241,6 @@ export const studyDocumentSchema = object({
 
 export type StudyDocument = z.infer<typeof studyDocumentSchema>;
 export type StudyAerodynamics = z.infer<typeof studyAerodynamicsSchema>;
-export type StudyMode = StudyDocument["structure"]["modes"][number];
-export type StudySweep = StudyDocument["sweep"];
 export type DerivativeName = (typeof DERIVATIVE_NAMES)[number];
 export { DERIVATIVE_NAMES };
 

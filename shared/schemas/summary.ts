@@ -144,10 +144,6 @@ export const summaryPayloadSchema = z.strictObject({
 });
 
 export type SummaryPayload = z.infer<typeof summaryPayloadSchema>;
-export type SummaryCriterion = z.infer<typeof summaryCriterionSchema>;
-export type SummaryMargin = z.infer<typeof summaryMarginSchema>;
-export type SummaryFlutter = z.infer<typeof summaryFlutterSchema>;
-export type SummaryWarning = z.infer<typeof summaryWarningSchema>;
 
 /** The cautions every rendering of a summary carries (page, PDF, e-mail that mentions results). */
 export const SUMMARY_CAUTIONS = [

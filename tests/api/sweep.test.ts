@@ -13,7 +13,7 @@ const base = () => testEnv.baseUrl;
 const db = openTestDb();
 let cookies: Record<"admin" | "analyst" | "reviewer" | "viewer", string>;
 
-/** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (domain guide §5), flat plate, coarse sweep. */
+/** Inputs of the IABSE TG 3.1 2-DOF benchmark deck (docs/conventions.md §Benchmark deck), flat plate, coarse sweep. */
 const benchmarkDeck = () => benchmarkDeckInputs({ from: 10, to: 100, step: 1 });
 
 beforeAll(async () => {
@@ -31,7 +31,7 @@ afterAll(() => db.$client.end());
 
 describe("POST /api/sweep", () => {
   it.each(["analyst", "reviewer", "admin"] as const)(
-    "runs the benchmark deck for an %s: 77.24 m/s flutter (domain guide §5, computed) in the result format",
+    "runs the benchmark deck for an %s: 77.24 m/s flutter (docs/conventions.md §Benchmark deck, computed) in the result format",
     async (role) => {
       const res = await api(base(), "/api/sweep", { cookie: cookies[role], body: benchmarkDeck() });
       expect(res.status).toBe(200);
@@ -56,6 +56,8 @@ describe("POST /api/sweep", () => {
     const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: study });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("invalid_study");
+    // one format of the invalid_study message, the same as saving or importing a revision
+    expect(res.body.error.message).toMatch(/^The study document is not valid \(\d+ problems\): \$\.\S+ /);
     expect(res.body.error.details).toEqual(
       expect.arrayContaining([
         { path: "$.structure.modes[1].frequency", message: "must be greater than 0" },

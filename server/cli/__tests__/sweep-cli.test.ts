@@ -17,7 +17,7 @@ function cli(...args: string[]) {
   return { code: run.status, stdout: run.stdout, stderr: run.stderr };
 }
 
-/** Benchmark deck inputs of the domain guide §5 (IABSE TG 3.1), flat plate, 1–150 m/s at 0.5 m/s. */
+/** Benchmark deck inputs of docs/conventions.md §Benchmark deck (IABSE TG 3.1), flat plate, 1–150 m/s at 0.5 m/s. */
 const study = benchmarkDeck();
 
 describe("npm run sweep (server/cli/sweep.ts)", () => {
@@ -28,7 +28,7 @@ describe("npm run sweep (server/cli/sweep.ts)", () => {
     expect(run.code, run.stderr).toBe(0);
     const result = sweepResultSchema.parse(JSON.parse(run.stdout));
     expect(result.modes[0].steps.map((s) => s.speed)).toEqual(Array.from({ length: 16 }, (_, i) => 60 + 2 * i));
-    expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3); // domain guide §5, computed
+    expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3); // docs/conventions.md §Benchmark deck, computed
   });
 
   it("rejects a bad file with one stderr line per field (JSON path and rule), exit code 2 and empty stdout", () => {

@@ -1,4 +1,4 @@
-import { aliasedTable, and, asc, eq, gt, sql } from "drizzle-orm";
+import { aliasedTable, and, asc, eq, sql } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
 import {
   alternatives,
@@ -34,8 +34,6 @@ export async function findReviewRequest(db: DbOrTx, revisionId: number, lock = f
   const [row] = lock ? await base.for("update") : await base;
   return row;
 }
-
-export type ReviewRequestRow = NonNullable<Awaited<ReturnType<typeof findReviewRequest>>>;
 
 /** First submission: inserts the request; a concurrent first submission hits the unique key (23505). */
 export async function insertReviewRequest(
@@ -167,14 +165,5 @@ export async function listReviewQueue(db: DbOrTx, reviewerId: number) {
     )
     .where(and(eq(reviewRequests.reviewerId, reviewerId), eq(reviewRequests.state, "in-review")))
     .orderBy(asc(reviewRequests.submittedAt), asc(reviewRequests.id));
-}
-
-/** Number of revisions of the study newer than `number`. */
-export async function countNewerRevisions(db: DbOrTx, studyId: number, number: number): Promise<number> {
-  const [row] = await db
-    .select({ n: sql<number>`count(*)::int` })
-    .from(studyRevisions)
-    .where(and(eq(studyRevisions.studyId, studyId), gt(studyRevisions.number, number)));
-  return row.n;
 }
 

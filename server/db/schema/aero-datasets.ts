@@ -10,7 +10,7 @@ export const aeroDatasetKind = pgEnum("aero_dataset_kind", DATASET_KINDS);
 /**
  * Aerodynamic data of a deck alternative from section-model tests: flutter derivatives or static coefficients.
  * The uploaded file is kept byte for byte with its SHA-256; `delivered` holds its numbers as read, `converted`
- * the same data in the study convention (domain guide §1), so both can be shown and the conversion checked.
+ * the same data in the study convention (docs/conventions.md §Self-excited forces), so both can be shown and the conversion checked.
  */
 export const aeroDatasets = pgTable(
   "aero_datasets",

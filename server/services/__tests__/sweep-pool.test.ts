@@ -17,7 +17,7 @@ afterEach(() => {
 afterAll(() => closeSweepPool());
 
 describe("sweep worker pool", () => {
-  it("returns exactly runSweep's result for the benchmark deck (IABSE TG 3.1 inputs, domain guide §5: 77.24 m/s)", async () => {
+  it("returns exactly runSweep's result for the benchmark deck (IABSE TG 3.1 inputs, docs/conventions.md §Benchmark deck: 77.24 m/s)", async () => {
     const doc = study({ from: 10, to: 100, step: 1 });
     const pooled = await runSweepInPool(doc);
     expect(pooled).toEqual(runSweep(doc));

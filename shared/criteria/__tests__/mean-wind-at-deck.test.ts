@@ -11,7 +11,7 @@ function expectRelative(actual: number, expected: number, tol: number, what: str
 }
 
 describe("terrain and roughness factors (EN 1991-1-4:2005 §4.3.2, Expr. 4.4–4.5)", () => {
-  it("category II at 60 m gives c_r = 1.3471 (domain guide §8, computed) and equals k_r ln(z/z0) by hand", () => {
+  it("category II at 60 m gives c_r = 1.3471 (docs/conventions.md §Wind at deck level, computed) and equals k_r ln(z/z0) by hand", () => {
     // Hand computation from Expr. (4.4)–(4.5): k_r = 0.19 (0.05/0.05)^0.07 = 0.19; c_r = 0.19 ln(60/0.05).
     const byHand = 0.19 * Math.log(60 / 0.05);
     const result = roughnessFactor(60, 0.05, 2);
@@ -20,7 +20,7 @@ describe("terrain and roughness factors (EN 1991-1-4:2005 §4.3.2, Expr. 4.4–4
     expectRelative(result.roughnessFactor, 1.3471, 5e-5, "c_r domain check (computed)");
   });
 
-  it("category 0 gives k_r = 0.1560 (domain guide §8, computed; by hand 0.19·(0.003/0.05)^0.07)", () => {
+  it("category 0 gives k_r = 0.1560 (docs/conventions.md §Wind at deck level, computed; by hand 0.19·(0.003/0.05)^0.07)", () => {
     const byHand = 0.19 * Math.pow(0.003 / 0.05, 0.07);
     expectRelative(terrainFactor(0.003), byHand, 1e-12, "k_r by hand");
     expectRelative(terrainFactor(0.003), 0.156, 5e-4, "k_r domain check (computed)");
@@ -58,7 +58,7 @@ describe("probability factor (EN 1991-1-4:2005 §4.2(2) Note 4, Expr. 4.2, K = 0
     [100, 1.0385],
     [1000, 1.1565],
     [10000, 1.2635],
-  ])("return period %i years gives c_prob = %f (domain guide §8, computed) and matches Expr. (4.2) by hand", (years, expected) => {
+  ])("return period %i years gives c_prob = %f (docs/conventions.md §Wind at deck level, computed) and matches Expr. (4.2) by hand", (years, expected) => {
     const value = probabilityFactor(1 / years);
     expectRelative(value, byHand(years), 1e-12, `c_prob(${years} yr) by hand`);
     expectRelative(value, expected, 5e-5, `c_prob(${years} yr) domain check`);
@@ -74,7 +74,7 @@ describe("probability factor (EN 1991-1-4:2005 §4.2(2) Note 4, Expr. 4.2, K = 0
 });
 
 describe("mean wind at deck level (EN 1991-1-4:2005 §4.3.1, Expr. 4.3)", () => {
-  it("category II, z = 60 m, v_b = 26 m/s → v_m = 35.02 m/s (domain guide §8, computed) with every factor", () => {
+  it("category II, z = 60 m, v_b = 26 m/s → v_m = 35.02 m/s (docs/conventions.md §Wind at deck level, computed) with every factor", () => {
     const result = meanWindAtDeck({
       basicSpeed: 26,
       probability: { kind: "return-period", years: 50 },
@@ -89,7 +89,7 @@ describe("mean wind at deck level (EN 1991-1-4:2005 §4.3.1, Expr. 4.3)", () => 
     expect(result.sources.join(" ")).toMatch(/Expr\. \(4\.4\)/);
   });
 
-  it("category 0 → v_m = 40.18 m/s (domain guide §8, computed; by hand k_r ln(60/0.003) · 26)", () => {
+  it("category 0 → v_m = 40.18 m/s (docs/conventions.md §Wind at deck level, computed; by hand k_r ln(60/0.003) · 26)", () => {
     const result = meanWindAtDeck({
       basicSpeed: 26,
       probability: { kind: "annual-probability", value: 0.02 },

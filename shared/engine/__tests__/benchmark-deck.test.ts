@@ -4,7 +4,7 @@ import { createAeroModel } from "../aero/create-aero-model";
 import { runSweep } from "../run-sweep";
 import { benchmarkDeck, relativeError } from "./support/benchmark-deck";
 
-// Reference values: domain guide §5, "computed by an independent reference" (not published values; the paper's
+// Reference values: docs/conventions.md §Benchmark deck, "computed by an independent reference" (not published values; the paper's
 // participants' results were not checked). Tolerance 0.1 %.
 const TOLERANCE = 1e-3;
 
@@ -16,7 +16,7 @@ function expectClose(actual: number | undefined, expected: number, what: string)
   );
 }
 
-describe("benchmark deck of the IABSE TG 3.1 2-DOF benchmark (inputs from domain guide §5), flat plate", () => {
+describe("benchmark deck of the IABSE TG 3.1 2-DOF benchmark (inputs from docs/conventions.md §Benchmark deck), flat plate", () => {
   it("flutters at 77.24 m/s and 0.1936 Hz (K = 0.4881) with ζ = 0.3 %, coupled, from the torsion branch", () => {
     const result = runSweep(benchmarkDeck());
     const flutter = result.flutter!;
@@ -71,7 +71,7 @@ describe("benchmark deck of the IABSE TG 3.1 2-DOF benchmark (inputs from domain
         const c = 0.5 * rho * s.speed * B;
         const wh = 2 * Math.PI * 0.1;
         const wa = 2 * Math.PI * 0.278;
-        // x = [h, α]; domain guide §1 matrix form
+        // x = [h, α]; docs/conventions.md §Equations of motion
         const kt = [m * wh * wh - q * p.k2H4, -q * B * p.k2H3, -q * B * p.k2A4, I * wa * wa - q * B * B * p.k2A3];
         const ct = [2 * m * 0.003 * wh - c * p.kH1, -c * B * p.kH2, -c * B * p.kA1, 2 * I * 0.003 * wa - c * B * B * p.kA2];
         const a = new Matrix([

@@ -8,8 +8,8 @@ const quasiSteady = (liftSlope: number, dragCoefficient: number, momentSlope: nu
   ({ model: "quasi-steady", liftSlope, dragCoefficient, momentSlope }) as const;
 
 describe("Selberg's estimate against thin-plate flutter", () => {
-  // Selberg 1961, Acta Polytechnica Scandinavica Ci 13 (form of the domain guide §4, from memory). Against exact
-  // thin-plate flutter (ρ = 1.225, ζ = 0) it is within ~1–3 % for f_α/f_h ≥ 2 [domain guide §4, computed].
+  // Selberg 1961, Acta Polytechnica Scandinavica Ci 13 (form of docs/conventions.md §Selberg, from memory). Against exact
+  // thin-plate flutter (ρ = 1.225, ζ = 0) it is within ~1–3 % for f_α/f_h ≥ 2 [docs/conventions.md §Selberg, computed].
   it.each([2, 2.5, 3])("is within 3 %% of the flat-plate flutter speed at f_α/f_h = %s", (ratio) => {
     const study = benchmarkDeck({ density: 1.225, damping: 0, heaveHz: 0.278 / ratio, step: 1 });
     const result = runSweep(study);
@@ -25,7 +25,7 @@ describe("Selberg's estimate against thin-plate flutter", () => {
 });
 
 describe("divergence", () => {
-  it("equals U = √(2Iω_α²/(ρB²S)) (domain guide §4; EN 1991-1-4:2005 E.4.3 Expr. (E.24)) with S = momentSlope", () => {
+  it("equals U = √(2Iω_α²/(ρB²S)) (docs/conventions.md §Divergence; EN 1991-1-4:2005 E.4.3 Expr. (E.24)) with S = momentSlope", () => {
     const study: StudyDocument = { ...benchmarkDeck({ to: 200 }), aerodynamics: quasiSteady(5, 0.1, 1.2) };
     const result = runSweep(study);
     const omega = 2 * Math.PI * 0.278;

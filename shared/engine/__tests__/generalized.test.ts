@@ -6,7 +6,7 @@ import { trackPoles } from "../core/track-poles";
 import { generalizedSystem, type GeneralizedModeInput } from "../generalized";
 import { sweepGrid } from "../sweep-grid";
 
-// Consistency checks of the multimode formulation, domain guide §6 [computed by an independent reference, benchmark
+// Consistency checks of the multimode formulation, docs/conventions.md §Multimode [computed by an independent reference, benchmark
 // deck of §5, ℓ = 1000 m, flat plate]. Modal integrals after Jain, Jones & Scanlan 1996, J. Struct. Eng. 122(7).
 const SPAN = 1000;
 const stations = Float64Array.from({ length: 201 }, (_, i) => (i * SPAN) / 200);

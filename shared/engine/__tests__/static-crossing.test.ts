@@ -2,8 +2,8 @@
  * Static instability is reported once per physical crossing. The deck below is the invented demo's alternative B,
  * third revision (invented data, used only to drive the engine): its heave branch reaches the real axis, and its
  * larger real root crosses zero where the static stiffness det(K_s − K_ae) vanishes — one crossing, checked
- * against that determinant solved independently here (derived from the equation of motion, domain guide §1
- * matrix form, with the products K²H3*, K²H4*, K²A3*, K²A4* held at the table's last row as the engine does).
+ * against that determinant solved independently here (derived from the equation of motion, docs/conventions.md
+ * §Equations of motion, with the products K²H3*, K²H4*, K²A3*, K²A4* held at the table's last row as the engine does).
  */
 import { describe, expect, it } from "vitest";
 import type { CriticalPoint } from "../core/locate-critical";

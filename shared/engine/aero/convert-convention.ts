@@ -44,7 +44,7 @@ const NAMES = ["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const;
 const FLIPPED_BY_H_UP = new Set(["H2", "H3", "A1", "A4"]);
 
 /**
- * Converts a delivered set of flutter derivatives to the study convention (domain guide §1): Ur = U/(fB),
+ * Converts a delivered set of flutter derivatives to the study convention (docs/conventions.md §Self-excited forces): Ur = U/(fB),
  * Scanlan's forces on the full width B, h and L downward, α and M nose-up.
  *
  * Method: Ur = value (Ur), value/2 (Ur-half, since U/(fb) = 2U/(fB)), 2π/value (K), π/value (k-half,

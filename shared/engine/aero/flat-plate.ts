@@ -11,7 +11,7 @@ export const FLAT_PLATE_LOG_TERM_FLOOR_K = 1e-3;
 /**
  * Theodorsen's thin flat plate (axis at mid-chord) as flutter derivatives in the study convention.
  *
- * Method: with C(k) = F + iG at k = K/2 (`theodorsen`), the closed forms of the domain guide §2 written as
+ * Method: with C(k) = F + iG at k = K/2 (`theodorsen`), the closed forms of docs/conventions.md §Flat plate written as
  * the products the solver uses:
  *   K·H1* = −2πF,   K·H2* = −(π/2)(1 + F + 4G/K),   K²H3* = −2π(F − KG/4),   K²H4* = (π/2)(K² + 4KG),
  *   K·A1* = πF/2,   K·A2* = −(π/8)(1 − F − 4G/K),  K²A3* = (π/2)(K²/32 + F − KG/4), K²A4* = −πKG/2.

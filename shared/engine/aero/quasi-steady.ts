@@ -20,7 +20,7 @@ export interface QuasiSteadyCoefficients {
  * H2* = A2* = H4* = A4* = 0, the same products at every K.
  * Source: Den Hartog's quasi-steady argument (J. P. Den Hartog, Mechanical Vibrations, 4th ed., 1956, the
  * galloping section — §7.7 from memory); Simiu & Scanlan, Wind Effects on Structures (quasi-steady
- * self-excited forces); domain guide §3.
+ * self-excited forces); docs/conventions.md §Quasi-steady derivatives.
  *
  * Notes: heave aerodynamic damping −½ρUB·K·H1* is negative exactly when C_L′ + C_D < 0 (Den Hartog's galloping
  * criterion). With A2* = 0 the torsional mode gets no aerodynamic damping, so coupled flutter speeds from this

@@ -16,7 +16,7 @@ const TWO_PI = 2 * Math.PI;
  * Method: each derivative is interpolated in Ur, piecewise linearly or with the Fritsch–Carlson monotone
  * cubic (F. N. Fritsch & R. E. Carlson, SIAM J. Numer. Anal. 17(2), 1980); the products K·H1*, K²·H3*, …
  * are formed with K = 2π/Ur. Outside [Ur_min, Ur_max] the products are held at their values at the nearest
- * end (domain guide §1): quasi-steady-like behaviour at high Ur, and forces that vanish as U → 0 at low Ur.
+ * end (docs/conventions.md §Self-excited forces): quasi-steady-like behaviour at high Ur, and forces that vanish as U → 0 at low Ur.
  *
  * Notes: derivative arrays left out are zeros. The static moment slope is `staticMomentSlope` when given,
  * else K²·A3* at the largest Ur. Extrapolated values are unreliable: callers should warn when

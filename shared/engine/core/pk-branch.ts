@@ -83,7 +83,7 @@ export function solveBranchPk(
   let highG = Number.NaN;
   out.converged = false;
   work.factored = false; // Jacobian factors from another branch or speed are not reused
-  let it = 0;
+  let it: number;
   let k = 0;
   for (it = 1; it <= PK_MAX_ITERATIONS; it++) {
     k = assembleQuadratic(system, speedMps, omega, work);

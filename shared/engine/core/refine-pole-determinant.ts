@@ -36,7 +36,7 @@ export function refinePoleDeterminant(mass: Float64Array, work: PoleWorkspace, g
   let lastStep = Number.POSITIVE_INFINITY;
   const floor = 1e-3 * frequencyScale(mass, work);
   // entries of Q(λ) = λ²m + λc + k and Q'(λ) = 2λm + c for a 2×2 block, complex
-  let q11r = 0, q11i = 0, q12r = 0, q12i = 0, q21r = 0, q21i = 0, q22r = 0, q22i = 0;
+  let q11r: number, q11i: number, q12r: number, q12i: number, q21r: number, q21i: number, q22r: number, q22i: number;
   for (let it = 0; it < NEWTON_MAX_ITERATIONS; it++) {
     const l2r = lr * lr - li * li;
     const l2i = 2 * lr * li;

@@ -164,7 +164,7 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
       const target = targets[targets.length - 1];
       const last = branches[0][branches[0].length - 1].speedMps;
       const prev = branches.map((b) => b[b.length - 1]);
-      const pred = branches.map((b) => predict(b, target, n));
+      const pred = branches.map((b) => predict(b, target));
       if (accept(solveFast(target, prev, pred), prev, pred, false)) {
         targets.pop();
         continue;
@@ -199,7 +199,7 @@ function leadIn(speeds: readonly number[]): number[] {
 }
 
 /** Quadratic (Lagrange) extrapolation of a branch's pole in U from its last three steps. */
-function predict(steps: TrackedStep[], speed: number, n: number): Pole {
+function predict(steps: TrackedStep[], speed: number): Pole {
   const count = Math.min(3, steps.length);
   const pts = steps.slice(steps.length - count);
   let re = 0;

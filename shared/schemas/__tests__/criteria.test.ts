@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_REQUIREMENTS } from "@shared/criteria/default-requirements";
-import { designWindSchema, parseProjectCriteria, projectCriteriaSchema } from "@shared/schemas/criteria";
+import { designWindSchema, projectCriteriaSchema } from "@shared/schemas/criteria";
+import { formatStudyIssues } from "@shared/schemas/study";
 
 const valid = () => ({
   wind: {
@@ -14,9 +15,9 @@ const valid = () => ({
 
 describe("project criteria schema", () => {
   it("accepts valid criteria and fills the orography factor with 1", () => {
-    const result = parseProjectCriteria(valid());
-    expect(result.ok).toBe(true);
-    if (result.ok) expect(result.value.wind.orographyFactor).toBe(1);
+    const result = projectCriteriaSchema.safeParse(valid());
+    expect(result.success).toBe(true);
+    if (result.success) expect(result.data.wind.orographyFactor).toBe(1);
   });
 
   it("describes the numeric fields with their units", () => {
@@ -43,8 +44,9 @@ describe("project criteria schema", () => {
   ])("rejects %s with the path and the rule", (_name, mutate, issue) => {
     const doc = valid();
     mutate(doc);
-    const result = parseProjectCriteria(doc);
-    expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.issues).toContainEqual(issue);
+    // as the criteria form reports them: JSON path and rule (formatStudyIssues)
+    const result = projectCriteriaSchema.safeParse(doc);
+    expect(result.success).toBe(false);
+    if (!result.success) expect(formatStudyIssues(result.error)).toContainEqual(issue);
   });
 });

@@ -2,7 +2,7 @@ import type { StudyDocument } from "../../../schemas/study";
 
 /**
  * Inputs of the IABSE Task Group 3.1 two-degree-of-freedom benchmark deck (Diana et al., Structural Engineering
- * International 30(3), 2020 — journal details from memory; inputs as listed in the domain guide §5), with
+ * International 30(3), 2020 — journal details from memory; inputs as listed in docs/conventions.md §Benchmark deck), with
  * flat-plate aerodynamics.
  */
 export function benchmarkDeck(overrides: {
@@ -18,7 +18,7 @@ export function benchmarkDeck(overrides: {
   const factor = overrides.massFactor ?? 1;
   return {
     format: "stillspan.study/1",
-    name: "Benchmark deck, domain guide §5",
+    name: "Benchmark deck (IABSE TG 3.1 inputs), flat plate",
     air: { density: overrides.density ?? 1.22 },
     deck: { width: 31, depth: 3 },
     structure: {

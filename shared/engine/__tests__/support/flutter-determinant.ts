@@ -13,7 +13,7 @@ const div = (a: C, b: C): C => {
 /**
  * Second route to the flutter speed, independent of the p-k solver and of pole tracking: the frequency-domain
  * flutter determinant. For harmonic motion x e^{iωt} at a fixed reduced frequency K the section-model
- * equations (domain guide §1) read Z(U) x = 0 with
+ * equations (docs/conventions.md §Equations of motion) read Z(U) x = 0 with
  *   Z(U) = K_s + i(K/B)U C_s − U² [(K/B)² M + ½ρ P(K) + i ½ρ K Q(K)],
  * P = [[K²H4*, B K²H3*], [B K²A4*, B² K²A3*]], Q = [[K H1*, B K H2*], [B K A1*, B² K A2*]] / K·K (products),
  * so det Z(U) is a quartic in U. A real positive root U at some K is a speed with an undamped harmonic

@@ -75,13 +75,13 @@ describe("flat-plate model", () => {
     },
   );
 
-  // Domain guide §2 table, "computed from the closed forms" — a consistency check, 4 decimals.
+  // docs/conventions.md §Flat plate, table, "computed from the closed forms" — a consistency check, 4 decimals.
   it.each([
     [4, -2.2221, -1.2554, -1.5325, 1.0993, 0.5555, -0.1862, 0.4322, 0.1179],
     [8, -5.019, -1.5633, -6.7225, 0.2423, 1.2548, -0.6092, 1.7297, 0.3321],
     [12, -8.2255, -0.8392, -16.2615, -0.6373, 2.0564, -1.2902, 4.1145, 0.552],
     [16, -11.688, 0.7665, -30.5179, -1.4485, 2.922, -2.1916, 7.6786, 0.7548],
-  ])("reproduces the domain guide's derivative table at Ur = %d", (ur, ...expected) => {
+  ])("reproduces the derivative table of docs/conventions.md §Flat plate at Ur = %d", (ur, ...expected) => {
     const ours = model.derivatives((2 * Math.PI) / ur);
     NAMES.forEach((name, i) => {
       expect(Math.abs(ours[name] - expected[i]), `${name}* at Ur = ${ur}: ${ours[name]} vs ${expected[i]}`)

@@ -3,7 +3,7 @@ import { createFlatPlateModel } from "../flat-plate";
 import { createQuasiSteadyModel } from "../quasi-steady";
 
 describe("quasi-steady model", () => {
-  it("with C_L′ = 2π, C_D = 0, C_M′ = π/2 equals the flat plate's steady limits (domain guide §3)", () => {
+  it("with C_L′ = 2π, C_D = 0, C_M′ = π/2 equals the flat plate's steady limits (docs/conventions.md §Quasi-steady derivatives)", () => {
     const quasi = createQuasiSteadyModel({ liftSlope: 2 * Math.PI, dragCoefficient: 0, momentSlope: Math.PI / 2 });
     const plate = createFlatPlateModel().products(0);
     for (const K of [0.01, 0.5, 3]) {
@@ -17,7 +17,7 @@ describe("quasi-steady model", () => {
     expect(quasi.staticMomentSlope).toBe(Math.PI / 2);
   });
 
-  it("gives H1* = −(C_L′ + C_D)/K, H3* = −C_L′/K², A1* = C_M′/K, A3* = C_M′/K² (Simiu & Scanlan; domain guide §3)", () => {
+  it("gives H1* = −(C_L′ + C_D)/K, H3* = −C_L′/K², A1* = C_M′/K, A3* = C_M′/K² (Simiu & Scanlan; docs/conventions.md §Quasi-steady derivatives)", () => {
     const model = createQuasiSteadyModel({ liftSlope: 4.1, dragCoefficient: 0.12, momentSlope: 1.3 });
     const K = 0.8;
     const d = model.derivatives(K);

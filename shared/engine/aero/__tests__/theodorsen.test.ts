@@ -4,7 +4,7 @@ import reference from "./fixtures/aero-reference.json";
 
 describe("theodorsen", () => {
   // Published tables: Theodorsen, NACA Report 496 (1935); Bisplinghoff, Ashley & Halfman, Aeroelasticity (1955);
-  // 4 decimals, as reproduced in the domain guide §2 → tolerance 1e-4.
+  // 4 decimals, as reproduced in docs/conventions.md §Flat plate → tolerance 1e-4.
   it.each([
     [0.1, 0.8319, -0.1723],
     [0.2, 0.7276, -0.1886],

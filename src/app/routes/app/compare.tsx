@@ -1,6 +1,7 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { canUseWorkspace } from "@/lib/authorization";
+import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison";
 import { CompareView } from "@/features/studies/components/compare-view";
 import { requireAccess } from "@/app/routes/guards";
@@ -15,5 +16,6 @@ export const clientLoader =
 
 export function CompareRoute() {
   const { projectId = "" } = useParams();
-  return <CompareView key={projectId} projectId={projectId} />;
+  const criteria = useCriteria(projectId);
+  return <CompareView key={projectId} projectId={projectId} required={criteria.data?.evaluated?.required ?? null} />;
 }

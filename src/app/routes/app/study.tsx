@@ -4,6 +4,7 @@ import { canUseWorkspace, roleInProject } from "@/lib/authorization";
 import { useMe } from "@/features/auth/api/get-me";
 import { getStudyQueryOptions } from "@/features/studies/api/get-study";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
+import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { StudyChecks } from "@/features/criteria/components/study-checks";
 import { ReviewPanel } from "@/features/review/components/review-panel";
 import { StudyWorkspace } from "@/features/studies/components/study-workspace";
@@ -24,12 +25,14 @@ export function StudyRoute() {
   const { projectId = "", studyId = "" } = useParams();
   const me = useMe();
   const role = me.data ? roleInProject(me.data, projectId) : null;
+  const criteria = useCriteria(projectId);
   return (
     <StudyWorkspace
       key={studyId}
       projectId={projectId}
       studyId={studyId}
       readOnly={role !== "analyst"}
+      criteria={criteria}
       renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
       // The review of the revision being viewed, across both columns (beside the long result column it left a
       // hole): analysts submit it, its reviewer returns or signs it.

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ProjectCreateInput } from "@shared/schemas/projects";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { Project } from "@/types/api";
 
 export function createProject(input: ProjectCreateInput): Promise<Project> {
@@ -13,7 +14,7 @@ export function useCreateProject({ onSuccess }: { onSuccess?: (project: Project)
   return useMutation({
     mutationFn: createProject,
     onSuccess: async (project) => {
-      await queryClient.invalidateQueries({ queryKey: ["projects", "list"] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.projects.list() });
       onSuccess?.(project);
     },
   });

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { AdminUser } from "@shared/schemas/users";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Every account with its administrator flag and memberships (administrators only). */
 export function getUsers(signal?: AbortSignal): Promise<AdminUser[]> {
@@ -10,7 +11,7 @@ export function getUsers(signal?: AbortSignal): Promise<AdminUser[]> {
 
 export function getUsersQueryOptions() {
   return queryOptions({
-    queryKey: ["users", "list"],
+    queryKey: queryKeys.users.list(),
     queryFn: ({ signal }) => getUsers(signal),
   });
 }

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ProjectMember } from "@shared/schemas/projects";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { ProjectRole } from "@/types/api";
 import { getUsersQueryOptions } from "@/features/admin/api/get-users";
 
@@ -23,9 +24,9 @@ export function setMember({ projectId, userId, role }: SetMemberInput): Promise<
 export function invalidateMembership(queryClient: ReturnType<typeof useQueryClient>, projectId: string) {
   return Promise.all([
     queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey }),
-    queryClient.invalidateQueries({ queryKey: ["projects", "members", projectId] }),
-    queryClient.invalidateQueries({ queryKey: ["projects", "list"] }),
-    queryClient.invalidateQueries({ queryKey: ["auth", "me"] }),
+    queryClient.invalidateQueries({ queryKey: queryKeys.projects.members(projectId) }),
+    queryClient.invalidateQueries({ queryKey: queryKeys.projects.list() }),
+    queryClient.invalidateQueries({ queryKey: queryKeys.me() }),
   ]);
 }
 

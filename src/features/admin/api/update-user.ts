@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { AdminUser, UserPatch } from "@shared/schemas/users";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import { getUsersQueryOptions } from "@/features/admin/api/get-users";
 
 export function updateUser(userId: string, patch: UserPatch): Promise<AdminUser> {
@@ -16,7 +17,7 @@ export function useUpdateUser() {
     onSuccess: () =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey }),
-        queryClient.invalidateQueries({ queryKey: ["auth", "me"] }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.me() }),
       ]),
   });
 }

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { apiPaths } from "@/config/paths";
 import { api, ApiError } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { User } from "@/types/api";
 
 /** The signed-in user, or null when there is no valid session (a 401 is an answer here, not an error). */
@@ -13,11 +14,9 @@ export async function getMe(signal?: AbortSignal): Promise<User | null> {
   }
 }
 
-export const meQueryKey = ["auth", "me"] as const;
-
 export function getMeQueryOptions() {
   return queryOptions({
-    queryKey: meQueryKey,
+    queryKey: queryKeys.me(),
     queryFn: ({ signal }) => getMe(signal),
     staleTime: 5 * 60_000,
   });

@@ -2,9 +2,9 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { User } from "@/types/api";
 import type { SignInInput as SignInBody } from "@shared/schemas/auth";
-import { meQueryKey } from "@/features/auth/api/get-me";
 
 /**
  * The form's own rules, worded for a person at the keyboard; the server checks the same fields again with
@@ -33,7 +33,7 @@ export function useSignIn({ onSuccess }: { onSuccess?: (user: User) => void } = 
     onSuccess: (user) => {
       // Whatever another account left in the cache must not show to this one.
       queryClient.clear();
-      queryClient.setQueryData(meQueryKey, user);
+      queryClient.setQueryData(queryKeys.me(), user);
       onSuccess?.(user);
     },
   });

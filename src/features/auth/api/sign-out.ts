@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
-import { meQueryKey } from "@/features/auth/api/get-me";
+import { queryKeys } from "@/lib/query-keys";
 
 export function signOut(): Promise<void> {
   return api.post<void>(apiPaths.auth.signOut, undefined, { redirectOnUnauthorized: false });
@@ -14,8 +14,8 @@ export function useSignOut({ onSuccess }: { onSuccess?: () => void } = {}) {
     mutationFn: signOut,
     onSuccess: () => {
       // Mark the session gone first, so the sign-in page's check sees it, then drop everything else.
-      queryClient.setQueryData(meQueryKey, null);
-      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== meQueryKey[0] });
+      queryClient.setQueryData(queryKeys.me(), null);
+      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== queryKeys.me()[0] });
       onSuccess?.();
     },
   });

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { ProjectCriteriaVersionDto } from "@shared/schemas/criteria";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Every saved version of the project's criteria, newest first. */
 export function getCriteriaHistory(projectId: string, signal?: AbortSignal): Promise<ProjectCriteriaVersionDto[]> {
@@ -10,7 +11,7 @@ export function getCriteriaHistory(projectId: string, signal?: AbortSignal): Pro
 
 export function getCriteriaHistoryQueryOptions(projectId: string) {
   return queryOptions({
-    queryKey: ["criteria", "history", projectId],
+    queryKey: queryKeys.criteria.history(projectId),
     queryFn: ({ signal }) => getCriteriaHistory(projectId, signal),
   });
 }

@@ -3,6 +3,7 @@ import type { ScreeningResult } from "@shared/criteria/screen-study";
 import type { ScreeningOptions, ScreeningStudy } from "@shared/schemas/criteria";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 export interface ScreeningInput {
   /** The study document (a whole `stillspan.study/1` document is fine: other fields are ignored). */
@@ -28,7 +29,7 @@ function screeningKeyPart(input: ScreeningInput) {
 
 export function getScreeningQueryOptions(input: ScreeningInput) {
   return queryOptions({
-    queryKey: ["criteria", "screening", input.projectId ?? null, screeningKeyPart(input)],
+    queryKey: queryKeys.criteria.screening(input.projectId ?? null, screeningKeyPart(input)),
     queryFn: ({ signal }) => runScreening(input, signal),
     staleTime: Infinity,
   });

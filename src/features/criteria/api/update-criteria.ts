@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ProjectCriteria, ProjectCriteriaDto } from "@shared/schemas/criteria";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import { getCriteriaHistoryQueryOptions } from "@/features/criteria/api/get-criteria-history";
 import { getCriteriaQueryOptions } from "@/features/criteria/api/get-criteria";
 
@@ -31,9 +32,9 @@ export function useUpdateCriteria(projectId: string, options: { onSuccess?: (sav
       queryClient.setQueryData(getCriteriaQueryOptions(projectId).queryKey, saved);
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: getCriteriaHistoryQueryOptions(projectId).queryKey }),
-        queryClient.invalidateQueries({ queryKey: ["criteria", "screening"] }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.criteria.screenings() }),
         // The project's comparison carries margins computed against the criteria (studies feature's key).
-        queryClient.invalidateQueries({ queryKey: ["comparison", projectId] }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.comparison(projectId) }),
       ]);
       options.onSuccess?.(saved);
     },

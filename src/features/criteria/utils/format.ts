@@ -4,11 +4,6 @@ export function fixed(value: number | null | undefined, digits: number): string 
   return value === null || value === undefined || !Number.isFinite(value) ? "—" : value.toFixed(digits);
 }
 
-/** A speed in m/s to 0.01 m/s: required and design speeds are compared at that resolution. */
-export function speed(value: number | null | undefined): string {
-  return fixed(value, 2);
-}
-
 /** Up to `digits` significant figures, without trailing zeros: 0.003 → "0.003", 1.5504 → "1.55". */
 export function sig(value: number | null | undefined, digits = 4): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return "—";

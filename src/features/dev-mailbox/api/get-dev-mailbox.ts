@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { apiPaths } from "@/config/paths";
 import { ApiError, api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** One message as the local fake SMTP server received it (server/routes/dev-mailbox.ts). */
 export interface DevMailMessage {
@@ -33,7 +34,7 @@ export function getDevMailbox(query: DevMailboxQuery, signal?: AbortSignal): Pro
 
 export function getDevMailboxQueryOptions(query: DevMailboxQuery) {
   return queryOptions({
-    queryKey: ["dev-mailbox", "list", { to: query.to ?? null, limit: query.limit }],
+    queryKey: queryKeys.devMailbox.list({ to: query.to ?? null, limit: query.limit }),
     queryFn: ({ signal }) => getDevMailbox(query, signal).then((body) => body.messages),
     // New mail can arrive at any moment: each visit asks again rather than showing a 30 s old list.
     staleTime: 0,

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { Project } from "@/types/api";
 
 export function getProject(projectId: string, signal?: AbortSignal): Promise<Project> {
@@ -9,7 +10,7 @@ export function getProject(projectId: string, signal?: AbortSignal): Promise<Pro
 
 export function getProjectQueryOptions(projectId: string) {
   return queryOptions({
-    queryKey: ["projects", "detail", projectId],
+    queryKey: queryKeys.projects.detail(projectId),
     queryFn: ({ signal }) => getProject(projectId, signal),
   });
 }

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import type { Project } from "@/types/api";
 
 /** The projects the caller belongs to (all of them for an administrator). */
@@ -10,7 +11,7 @@ export function getProjects(signal?: AbortSignal): Promise<Project[]> {
 
 export function getProjectsQueryOptions() {
   return queryOptions({
-    queryKey: ["projects", "list"],
+    queryKey: queryKeys.projects.list(),
     queryFn: ({ signal }) => getProjects(signal),
   });
 }

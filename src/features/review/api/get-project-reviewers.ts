@@ -1,26 +1,17 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
+import type { ProjectMember } from "@shared/schemas/projects";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
-export interface ProjectMember {
-  userId: string;
-  name: string;
-  email: string;
-  role: "analyst" | "reviewer" | "viewer";
-}
-
-/** The project's members; the submit form offers its reviewers. */
-export function getProjectMembers(projectId: string, signal?: AbortSignal): Promise<ProjectMember[]> {
-  return api.get<ProjectMember[]>(apiPaths.projects.members(projectId), { signal });
-}
-
-export function getProjectMembersQueryOptions(projectId: string) {
-  return queryOptions({
-    queryKey: ["projects", "members", projectId],
-    queryFn: ({ signal }) => getProjectMembers(projectId, signal),
-  });
-}
-
+/**
+ * The project's reviewers, whom the submit form offers: its members (one cache entry with the projects feature's
+ * member list, under the same key), filtered to the reviewer role.
+ */
 export function useProjectReviewers(projectId: string) {
-  return useQuery({ ...getProjectMembersQueryOptions(projectId), select: (members) => members.filter((m) => m.role === "reviewer") });
+  return useQuery({
+    queryKey: queryKeys.projects.members(projectId),
+    queryFn: ({ signal }) => api.get<ProjectMember[]>(apiPaths.projects.members(projectId), { signal }),
+    select: (members) => members.filter((m) => m.role === "reviewer"),
+  });
 }

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { ReviewQueueItemDto } from "@shared/schemas/review";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Revisions in review assigned to the signed-in reviewer, oldest submission first. */
 export function getReviewQueue(signal?: AbortSignal): Promise<ReviewQueueItemDto[]> {
@@ -9,7 +10,7 @@ export function getReviewQueue(signal?: AbortSignal): Promise<ReviewQueueItemDto
 }
 
 export function getReviewQueueQueryOptions() {
-  return queryOptions({ queryKey: ["reviews", "queue"], queryFn: ({ signal }) => getReviewQueue(signal) });
+  return queryOptions({ queryKey: queryKeys.reviews.queue(), queryFn: ({ signal }) => getReviewQueue(signal) });
 }
 
 export function useReviewQueue() {

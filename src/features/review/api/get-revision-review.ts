@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { RevisionReviewDto } from "@shared/schemas/review";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** A revision's review: state, request, comments, history and signature. */
 export function getRevisionReview(revisionId: string, signal?: AbortSignal): Promise<RevisionReviewDto> {
@@ -10,7 +11,7 @@ export function getRevisionReview(revisionId: string, signal?: AbortSignal): Pro
 
 export function getRevisionReviewQueryOptions(revisionId: string) {
   return queryOptions({
-    queryKey: ["reviews", "revision", revisionId],
+    queryKey: queryKeys.reviews.revision(revisionId),
     queryFn: ({ signal }) => getRevisionReview(revisionId, signal),
   });
 }

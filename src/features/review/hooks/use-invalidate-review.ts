@@ -1,4 +1,5 @@
 import { useQueryClient } from "@tanstack/react-query";
+import { queryKeys } from "@/lib/query-keys";
 import { getRevisionReviewQueryOptions } from "@/features/review/api/get-revision-review";
 import { getReviewQueueQueryOptions } from "@/features/review/api/get-review-queue";
 
@@ -9,7 +10,7 @@ export function useInvalidateReview(revisionId: string) {
     await Promise.all([
       queryClient.invalidateQueries({ queryKey: getRevisionReviewQueryOptions(revisionId).queryKey }),
       queryClient.invalidateQueries({ queryKey: getReviewQueueQueryOptions().queryKey }),
-      queryClient.invalidateQueries({ queryKey: ["summaries"] }),
+      queryClient.invalidateQueries({ queryKey: queryKeys.summaries.all() }),
     ]);
   };
 }

@@ -1,7 +1,8 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
+import { queryOptions } from "@tanstack/react-query";
 import type { StudyDto } from "@shared/schemas/studies";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 export function getAlternativeStudies(alternativeId: string, signal?: AbortSignal): Promise<StudyDto[]> {
   return api.get<StudyDto[]>(apiPaths.alternatives.studies(alternativeId), { signal });
@@ -9,11 +10,7 @@ export function getAlternativeStudies(alternativeId: string, signal?: AbortSigna
 
 export function getAlternativeStudiesQueryOptions(alternativeId: string) {
   return queryOptions({
-    queryKey: ["studies", "list", alternativeId],
+    queryKey: queryKeys.studies.list(alternativeId),
     queryFn: ({ signal }) => getAlternativeStudies(alternativeId, signal),
   });
-}
-
-export function useAlternativeStudies(alternativeId: string) {
-  return useQuery(getAlternativeStudiesQueryOptions(alternativeId));
 }

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { ComparisonDto } from "@shared/schemas/comparison";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Latest critical speeds and margins of every study of the project, and each study's trend over revisions. */
 export function getComparison(projectId: string, signal?: AbortSignal): Promise<ComparisonDto> {
@@ -10,7 +11,7 @@ export function getComparison(projectId: string, signal?: AbortSignal): Promise<
 
 export function getComparisonQueryOptions(projectId: string) {
   return queryOptions({
-    queryKey: ["comparison", projectId],
+    queryKey: queryKeys.comparison(projectId),
     queryFn: ({ signal }) => getComparison(projectId, signal),
   });
 }

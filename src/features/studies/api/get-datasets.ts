@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { DatasetDto } from "@shared/schemas/datasets";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** The aerodynamic data sets uploaded for one deck alternative. */
 export function getDatasets(alternativeId: string, signal?: AbortSignal): Promise<DatasetDto[]> {
@@ -10,7 +11,7 @@ export function getDatasets(alternativeId: string, signal?: AbortSignal): Promis
 
 export function getDatasetsQueryOptions(alternativeId: string) {
   return queryOptions({
-    queryKey: ["datasets", "list", alternativeId],
+    queryKey: queryKeys.datasets.list(alternativeId),
     queryFn: ({ signal }) => getDatasets(alternativeId, signal),
   });
 }

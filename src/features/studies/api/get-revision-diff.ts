@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { RevisionDiffDto } from "@shared/schemas/revisions";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 export function getRevisionDiff(fromId: string, toId: string, signal?: AbortSignal): Promise<RevisionDiffDto> {
   return api.get<RevisionDiffDto>(apiPaths.revisions.diff(fromId, toId), { signal });
@@ -9,7 +10,7 @@ export function getRevisionDiff(fromId: string, toId: string, signal?: AbortSign
 
 export function getRevisionDiffQueryOptions(fromId: string, toId: string) {
   return queryOptions({
-    queryKey: ["revisions", "diff", fromId, toId],
+    queryKey: queryKeys.revisions.diff(fromId, toId),
     queryFn: ({ signal }) => getRevisionDiff(fromId, toId, signal),
     staleTime: Number.POSITIVE_INFINITY,
   });

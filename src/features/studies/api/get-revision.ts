@@ -2,6 +2,7 @@ import { queryOptions, useQueries, useQuery } from "@tanstack/react-query";
 import type { RevisionDto } from "@shared/schemas/revisions";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** One revision with its full study document and stored result. Revisions never change, so the cache keeps them. */
 export function getRevision(revisionId: string, signal?: AbortSignal): Promise<RevisionDto> {
@@ -10,7 +11,7 @@ export function getRevision(revisionId: string, signal?: AbortSignal): Promise<R
 
 export function getRevisionQueryOptions(revisionId: string) {
   return queryOptions({
-    queryKey: ["revisions", "detail", revisionId],
+    queryKey: queryKeys.revisions.detail(revisionId),
     queryFn: ({ signal }) => getRevision(revisionId, signal),
     staleTime: Number.POSITIVE_INFINITY,
   });

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { RevisionSummaryDto } from "@shared/schemas/revisions";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Every revision of a study, newest first as the API sends them (the timeline sorts by number anyway). */
 export function getRevisions(studyId: string, signal?: AbortSignal): Promise<RevisionSummaryDto[]> {
@@ -10,7 +11,7 @@ export function getRevisions(studyId: string, signal?: AbortSignal): Promise<Rev
 
 export function getRevisionsQueryOptions(studyId: string) {
   return queryOptions({
-    queryKey: ["studies", "revisions", studyId],
+    queryKey: queryKeys.studies.revisions(studyId),
     queryFn: ({ signal }) => getRevisions(studyId, signal),
     select: (rows) => [...rows].sort((a, b) => b.number - a.number),
   });

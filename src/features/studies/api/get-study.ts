@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { StudyDto } from "@shared/schemas/studies";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 export function getStudy(studyId: string, signal?: AbortSignal): Promise<StudyDto> {
   return api.get<StudyDto>(apiPaths.studies.detail(studyId), { signal });
@@ -9,7 +10,7 @@ export function getStudy(studyId: string, signal?: AbortSignal): Promise<StudyDt
 
 export function getStudyQueryOptions(studyId: string) {
   return queryOptions({
-    queryKey: ["studies", "detail", studyId],
+    queryKey: queryKeys.studies.detail(studyId),
     queryFn: ({ signal }) => getStudy(studyId, signal),
   });
 }

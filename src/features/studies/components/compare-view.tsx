@@ -4,13 +4,13 @@ import type { ComparisonDto } from "@shared/schemas/comparison";
 import type { RevisionDto } from "@shared/schemas/revisions";
 import type { StudyAerodynamics } from "@shared/schemas/study";
 import { computeMargins } from "@shared/criteria/margins";
+import type { RequiredSpeeds } from "@shared/criteria/required-speeds";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
 import { cn } from "@/lib/cn";
 import { useComparison } from "@/features/studies/api/get-comparison";
-import { useCriteria } from "@/features/studies/api/get-criteria";
 import { useRevisionList } from "@/features/studies/api/get-revision";
 import { ResultPlots } from "@/features/studies/components/result-plots";
 import { closedFormDivergence, criticalSpeedsOf } from "@/features/studies/components/result-summary";
@@ -51,11 +51,14 @@ function legendNames(revisions: readonly RevisionDto[], comparison: ComparisonDt
  * Two to four revisions — of one study or of different deck alternatives — side by side: damping and pole
  * paths overlaid (colour per revision, dash per branch) and a table of critical speeds and margins.
  */
-export function CompareView({ projectId }: { projectId: string }) {
+export function CompareView({ projectId, required }: {
+  projectId: string;
+  /** The project's required speeds for the margins, null without criteria (src/app reads them from the criteria feature). */
+  required: RequiredSpeeds | null;
+}) {
   const [search, setSearch] = useSearchParams();
   const selected = (search.get("revisions") ?? "").split(",").filter(Boolean).slice(0, MAX);
   const comparison = useComparison(projectId);
-  const criteria = useCriteria(projectId);
   const revisions = useRevisionList(selected);
   const loaded = revisions.every((q) => q.isSuccess);
   const runs = useMemo(
@@ -135,7 +138,7 @@ export function CompareView({ projectId }: { projectId: string }) {
             <LoadingBlock label="Loading the revisions…" className="min-h-96" />
           ) : (
             <>
-              <ComparisonTable revisions={revisions.map((q) => q.data!)} comparison={comparison.data} required={criteria.data?.evaluated?.required ?? null} />
+              <ComparisonTable revisions={revisions.map((q) => q.data!)} comparison={comparison.data} required={required} />
               <ResultPlots runs={runs} />
             </>
           )}
@@ -148,7 +151,7 @@ export function CompareView({ projectId }: { projectId: string }) {
 function ComparisonTable({ revisions, comparison, required }: {
   revisions: RevisionDto[];
   comparison: ComparisonDto | undefined;
-  required: Parameters<typeof computeMargins>[1] | null;
+  required: RequiredSpeeds | null;
 }) {
   const legend = legendNames(revisions, comparison);
   const columns = revisions.map((revision) => {

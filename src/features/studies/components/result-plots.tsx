@@ -1,5 +1,4 @@
 import { useMemo } from "react";
-import type { SweepResult } from "@shared/schemas/result";
 import { Card } from "@/components/ui/card";
 import { Plot } from "@/components/ui/plot";
 import { dampingFigure, frequencyFigure, polePathFigure, type PlotRun } from "@/features/studies/utils/result-figures";
@@ -28,8 +27,4 @@ export function ResultPlots({ runs, dimmed = false }: { runs: readonly PlotRun[]
       </div>
     </div>
   );
-}
-
-export function singleRun(result: SweepResult, name = "Result"): PlotRun[] {
-  return [{ name, result }];
 }

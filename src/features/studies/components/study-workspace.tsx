@@ -1,5 +1,7 @@
+import type { UseQueryResult } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { Link, useSearchParams } from "react-router-dom";
+import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { PageHeader } from "@/components/ui/page-header";
@@ -7,7 +9,6 @@ import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { formatDateTime } from "@/lib/format";
-import { useCriteria } from "@/features/studies/api/get-criteria";
 import { useDatasets } from "@/features/studies/api/get-datasets";
 import { useRevision } from "@/features/studies/api/get-revision";
 import { useRevisions } from "@/features/studies/api/get-revisions";
@@ -20,6 +21,8 @@ interface StudyWorkspaceProps {
   studyId: string;
   /** Reviewers (and administrators who are not the project's analysts) see everything, edit nothing. */
   readOnly: boolean;
+  /** The project's criteria, for the margins (loaded by the criteria feature; src/app composes the two). */
+  criteria: UseQueryResult<ProjectCriteriaDto>;
   renderChecks?: StudyEditorProps["renderChecks"];
   renderFullWidth?: StudyEditorProps["renderFullWidth"];
 }
@@ -37,13 +40,12 @@ export function queryErrorPanel(title: string, error: Error, retry: () => void, 
   );
 }
 
-/** Loads the study, the revision to start from (the latest, or `?revision=N`), the criteria and the data sets. */
-export function StudyWorkspace({ projectId, studyId, readOnly, renderChecks, renderFullWidth }: StudyWorkspaceProps) {
+/** Loads the study, the revision to start from (the latest, or `?revision=N`) and the data sets. */
+export function StudyWorkspace({ projectId, studyId, readOnly, criteria, renderChecks, renderFullWidth }: StudyWorkspaceProps) {
   const [search] = useSearchParams();
   const wanted = Number(search.get("revision")) || null;
   const study = useStudy(studyId);
   const revisions = useRevisions(studyId);
-  const criteria = useCriteria(projectId);
   const datasets = useDatasets(study.data?.alternativeId ?? null);
   const [draft, setDraft] = useState<RebasedDraft | null>(null);
   // Opening another revision (or landing on the one just saved) ends a re-based draft.

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { SummaryListItemDto } from "@shared/schemas/review";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** Signed summaries of the caller's projects, newest first. */
 export function getSummaries(signal?: AbortSignal): Promise<SummaryListItemDto[]> {
@@ -9,7 +10,7 @@ export function getSummaries(signal?: AbortSignal): Promise<SummaryListItemDto[]
 }
 
 export function getSummariesQueryOptions() {
-  return queryOptions({ queryKey: ["summaries", "list"], queryFn: ({ signal }) => getSummaries(signal) });
+  return queryOptions({ queryKey: queryKeys.summaries.list(), queryFn: ({ signal }) => getSummaries(signal) });
 }
 
 export function useSummaries() {

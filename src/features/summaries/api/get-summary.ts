@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { SummaryDto } from "@shared/schemas/review";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 
 /** One signed summary: the payload as signed, its JWS, whether it is current, and the pole paths for the plots. */
 export function getSummary(summaryId: string, signal?: AbortSignal): Promise<SummaryDto> {
@@ -9,7 +10,7 @@ export function getSummary(summaryId: string, signal?: AbortSignal): Promise<Sum
 }
 
 export function getSummaryQueryOptions(summaryId: string) {
-  return queryOptions({ queryKey: ["summaries", "detail", summaryId], queryFn: ({ signal }) => getSummary(summaryId, signal) });
+  return queryOptions({ queryKey: queryKeys.summaries.detail(summaryId), queryFn: ({ signal }) => getSummary(summaryId, signal) });
 }
 
 export function useSummary(summaryId: string) {

@@ -2,6 +2,7 @@ import { useQuery } from "@tanstack/react-query";
 import { canonicalJson } from "@shared/canonical-json";
 import type { SummaryPayload } from "@shared/schemas/summary";
 import { verifySummary } from "@shared/verify-summary";
+import { queryKeys } from "@/lib/query-keys";
 import { getJwksQueryOptions } from "@/features/summaries/api/get-jwks";
 
 export type Verification =
@@ -17,7 +18,7 @@ export type Verification =
 export function useSummaryVerification(summaryId: string, jws: string, shown: SummaryPayload): Verification {
   const jwks = useQuery(getJwksQueryOptions());
   const check = useQuery({
-    queryKey: ["signatures", "verify", summaryId, jws],
+    queryKey: queryKeys.signatures.verify(summaryId, jws),
     enabled: jwks.isSuccess,
     staleTime: Infinity,
     queryFn: async (): Promise<Verification> => {

@@ -29,7 +29,7 @@ describe("parseGrid", () => {
 
 describe("importDerivativeCsv", () => {
   it("converts a set delivered on 2B with heave up and K as abscissa to the study convention, rows by increasing Ur", () => {
-    // Domain guide §1: values on 2B are half of ours; with h and L upward H2*, H3*, A1*, A4* change sign; Ur = 2π/K.
+    // docs/conventions.md §Self-excited forces: values on 2B are half of ours; with h and L upward H2*, H3*, A1*, A4* change sign; Ur = 2π/K.
     const records = [["K", "H1", "H2", "H3", "A1", "A2"], ["1.0", "-1", "-0.2", "-0.5", "0.3", "-0.1"], ["0.5", "-2", "-0.1", "-1.5", "0.6", "-0.3"]];
     const imported = importDerivativeCsv(records, { abscissa: "K", normalisation: "2B", sign: "h-up" });
     if ("fatal" in imported) throw new Error(imported.fatal);

@@ -4,7 +4,7 @@ import { derivedQuantities } from "@/features/studies/utils/derived-quantities";
 import { explainWarning, warningSpeeds, WARNING_TITLES } from "@/features/studies/utils/warning-text";
 
 describe("derivedQuantities", () => {
-  it("gives f_α/f_h, √(I/m) and m/(ρB²) for the IABSE TG 3.1 benchmark inputs (domain guide §5)", () => {
+  it("gives f_α/f_h, √(I/m) and m/(ρB²) for the IABSE TG 3.1 benchmark inputs (docs/conventions.md §Benchmark deck)", () => {
     const q = derivedQuantities({
       air: { density: 1.22 },
       deck: { width: 31 },

@@ -1,34 +1,20 @@
 import { describe, expect, it } from "vitest";
 import { runSweep } from "@shared/engine/run-sweep";
-import type { StudyDocument } from "@shared/schemas/study";
+import { benchmarkDeck } from "@shared/engine/__tests__/support/benchmark-deck";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
 import { stepRows, stepsCsv } from "@/features/studies/utils/result-csv";
 import { dampingFigure, polePathFigure } from "@/features/studies/utils/result-figures";
+import { dampingAxisRange } from "@/lib/damping-frame";
 
-/** The IABSE TG 3.1 benchmark deck's inputs (domain guide §5) on a short coarse sweep; only the plot and CSV plumbing is checked. */
-const study: StudyDocument = {
-  format: "stillspan.study/1",
-  name: "benchmark deck, thin plate",
-  air: { density: 1.22 },
-  deck: { width: 31, depth: 3 },
-  structure: {
-    mass: 22_740,
-    inertia: 2.47e6,
-    modes: [
-      { id: "h", dof: "heave", frequency: 0.1, damping: 0.003 },
-      { id: "a", dof: "torsion", frequency: 0.278, damping: 0.003 },
-    ],
-  },
-  aerodynamics: { model: "flat-plate" },
-  sweep: { from: 60, to: 90, step: 2 },
-};
+/** The IABSE TG 3.1 benchmark deck on a short coarse sweep (the engine tests' one definition); only the plot and CSV plumbing is checked. */
+const study = benchmarkDeck({ from: 60, to: 90, step: 2 });
 const result = runSweep(study);
 
 describe("steps CSV", () => {
   it("has one row per tracked step of every branch, ordered by speed, with SI units in the header", () => {
     const lines = stepsCsv(result).trimEnd().split("\r\n");
     const total = result.modes.reduce((n, m) => n + m.steps.length, 0);
-    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_h,participation_a,mac,confidence");
+    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_V1,participation_T1,mac,confidence");
     expect(lines).toHaveLength(total + 1);
     const speeds = stepRows(result).map((r) => r.speed);
     expect(speeds).toEqual([...speeds].sort((x, y) => x - y));
@@ -62,6 +48,7 @@ describe("damping plot of a branch that turns into a real pole", () => {
     expect((figure.data[0] as { y: Array<number | null> }).y).toEqual([2, null, null, 3]);
     const range = (figure.layout.yaxis as { range: [number, number] }).range;
     expect(range[1]).toBeLessThan(50);
+    expect(range).toEqual(dampingAxisRange(real.modes[0].steps)); // the framing shared with the signed summary
   });
 });
 

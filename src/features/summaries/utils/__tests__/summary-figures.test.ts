@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { inventedSummary } from "@shared/schemas/__tests__/fixtures/invented-summary";
 import type { SummaryBranchDto } from "@shared/schemas/review";
-import { dampingFigure as workspaceDampingFigure } from "@/features/studies/utils/result-figures";
+import { dampingAxisRange } from "@/lib/damping-frame";
 import { dampingFigure } from "@/features/summaries/utils/summary-figures";
 
 /**
@@ -37,10 +37,7 @@ describe("summary damping plot", () => {
     expect(v2.y.filter((y) => y === null)).toHaveLength(10);
   });
 
-  it("uses the workspace's framing for the same poles", () => {
-    const branches = inventedBranches();
-    const result = { modes: branches.map((b) => ({ id: b.id, steps: b.steps })), flutter: null, divergence: null, warnings: [] };
-    const workspace = workspaceDampingFigure([{ name: "r1", result: result as never }]);
-    expect((workspace.layout.yaxis as { range: [number, number] }).range).toEqual(range);
+  it("uses the framing shared with the workspace's plot (src/lib/damping-frame) for the same poles", () => {
+    expect(range).toEqual(dampingAxisRange(inventedBranches().flatMap((b) => b.steps)));
   });
 });
