@@ -25,6 +25,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
 
     if (err instanceof AppError) {
       if (err.status >= 500) logger.error({ err, url: req.originalUrl }, err.message);
+      if (err.retryAfterS !== undefined) res.setHeader("Retry-After", String(err.retryAfterS));
       return send(err.status, { code: err.code, message: err.message, details: err.details });
     }
     if (err instanceof ZodError) {

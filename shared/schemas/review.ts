@@ -4,6 +4,7 @@
  * `in-review`, and ends `returned` (with comments; it may be submitted again) or `signed` (final).
  */
 import { z } from "zod";
+import type { SweepSampling } from "./result";
 import type { ComparisonMargin } from "./comparison";
 import type { SummaryPayload } from "./summary";
 
@@ -158,5 +159,7 @@ export interface SummaryDto {
   newestRevisionNumber: number;
   /** Pole paths of the stored result of the signed revision (same content hash), for the plots. */
   branches: SummaryBranchDto[];
+  /** How many of the solved steps `branches` carries (the stored result's `sampling`; null for older results). */
+  branchSampling: SweepSampling | null;
   jwksUrl: string;
 }
