@@ -1,7 +1,7 @@
 import type { SweepResult, SweepStep, SweepWarning } from "../../shared/schemas/result.js";
 
 /** Most steps one branch carries in an API answer or a stored revision. */
-export const MAX_SHOWN_STEPS_PER_BRANCH = 2000;
+const MAX_SHOWN_STEPS_PER_BRANCH = 2000;
 /** Fewest steps a branch is thinned to, however many branches there are. */
 const MIN_SHOWN_STEPS_PER_BRANCH = 100;
 /** What the branches of one answer may take as JSON, bytes (the answer stays under about 2 MB with warnings). */

@@ -6,7 +6,7 @@ import type { SweepResult } from "../../shared/schemas/result.js";
  * CRLF, SI units in the header), branch by branch in speed order. Numbers are written exactly (shortest
  * round-trip form), so the JSON made from the CSV by `stepsCsvToJson` holds the engine's own values.
  */
-export function stepsCsvHeader(branchIds: readonly string[]): string {
+function stepsCsvHeader(branchIds: readonly string[]): string {
   return [
     "branch",
     "speed_m_s",
@@ -44,7 +44,7 @@ export function* stepsCsvChunks(result: Pick<SweepResult, "modes">, rowsPerChunk
 }
 
 /** A CSV field, quoted when it holds a comma or a quote; line breaks inside become spaces (one row per line). */
-export function csvQuote(text: string): string {
+function csvQuote(text: string): string {
   const flat = text.replace(/[\r\n]/g, " ");
   return /[",]/.test(flat) ? `"${flat.replace(/"/g, '""')}"` : flat;
 }

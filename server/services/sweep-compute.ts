@@ -20,7 +20,7 @@ export interface ComputedSweep {
   readonly table: StepsTable | null;
 }
 
-export interface ComputeOptions {
+interface ComputeOptions {
   /** Most speeds the sweep may solve (`runSweep`'s `maxSolvedSteps`); none when absent. */
   readonly maxSolvedSteps?: number;
   /** Build the full step table too (stored revisions and downloads). */

@@ -3,7 +3,7 @@ import { AppError } from "../errors.js";
 import type { SweepPoolSettings } from "./sweep-pool.js";
 
 /** How long, in words: "20 s", "5 ms". */
-export function formatDuration(ms: number): string {
+function formatDuration(ms: number): string {
   return ms >= 1000 ? `${Number((ms / 1000).toPrecision(3))} s` : `${Math.round(ms)} ms`;
 }
 

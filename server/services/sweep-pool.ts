@@ -23,7 +23,7 @@ export interface SweepPoolSettings {
 }
 
 /** Who asks, until when the answer is wanted, and whether the full step table is needed. */
-export interface SweepRequest {
+interface SweepRequest {
   /** The user the sweep counts against (per-user limit). */
   readonly owner: string;
   /** Aborted when the request is closed: a waiting sweep leaves the queue, a running one is stopped. */

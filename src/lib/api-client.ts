@@ -97,7 +97,7 @@ export async function apiRequest<T>(url: string, options: RequestOptions = {}): 
 }
 
 /** A file the server sent: its bytes and the name from Content-Disposition. */
-export interface DownloadedFile {
+interface DownloadedFile {
   blob: Blob;
   fileName: string | null;
 }

@@ -4,7 +4,7 @@ import { apiPaths } from "@/config/paths";
 import { apiFile } from "@/lib/api-client";
 import { saveFile } from "@/lib/save-file";
 
-export interface SweepStepsRequest {
+interface SweepStepsRequest {
   study: StudyDocument;
   format: "csv" | "json";
 }
@@ -13,7 +13,7 @@ export interface SweepStepsRequest {
  * Every solved step of an unsaved document's sweep as a file: the server runs the sweep again (nothing is stored)
  * and streams the table; the browser saves it.
  */
-export async function downloadSweepSteps({ study, format }: SweepStepsRequest): Promise<void> {
+async function downloadSweepSteps({ study, format }: SweepStepsRequest): Promise<void> {
   const file = await apiFile(apiPaths.sweepSteps(format), study as unknown as Record<string, unknown>);
   saveFile(file.blob, file.fileName ?? `steps.${format}`);
 }
