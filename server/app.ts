@@ -1,5 +1,6 @@
 import { existsSync } from "node:fs";
 import path from "node:path";
+import compression from "compression";
 import cookieParser from "cookie-parser";
 import express, { type Express } from "express";
 import helmet from "helmet";
@@ -13,6 +14,7 @@ import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
 import { apiRouter } from "./routes/index.js";
 import { wellKnownRoutes } from "./routes/well-known.js";
+import { SweepPool } from "./services/sweep-pool.js";
 
 export interface CreateAppOptions {
   db: Db;
@@ -22,9 +24,17 @@ export interface CreateAppOptions {
   clientDir?: string;
 }
 
-/** Builds the Express app: security headers, JSON API under /api, the built client with its SPA fallback. */
+/**
+ * Builds the Express app: security headers, compressed answers, JSON API under /api, the built client with its
+ * SPA fallback. The app owns a sweep worker pool made from `config.sweeps`; `closeApp` closes it.
+ */
 export function createApp(options: CreateAppOptions): Express {
-  const ctx: AppContext = { db: options.db, config: options.config, logger: options.logger ?? defaultLogger };
+  const ctx: AppContext = {
+    db: options.db,
+    config: options.config,
+    logger: options.logger ?? defaultLogger,
+    sweeps: new SweepPool(options.config.sweeps),
+  };
   const app = express();
   app.locals[APP_CONTEXT_KEY] = ctx;
   app.disable("x-powered-by");
@@ -44,6 +54,8 @@ export function createApp(options: CreateAppOptions): Express {
       strictTransportSecurity: ctx.config.trustProxy,
     }),
   );
+  // gzip or brotli for every compressible answer over 1 kB (zlib works in the thread pool, off the event loop).
+  app.use(compression());
   app.use(express.json({ limit: "1mb", verify: refuseInvalidUtf8Body }));
   app.use(cookieParser());
 
@@ -65,4 +77,9 @@ export function createApp(options: CreateAppOptions): Express {
   app.use((req, _res, next) => next(new AppError(404, "not_found", `Nothing at ${req.method} ${req.path}.`)));
   app.use(errorHandler(ctx.logger));
   return app;
+}
+
+/** Releases what the app owns (its sweep pool: waiting and running sweeps fail with 503, workers end). */
+export async function closeApp(app: Express): Promise<void> {
+  await (app.locals[APP_CONTEXT_KEY] as AppContext).sweeps.close();
 }

@@ -3,12 +3,19 @@ import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from "n
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { z } from "zod";
+import type { SweepPoolSettings } from "./services/sweep-pool.js";
 
 /** Absolute path of the project root (the folder holding package.json). */
 export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 
 const port = (fallback: number) => z.coerce.number().int().min(0).max(65535).default(fallback);
 const optionalText = z.string().trim().min(1).optional();
+/** A whole number ≥ min (milliseconds, counts); unset or empty means the default (or undefined without one). */
+const wholeNumber = (min: number) =>
+  z.number({ error: "must be a whole number" }).int("must be a whole number").min(min, `must be at least ${min}`);
+const unsetIfEmpty = (v: unknown) => (v === undefined || (typeof v === "string" && v.trim() === "") ? undefined : Number(v));
+const count = (min: number, fallback: number) => z.preprocess(unsetIfEmpty, wholeNumber(min).default(fallback));
+const optionalCount = (min: number) => z.preprocess(unsetIfEmpty, wholeNumber(min).optional());
 const flag = z
   .enum(["0", "1", "true", "false", ""])
   .optional()
@@ -41,6 +48,14 @@ const envSchema = z.object({
   STILLSPAN_SIGNING_KEY: optionalText,
   STILLSPAN_SIGNING_RETIRED_JWKS: optionalText,
   STILLSPAN_PUBLIC_URL: z.url({ protocol: /^https?$/ }).optional(),
+  STILLSPAN_SWEEP_WORKERS: count(1, 2),
+  STILLSPAN_SWEEP_TIMEOUT_MS: count(1, 20_000),
+  STILLSPAN_SWEEP_QUEUE: count(0, 8),
+  STILLSPAN_SWEEP_QUEUE_PER_USER: count(1, 3),
+  STILLSPAN_SWEEP_MAX_WAIT_MS: count(1, 30_000),
+  STILLSPAN_SWEEP_MAX_SOLVED_STEPS: count(2, 40_000),
+  STILLSPAN_REQUEST_TIMEOUT_MS: count(1, 60_000),
+  STILLSPAN_HEADERS_TIMEOUT_MS: optionalCount(1),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -66,6 +81,10 @@ export interface Config {
   signing: { keysDir: string; privateKey?: string; retiredJwks?: string };
   /** Origin of the site as users reach it, for links in e-mails (STILLSPAN_PUBLIC_URL; default http://host:port). */
   publicUrl: string;
+  /** The sweep worker pool (STILLSPAN_SWEEP_*), see server/services/sweep-pool.ts. */
+  sweeps: SweepPoolSettings;
+  /** Node's limits on receiving a request: its headers, and the whole request with its body (ms). */
+  http: { headersTimeoutMs: number; requestTimeoutMs: number };
 }
 
 export class ConfigError extends Error {
@@ -83,6 +102,9 @@ export function parseEnv(env: NodeJS.ProcessEnv = process.env): Env {
     const e = result.data;
     if (Boolean(e.STILLSPAN_ADMIN_EMAIL) !== Boolean(e.STILLSPAN_ADMIN_PASSWORD)) {
       problems.push("STILLSPAN_ADMIN_EMAIL and STILLSPAN_ADMIN_PASSWORD: set both or neither");
+    }
+    if ((e.STILLSPAN_HEADERS_TIMEOUT_MS ?? 0) > e.STILLSPAN_REQUEST_TIMEOUT_MS) {
+      problems.push("STILLSPAN_HEADERS_TIMEOUT_MS: must not be longer than STILLSPAN_REQUEST_TIMEOUT_MS");
     }
   }
   if (problems.length > 0 || !result.success) throw new ConfigError(problems);
@@ -138,5 +160,17 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       retiredJwks: e.STILLSPAN_SIGNING_RETIRED_JWKS,
     },
     publicUrl: (e.STILLSPAN_PUBLIC_URL ?? `http://${e.STILLSPAN_HOST}:${e.PORT}`).replace(/\/+$/, ""),
+    sweeps: {
+      workers: e.STILLSPAN_SWEEP_WORKERS,
+      computeLimitMs: e.STILLSPAN_SWEEP_TIMEOUT_MS,
+      queueLimit: e.STILLSPAN_SWEEP_QUEUE,
+      queuePerUser: e.STILLSPAN_SWEEP_QUEUE_PER_USER,
+      maxWaitMs: e.STILLSPAN_SWEEP_MAX_WAIT_MS,
+      maxSolvedSteps: e.STILLSPAN_SWEEP_MAX_SOLVED_STEPS,
+    },
+    http: {
+      headersTimeoutMs: e.STILLSPAN_HEADERS_TIMEOUT_MS ?? Math.min(20_000, e.STILLSPAN_REQUEST_TIMEOUT_MS),
+      requestTimeoutMs: e.STILLSPAN_REQUEST_TIMEOUT_MS,
+    },
   };
 }

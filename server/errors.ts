@@ -10,13 +10,21 @@ export class AppError extends Error {
   readonly status: number;
   readonly code: string;
   readonly details?: unknown;
+  /** Seconds after which a retry may succeed, sent as the Retry-After header (429, 503). */
+  readonly retryAfterS?: number;
 
-  constructor(status: number, code: string, message: string, options?: { cause?: unknown; details?: unknown }) {
+  constructor(
+    status: number,
+    code: string,
+    message: string,
+    options?: { cause?: unknown; details?: unknown; retryAfterS?: number },
+  ) {
     super(message, options?.cause === undefined ? undefined : { cause: options.cause });
     this.name = "AppError";
     this.status = status;
     this.code = code;
     this.details = options?.details;
+    this.retryAfterS = options?.retryAfterS;
   }
 
   static badRequest(message: string, details?: unknown): AppError {

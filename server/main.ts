@@ -3,9 +3,10 @@
  * demo seed on an empty database (unless STILLSPAN_SEED=none) → HTTP on STILLSPAN_HOST:PORT (127.0.0.1:3000).
  */
 import type { Server } from "node:http";
-import { createApp } from "./app.js";
+import { closeApp, createApp } from "./app.js";
 import { ConfigError, loadConfig, projectRoot, type Config } from "./config.js";
 import { createDb, type Db } from "./db/client.js";
+import { createHttpServer } from "./http-server.js";
 import { runMigrations } from "./db/migrate.js";
 import { createDatabase, ensureLocalPostgres } from "./db/pg-local.js";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "./db/seed/accounts.js";
@@ -42,7 +43,7 @@ async function main(): Promise<void> {
   const seeded = await prepareDatabaseContent(db, config, logger);
 
   const app = createApp({ db, config, logger, clientDir: config.clientDir });
-  const server: Server = app.listen(config.port, config.host);
+  const server: Server = createHttpServer(app, config).listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once("listening", resolve);
     server.once("error", reject);
@@ -67,7 +68,9 @@ async function main(): Promise<void> {
   const shutdown = (signal: string) => {
     logger.info({ signal }, "shutting down");
     const closeMail = fakeSmtp ? fakeSmtp.close() : Promise.resolve();
-    server.close(() => void closeMail.then(() => db.$client.end()).finally(() => process.exit(0)));
+    // Sweeps still running or waiting end with 503 (their workers stop), so the connections can close.
+    const closeSweeps = closeApp(app);
+    server.close(() => void Promise.all([closeMail, closeSweeps]).then(() => db.$client.end()).finally(() => process.exit(0)));
     server.closeAllConnections();
     setTimeout(() => process.exit(0), 5000).unref();
   };

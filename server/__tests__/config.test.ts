@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, statSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { ConfigError, loadSessionSecret, parseEnv } from "../config.js";
+import { ConfigError, loadConfig, loadSessionSecret, parseEnv } from "../config.js";
 
 describe("parseEnv", () => {
   it("applies the defaults: PORT 3000, PGPORT 54329, demo seed", () => {
@@ -25,6 +25,39 @@ describe("parseEnv", () => {
 
   it("requires the first-admin e-mail and password together", () => {
     expect(() => parseEnv({ STILLSPAN_ADMIN_EMAIL: "ops@example.org" })).toThrow(/set both or neither/);
+  });
+});
+
+describe("sweep pool and request limits", () => {
+  const base = { STILLSPAN_SESSION_SECRET: "s".repeat(32) };
+
+  it("reads the sweep pool's settings and the request timeouts, with their defaults", () => {
+    const config = loadConfig(base);
+    expect(config.sweeps).toEqual({ workers: 2, computeLimitMs: 20_000, queueLimit: 8, queuePerUser: 3, maxWaitMs: 30_000, maxSolvedSteps: 40_000 });
+    expect(config.http).toEqual({ headersTimeoutMs: 20_000, requestTimeoutMs: 60_000 });
+    const tuned = loadConfig({ ...base, STILLSPAN_SWEEP_WORKERS: "4", STILLSPAN_SWEEP_QUEUE: "0", STILLSPAN_SWEEP_MAX_SOLVED_STEPS: "90000", STILLSPAN_REQUEST_TIMEOUT_MS: "5000", STILLSPAN_HEADERS_TIMEOUT_MS: "" });
+    expect(tuned.sweeps).toMatchObject({ workers: 4, queueLimit: 0, maxSolvedSteps: 90_000 });
+    // Without its own value, the headers timeout is 20 s or the request timeout when that is shorter.
+    expect(tuned.http).toEqual({ headersTimeoutMs: 5000, requestTimeoutMs: 5000 });
+  });
+
+  it("refuses a bad sweep setting instead of silently using the default", () => {
+    let error: unknown;
+    try {
+      parseEnv({ STILLSPAN_SWEEP_WORKERS: "0", STILLSPAN_SWEEP_TIMEOUT_MS: "soon", STILLSPAN_SWEEP_QUEUE_PER_USER: "1.5" });
+    } catch (err) {
+      error = err;
+    }
+    expect(error).toBeInstanceOf(ConfigError);
+    expect((error as ConfigError).problems).toEqual([
+      "STILLSPAN_SWEEP_WORKERS: must be at least 1",
+      "STILLSPAN_SWEEP_TIMEOUT_MS: must be a whole number",
+      "STILLSPAN_SWEEP_QUEUE_PER_USER: must be a whole number",
+    ]);
+  });
+
+  it("refuses a headers timeout longer than the request timeout (Node would throw at start)", () => {
+    expect(() => parseEnv({ STILLSPAN_HEADERS_TIMEOUT_MS: "9000", STILLSPAN_REQUEST_TIMEOUT_MS: "8000" })).toThrow(/HEADERS_TIMEOUT_MS/);
   });
 });
 

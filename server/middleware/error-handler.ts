@@ -24,6 +24,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
 
     if (err instanceof AppError) {
       if (err.status >= 500) logger.error({ err, method: req.method, path: requestPath(req) }, clipValue(err.message, 300));
+      if (err.retryAfterS !== undefined) res.setHeader("Retry-After", String(err.retryAfterS));
       return send(err.status, { code: err.code, message: err.message, details: err.details });
     }
     if (err instanceof ZodError) {

@@ -1,13 +1,19 @@
 import { Router } from "express";
 import type { AppContext } from "../app-context.js";
+import { requestSweeps } from "../lib/request-sweeps.js";
+import { sendStepsTable } from "../lib/send-steps-table.js";
 import { currentUser, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
+import { revisionStepsTable } from "../services/revision-steps.js";
 import { diffRevisions, exportRevision, getRevision, rerunRevision } from "../services/revisions.js";
 
 const revisionId = (raw: string | string[] | undefined) => parseObjectId(raw, "Revision");
 
-/** /api/revisions/:id: read (document + result), diff, re-run with the current engine, export. */
-export function revisionRoutes({ db }: AppContext): Router {
+/**
+ * /api/revisions/:id: read (document + thinned result), diff, re-run with the current engine, export, and the
+ * full step table as a CSV or JSON download (steps.csv, steps.json).
+ */
+export function revisionRoutes({ db, sweeps }: AppContext): Router {
   const router = Router();
   router.use(requireAuth);
   router.get("/:id", async (req, res) => {
@@ -17,7 +23,8 @@ export function revisionRoutes({ db }: AppContext): Router {
     res.json(await diffRevisions(db, currentUser(req), revisionId(req.params.a), revisionId(req.params.b)));
   });
   router.post("/:id/rerun", async (req, res) => {
-    res.status(201).json(await rerunRevision(db, currentUser(req), revisionId(req.params.id), req.ip));
+    const user = currentUser(req);
+    res.status(201).json(await rerunRevision(db, requestSweeps(sweeps, user, res), user, revisionId(req.params.id), req.ip));
   });
   router.get("/:id/export", async (req, res) => {
     const file = await exportRevision(db, currentUser(req), revisionId(req.params.id));
@@ -25,5 +32,10 @@ export function revisionRoutes({ db }: AppContext): Router {
     res.attachment(file.fileName);
     res.type("application/json").send(file.text);
   });
+  for (const format of ["csv", "json"] as const) {
+    router.get(`/:id/steps.${format}`, async (req, res) => {
+      await sendStepsTable(req, res, await revisionStepsTable(db, currentUser(req), revisionId(req.params.id)), format);
+    });
+  }
   return router;
 }

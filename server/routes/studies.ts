@@ -2,6 +2,7 @@ import { Router } from "express";
 import { importRevisionFieldsSchema, createRevisionSchema } from "../../shared/schemas/revisions.js";
 import { createStudySchema, patchStudySchema } from "../../shared/schemas/studies.js";
 import type { AppContext } from "../app-context.js";
+import { requestSweeps } from "../lib/request-sweeps.js";
 import { uploadOne } from "../lib/uploads.js";
 import { currentUser, fromParam, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
@@ -17,7 +18,7 @@ function withRawStudy(body: unknown): { rest: Record<string, unknown>; study: un
 }
 
 /** /api/alternatives/:alternativeId/studies: list (analysts, reviewers), create (analysts). */
-export function alternativeStudyRoutes({ db }: AppContext): Router {
+export function alternativeStudyRoutes({ db, sweeps }: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.use(requireAuth);
   router.get("/", async (req, res) => {
@@ -27,7 +28,8 @@ export function alternativeStudyRoutes({ db }: AppContext): Router {
     const alternativeId = parseObjectId(fromParam("alternativeId")(req), "Alternative");
     const { rest, study } = withRawStudy(req.body);
     const input = createStudySchema.omit({ study: true }).parse(rest);
-    res.status(201).json(await createStudy(db, currentUser(req), alternativeId, { ...input, study }, req.ip));
+    const user = currentUser(req);
+    res.status(201).json(await createStudy(db, requestSweeps(sweeps, user, res), user, alternativeId, { ...input, study }, req.ip));
   });
   return router;
 }
@@ -35,7 +37,7 @@ export function alternativeStudyRoutes({ db }: AppContext): Router {
 const studyId = (raw: string | string[] | undefined) => parseObjectId(raw, "Study");
 
 /** /api/studies/:id: read, rename, revisions (list, save), import of a study file as a new revision. */
-export function studyRoutes({ db }: AppContext): Router {
+export function studyRoutes({ db, sweeps }: AppContext): Router {
   const router = Router();
   router.use(requireAuth);
   router.get("/:id", async (req, res) => {
@@ -52,12 +54,14 @@ export function studyRoutes({ db }: AppContext): Router {
     const id = studyId(req.params.id);
     const { rest, study } = withRawStudy(req.body);
     const input = createRevisionSchema.omit({ study: true }).parse(rest);
-    res.status(201).json(await saveRevision(db, currentUser(req), id, { ...input, study }, req.ip, "api"));
+    const user = currentUser(req);
+    res.status(201).json(await saveRevision(db, requestSweeps(sweeps, user, res), user, id, { ...input, study }, req.ip, "api"));
   });
   router.post("/:id/import", uploadOne("file", MAX_STUDY_FILE_BYTES), async (req, res) => {
     const id = studyId(req.params.id);
     const fields = importRevisionFieldsSchema.parse({ parentRevision: "", ...req.body });
-    res.status(201).json(await importRevision(db, currentUser(req), id, fields, req.file, req.ip));
+    const user = currentUser(req);
+    res.status(201).json(await importRevision(db, requestSweeps(sweeps, user, res), user, id, fields, req.file, req.ip));
   });
   return router;
 }

@@ -1,5 +1,4 @@
 import { diffJson } from "../../shared/diff-json.js";
-import type { runSweep } from "../../shared/engine/run-sweep.js";
 import { ENGINE_VERSION } from "../../shared/engine/version.js";
 import { clipValue } from "../../shared/message-bounds.js";
 import type {
@@ -13,6 +12,7 @@ import { decodeUtf8Strict, describeUtf8Error } from "../../shared/utf8.js";
 import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
+import { insertRevisionTable } from "../db/queries/revision-tables.js";
 import {
   findLatestRevision,
   findRevision,
@@ -25,11 +25,13 @@ import {
 import { findStudy, lockStudy } from "../db/queries/studies.js";
 import { AppError } from "../errors.js";
 import { criticalSpeeds } from "../lib/critical-speeds.js";
+import { fileSlug } from "../lib/file-name.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
 import { requireFile } from "../lib/uploads.js";
 import { loadWithAccess, person } from "./access.js";
-import { runSweepInPool } from "./sweep-pool.js";
 import type { SessionUser } from "./auth.js";
+import type { ComputedSweep, RunSweep } from "./sweep-compute.js";
+import { sweepFailure } from "./sweep-pool-errors.js";
 
 export function toRevisionSummary(row: RevisionSummaryRow): RevisionSummaryDto {
   return {
@@ -90,6 +92,7 @@ export interface SaveRevisionInput {
  */
 export async function saveRevision(
   db: DbOrTx,
+  sweeps: RunSweep,
   user: SessionUser,
   studyId: number,
   input: SaveRevisionInput,
@@ -104,17 +107,17 @@ export async function saveRevision(
       details: [{ path: "changeNote", rule: "required", message: "is required from revision 2 on" }],
     });
   }
-  const { result, sha256 } = await compute(study);
+  const { computed, sha256 } = await compute(sweeps, study);
   const id = await db
     .transaction(async (tx) => {
-      const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, result, sha256);
+      const inserted = await appendRevision(tx, user, studyId, { ...input, changeNote, study }, computed, sha256);
       await writeAudit(tx, {
         actorId: user.id,
         action: "revision.create",
         objectType: "revision",
         objectId: inserted.id,
         ip,
-        details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: result.engine, source },
+        details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: computed.result.engine, source },
       });
       return inserted.id;
     })
@@ -128,17 +131,18 @@ export async function saveRevision(
   return toRevisionDto((await findRevision(db, id))!);
 }
 
-/** Runs the sweep in the worker pool, before any transaction opens; a timeout (422 `sweep_timeout`) passes through. */
-async function compute(study: StudyDocument) {
-  let result;
+/**
+ * Runs the sweep (in the worker pool, for requests) with its full step table, before any transaction opens; pool
+ * errors (429 `busy`, 422 `sweep_timeout`, …) pass through, engine errors become 422 (`sweepFailure`).
+ */
+async function compute(sweeps: RunSweep, study: StudyDocument) {
+  let computed: ComputedSweep;
   try {
-    result = await runSweepInPool(study);
+    computed = await sweeps(study, { table: true });
   } catch (err) {
-    if (err instanceof AppError) throw err;
-    const message = err instanceof Error ? err.message : String(err);
-    throw new AppError(422, "sweep_failed", `The sweep could not be computed: ${message}. Nothing was stored.`, { cause: err });
+    throw sweepFailure(err, " Nothing was stored.");
   }
-  return { result, sha256: canonicalSha256Hex(study) };
+  return { computed, sha256: canonicalSha256Hex(study) };
 }
 
 /** 409 `stale_parent`: names the newer revision and its author, and hands the rejected document back. */
@@ -160,15 +164,19 @@ function staleParent(
   );
 }
 
-/** Inside the caller's transaction: lock the study, check the parent, insert the next number. */
+/**
+ * Inside the caller's transaction: lock the study, check the parent, insert the next number — its thinned result
+ * in the revision row, its full step table (when computed) beside it.
+ */
 export async function appendRevision(
   tx: DbOrTx,
   user: { id: number },
   studyId: number,
   input: { parentRevision: number | null; changeNote: string; study: StudyDocument },
-  result: ReturnType<typeof runSweep>,
+  computed: ComputedSweep,
   sha256: string,
 ): Promise<{ id: number; number: number }> {
+  const { result, table } = computed;
   if (!(await lockStudy(tx, studyId))) throw AppError.notFound("Study");
   const latest = await findLatestRevision(tx, studyId);
   const latestNumber = latest?.number ?? null;
@@ -192,14 +200,17 @@ export async function appendRevision(
     critical: criticalSpeeds(input.study, result),
     flutterSpeedMps: result.flutter?.speed ?? null,
   });
+  if (table) {
+    await insertRevisionTable(tx, { revisionId: id, branchIds: [...table.branchIds], rowCount: table.rows, csvGzip: Buffer.from(table.gzip) });
+  }
   return { id, number };
 }
 
 /** Computes and appends revision 1 of a study created in the same transaction (study creation with a document). */
-export async function appendFirstRevision(tx: DbOrTx, user: { id: number }, studyId: number, study: StudyDocument) {
-  const { result, sha256 } = await compute(study);
-  const inserted = await appendRevision(tx, user, studyId, { parentRevision: null, changeNote: "", study }, result, sha256);
-  return { ...inserted, sha256, engineVersion: result.engine };
+export async function appendFirstRevision(tx: DbOrTx, sweeps: RunSweep, user: { id: number }, studyId: number, study: StudyDocument) {
+  const { computed, sha256 } = await compute(sweeps, study);
+  const inserted = await appendRevision(tx, user, studyId, { parentRevision: null, changeNote: "", study }, computed, sha256);
+  return { ...inserted, sha256, engineVersion: computed.result.engine };
 }
 
 export async function listStudyRevisions(db: DbOrTx, user: SessionUser, studyId: number): Promise<RevisionSummaryDto[]> {
@@ -228,18 +239,17 @@ export async function diffRevisions(db: DbOrTx, user: SessionUser, a: number, b:
  * result is never touched; the new revision's change note names the engine (and the source revision when it
  * is not the newest).
  */
-export async function rerunRevision(db: DbOrTx, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
+export async function rerunRevision(db: DbOrTx, sweeps: RunSweep, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
   const source = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "write");
   const note = `re-run with engine ${ENGINE_VERSION}` + (source.number < source.latestNumber ? ` (document of revision ${source.number})` : "");
-  return saveRevision(db, user, source.studyId, { parentRevision: source.latestNumber, changeNote: note, study: source.document }, ip, "rerun");
+  return saveRevision(db, sweeps, user, source.studyId, { parentRevision: source.latestNumber, changeNote: note, study: source.document }, ip, "rerun");
 }
 
 /** The document of a revision as a file: pretty JSON, and the canonical hash it was stored with. */
 export async function exportRevision(db: DbOrTx, user: SessionUser, id: number) {
   const row = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read");
-  const slug = row.studyName.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "study";
   return {
-    fileName: `${slug}-r${row.number}.study.json`,
+    fileName: `${fileSlug(row.studyName)}-r${row.number}.study.json`,
     text: `${JSON.stringify(row.document, null, 2)}\n`,
     sha256: row.documentSha256,
   };
@@ -248,6 +258,7 @@ export async function exportRevision(db: DbOrTx, user: SessionUser, id: number) 
 /** A study file uploaded as the study's next revision; access is checked before the file is read. */
 export async function importRevision(
   db: DbOrTx,
+  sweeps: RunSweep,
   user: SessionUser,
   studyId: number,
   fields: { parentRevision: number | null; changeNote: string },
@@ -257,7 +268,7 @@ export async function importRevision(
   await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "write");
   const file = requireFile(upload, "file");
   const study = readStudyFile(file.buffer, file.originalname);
-  return saveRevision(db, user, studyId, { ...fields, study }, ip, "import");
+  return saveRevision(db, sweeps, user, studyId, { ...fields, study }, ip, "import");
 }
 
 /** Reads an uploaded study file (UTF-8 JSON) — 400 `invalid_file` with line and column when it is not JSON. */

@@ -7,6 +7,7 @@ import { loadWithAccess, person } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
 import type { SessionUser } from "./auth.js";
 import { appendFirstRevision, parseStudyOrThrow, toRevisionSummary } from "./revisions.js";
+import type { RunSweep } from "./sweep-compute.js";
 
 function toStudyDto(row: StudyRow, latest: RevisionSummaryRow | undefined): StudyDto {
   return {
@@ -44,6 +45,7 @@ export async function getStudy(db: DbOrTx, user: SessionUser, id: number): Promi
  */
 export async function createStudy(
   db: DbOrTx,
+  sweeps: RunSweep,
   user: SessionUser,
   alternativeId: number,
   input: Omit<CreateStudy, "study"> & { study?: unknown },
@@ -54,7 +56,7 @@ export async function createStudy(
   const id = await db.transaction(async (tx) => {
     const studyId = await insertStudy(tx, { alternativeId, name: input.name, purpose: input.purpose, createdBy: user.id });
     // One write, one audit event: revision 1 (when given) is recorded in the study's creation event.
-    const first = document ? await appendFirstRevision(tx, user, studyId, document) : null;
+    const first = document ? await appendFirstRevision(tx, sweeps, user, studyId, document) : null;
     await writeAudit(tx, {
       actorId: user.id,
       action: "study.create",

@@ -212,6 +212,7 @@ export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Pro
       id: m.id,
       steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
     })),
+    branchSampling: revision?.result.sampling ?? null,
     jwksUrl: JWKS_PATH,
   };
 }

@@ -16,6 +16,11 @@ export interface SweepOptions {
   readonly from?: number;
   readonly to?: number;
   readonly step?: number;
+  /**
+   * Most speeds the sweep may solve (grid, hidden lead-in and local refinement together); past it the sweep
+   * stops with a `SweepStepLimitError` (core/step-limit-error.ts). Default: no limit.
+   */
+  readonly maxSolvedSteps?: number;
 }
 
 /** Smaller participation at the critical point from which flutter is called coupled. */
@@ -43,7 +48,7 @@ export function runSweep(study: StudyDocument, options: SweepOptions = {}): Swee
   const speeds = sweepGrid(from, to, step);
   const aero = createAeroModel(study.aerodynamics);
   const system = sectionSystem(study, aero);
-  const track = trackPoles(system, speeds);
+  const track = trackPoles(system, speeds, { stepLimit: options.maxSolvedSteps });
   const modes = study.structure.modes;
   const ids = modes.map((m) => m.id);
   const share = new Float64Array(2);

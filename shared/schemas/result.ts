@@ -1,5 +1,6 @@
 /**
- * The sweep result `runSweep` returns — the same JSON from the CLI, the API and stored revisions. Units are SI;
+ * The sweep result `runSweep` returns — the same JSON from the CLI, the API and stored revisions, except that the
+ * server thins long branches and says so in `sampling` (the full step table is a separate download). Units are SI;
  * each numeric field's `.describe()` names its unit. See docs/study-format.md.
  */
 import { z } from "zod";
@@ -44,6 +45,29 @@ export const sweepWarningSchema = z.object({
   code: z.enum(WARNING_CODES),
   message: z.string(),
   speeds: z.array(z.number()).optional().describe("Speeds concerned, m/s (a [from, to] range for extrapolation)"),
+  speedCount: z
+    .number()
+    .int()
+    .optional()
+    .describe("How many speeds the warning concerns, when `speeds` lists only the first of them (server results)"),
+});
+
+/** How many of the solved steps a server result carries (docs/study-format.md, "Thinned branches"). */
+export const sweepSamplingSchema = z.object({
+  solvedSteps: z
+    .number()
+    .int()
+    .describe("Speeds solved on each branch (grid and local refinement): the rows per branch of the full step table"),
+  shownSteps: z.number().int().describe("Steps kept on each branch in `modes[].steps`"),
+  maxShownSteps: z
+    .number()
+    .int()
+    .describe("Most steps a branch may carry in this result (2,000; fewer when there are more than four branches)"),
+  omittedWarnings: z
+    .number()
+    .int()
+    .optional()
+    .describe("Warnings left out beyond the first 50 of one code (only when some were)"),
 });
 
 export const sweepResultSchema = z.object({
@@ -55,9 +79,14 @@ export const sweepResultSchema = z.object({
   modes: z.array(z.object({ id: z.string(), steps: z.array(sweepStepSchema) })),
   warnings: z.array(sweepWarningSchema),
   engine: z.string().describe("Engine version that produced the result"),
+  sampling: sweepSamplingSchema
+    .optional()
+    .describe("Server results only: how the branches were thinned. Absent when every solved step is inline (command line)"),
 });
 
 export type SweepResult = z.infer<typeof sweepResultSchema>;
+export type SweepStep = z.infer<typeof sweepStepSchema>;
 export type SweepWarning = z.infer<typeof sweepWarningSchema>;
 export type SweepWarningCode = (typeof WARNING_CODES)[number];
 export type FlutterPoint = z.infer<typeof flutterSchema>;
+export type SweepSampling = z.infer<typeof sweepSamplingSchema>;

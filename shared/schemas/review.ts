@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { userText } from "./input-rules";
+import type { SweepSampling } from "./result";
 import type { ComparisonMargin } from "./comparison";
 import type { SummaryPayload } from "./summary";
 
@@ -158,5 +159,7 @@ export interface SummaryDto {
   newestRevisionNumber: number;
   /** Pole paths of the stored result of the signed revision (same content hash), for the plots. */
   branches: SummaryBranchDto[];
+  /** How many of the solved steps `branches` carries (the stored result's `sampling`; null for older results). */
+  branchSampling: SweepSampling | null;
   jwksUrl: string;
 }

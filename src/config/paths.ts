@@ -110,12 +110,16 @@ export const apiPaths = {
       `/api/revisions/${encodeURIComponent(fromId)}/diff/${encodeURIComponent(toId)}`,
     rerun: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/rerun`,
     export: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/export`,
+    /** Every solved step of the revision's sweep, as a file download. */
+    steps: (revisionId: string, format: "csv" | "json") => `/api/revisions/${encodeURIComponent(revisionId)}/steps.${format}`,
   },
   users: {
     list: "/api/users",
     detail: (userId: string) => `/api/users/${encodeURIComponent(userId)}`,
   },
   sweep: "/api/sweep",
+  /** POST a study document: every solved step of its sweep, as a file download. */
+  sweepSteps: (format: "csv" | "json") => `/api/sweep/steps.${format}`,
   review: {
     queue: "/api/review-queue",
     state: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/review`,

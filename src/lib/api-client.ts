@@ -59,36 +59,63 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** fetch with the session cookie; a network failure becomes ApiError `network_error` (an abort stays an abort). */
+async function send(url: string, init: RequestInit): Promise<Response> {
+  try {
+    return await fetch(url, { ...init, credentials: "same-origin" });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
+    throw new ApiError(0, "network_error", "Could not reach the Stillspan server. Check the connection and retry.");
+  }
+}
+
+/** The typed error of a failed answer (its `{ error }` body when there is one); a 401 may send the browser to sign in. */
+function failure(response: Response, payload: unknown, redirectOnUnauthorized: boolean): ApiError {
+  if (response.status === 401 && redirectOnUnauthorized) redirectToSignIn();
+  if (isApiErrorBody(payload)) {
+    const { code, message, details } = payload.error;
+    return new ApiError(response.status, code, message, details);
+  }
+  return new ApiError(response.status, "http_error", `The server answered ${response.status} ${response.statusText}.`);
+}
+
 /** The one way the client talks to the API: JSON in and out, the session cookie included, typed errors. */
 export async function apiRequest<T>(url: string, options: RequestOptions = {}): Promise<T> {
   const { method = "GET", body, signal, redirectOnUnauthorized = true } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
   const isForm = typeof FormData !== "undefined" && body instanceof FormData;
   if (body !== undefined && !isForm) headers["Content-Type"] = "application/json";
-
-  let response: Response;
-  try {
-    response = await fetch(url, {
-      method,
-      headers,
-      body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
-      credentials: "same-origin",
-      signal,
-    });
-  } catch (cause) {
-    if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
-    throw new ApiError(0, "network_error", "Could not reach the Stillspan server. Check the connection and retry.");
-  }
-
+  const response = await send(url, {
+    method,
+    headers,
+    body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
+    signal,
+  });
   const payload = await readJson(response);
   if (response.ok) return payload as T;
+  throw failure(response, payload, redirectOnUnauthorized);
+}
 
-  if (response.status === 401 && redirectOnUnauthorized) redirectToSignIn();
-  if (isApiErrorBody(payload)) {
-    const { code, message, details } = payload.error;
-    throw new ApiError(response.status, code, message, details);
-  }
-  throw new ApiError(response.status, "http_error", `The server answered ${response.status} ${response.statusText}.`);
+/** A file the server sent: its bytes and the name from Content-Disposition. */
+interface DownloadedFile {
+  blob: Blob;
+  fileName: string | null;
+}
+
+/**
+ * A request whose answer is a file (POST with a JSON body): the bytes on success, the same typed errors as
+ * `apiRequest` otherwise.
+ */
+export async function apiFile(url: string, body: JsonBody, options: { signal?: AbortSignal } = {}): Promise<DownloadedFile> {
+  const response = await send(url, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify(body),
+    signal: options.signal,
+  });
+  if (!response.ok) throw failure(response, await readJson(response).catch(() => undefined), true);
+  const named = /filename="?([^";]+)"?/.exec(response.headers.get("Content-Disposition") ?? "");
+  return { blob: await response.blob(), fileName: named ? named[1] : null };
 }
 
 export const api = {

@@ -137,7 +137,7 @@ describe("the row lock on the study", () => {
     const parsed = parseStudy(inventedStudy());
     if (!parsed.ok) throw new Error("fixture study is invalid");
     const study = parsed.study;
-    const result = runSweep(study);
+    const computed = { result: runSweep(study), table: null };
     const sha = canonicalSha256Hex(study);
     const author = { id: await userId(db, "analyst@stillspan.test") };
     const events: string[] = [];
@@ -147,7 +147,7 @@ describe("the row lock on the study", () => {
     const firstInserted = new Promise<void>((resolve) => (inserted = resolve));
 
     const first = db.transaction(async (tx) => {
-      await appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "first", study }, result, sha);
+      await appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "first", study }, computed, sha);
       events.push("first inserted");
       inserted();
       await held;
@@ -155,7 +155,7 @@ describe("the row lock on the study", () => {
     });
     await firstInserted;
     const second = db
-      .transaction((tx) => appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "second", study }, result, sha))
+      .transaction((tx) => appendRevision(tx, author, Number(studyId), { parentRevision: 1, changeNote: "second", study }, computed, sha))
       .then(
         () => "stored",
         (err: { status?: number; code?: string }) => `${err.status} ${err.code}`,

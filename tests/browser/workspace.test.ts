@@ -5,6 +5,7 @@
  * compare two revisions, and load a broken derivative CSV whose row error shows in place. One browser, few
  * page loads; a screenshot of each main screen goes to test-artifacts/.
  */
+import { readFileSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runSweep } from "../../shared/engine/run-sweep";
 import type { RevisionDto } from "../../shared/schemas/revisions";
@@ -102,7 +103,8 @@ describe("the analyst's study workspace", () => {
     changed.structure.modes.find((m) => m.dof === "torsion")!.frequency = newFrequency;
     const parsed = parseStudy(changed);
     if (!parsed.ok) throw new Error(`test document invalid: ${JSON.stringify(parsed.issues)}`);
-    const expected = runSweep(parsed.study).flutter;
+    const full = runSweep(parsed.study);
+    const expected = full.flutter;
     expect(expected, "the changed demo deck must still flutter within its sweep").not.toBeNull();
     expect(expected!.speed.toFixed(2)).not.toBe(startRevision.result.flutter?.speed.toFixed(2));
 
@@ -113,6 +115,12 @@ describe("the analyst's study workspace", () => {
     await page.getByTestId("result-source").filter({ hasText: "Server run" }).waitFor();
     expect(await page.getByTestId("flutter-speed").textContent()).toContain(`${expected!.speed.toFixed(2)} m/s`);
     await browser.screenshot("workspace-after-run");
+
+    // The full step table of this unsaved run: the server runs it again and the browser saves the CSV.
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "CSV", exact: true }).click()]);
+    const lines = readFileSync(await download.path(), "utf8").trimEnd().split("\r\n");
+    expect(lines[0]).toMatch(/^branch,speed_m_s,frequency_hz,/);
+    expect(lines).toHaveLength(1 + full.modes.reduce((n, m) => n + m.steps.length, 0));
   });
 
   it("saving with a change note stores a new revision that the timeline and the diff show", async () => {

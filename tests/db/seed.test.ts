@@ -13,6 +13,7 @@ import { demoProject } from "../../server/db/seed/projects.js";
 import { demoReview } from "../../server/db/seed/review.js";
 import { ref, type SeedContext } from "../../server/db/seed/types.js";
 import { createStudy } from "../../server/services/studies.js";
+import { runSweepInProcess } from "../../server/services/sweep-compute.js";
 import { seedUser } from "../../server/db/seed/alternatives.js";
 import { logger } from "../../server/logger.js";
 import { verifyPassword } from "../../server/services/passwords.js";
@@ -95,7 +96,7 @@ describe("seed on a fresh database", () => {
     const oneRevisionStudy = {
       name: "one-revision study",
       async run(ctx: SeedContext) {
-        const study = await createStudy(ctx.tx, await seedUser(ctx, "user:analyst"), ref(ctx, "alternative:single"), {
+        const study = await createStudy(ctx.tx, runSweepInProcess, await seedUser(ctx, "user:analyst"), ref(ctx, "alternative:single"), {
           name: "Flutter — one revision",
           purpose: "Seed test",
           study: inventedStudy(),

@@ -1,13 +1,16 @@
 /** An app built in-process with createApp, listening on a free port, for tests that need their own settings. */
 import type { AddressInfo } from "node:net";
-import { createApp } from "../../server/app.js";
+import type { Express } from "express";
+import { closeApp, createApp } from "../../server/app.js";
 import { loadConfig, type Config } from "../../server/config.js";
 import { createDb, type Db } from "../../server/db/client.js";
+import { createHttpServer } from "../../server/http-server.js";
 import { logger, type Logger } from "../../server/logger.js";
 import { testEnv } from "./env.js";
 
 export interface TestApp {
   baseUrl: string;
+  app: Express;
   db: Db;
   config: Config;
   close(): Promise<void>;
@@ -31,7 +34,7 @@ export async function startTestApp(options: StartTestAppOptions = {}): Promise<T
   });
   const db = createDb(options.databaseUrl ?? testEnv.databaseUrl, { max: 3, connectionTimeoutMillis: 2000 });
   const app = createApp({ db, config, logger: options.logger ?? logger.child({}, { level: "silent" }), clientDir: "/nonexistent" });
-  const server = app.listen(0, "127.0.0.1");
+  const server = createHttpServer(app, config).listen(0, "127.0.0.1");
   await new Promise<void>((resolve, reject) => {
     server.once("listening", resolve);
     server.once("error", reject);
@@ -39,9 +42,11 @@ export async function startTestApp(options: StartTestAppOptions = {}): Promise<T
   const { port } = server.address() as AddressInfo;
   return {
     baseUrl: `http://127.0.0.1:${port}`,
+    app,
     db,
     config,
     async close() {
+      await closeApp(app);
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await db.$client.end();

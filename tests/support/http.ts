@@ -45,3 +45,36 @@ export async function signIn(baseUrl: string, email: string, password = DEMO_PAS
   }
   return cookie;
 }
+
+export interface RawResponse {
+  status: number;
+  headers: Record<string, string | string[] | undefined>;
+  /** The body exactly as sent (still compressed when Content-Encoding says so). */
+  body: Buffer;
+}
+
+/**
+ * A request without fetch's automatic decompression, to see what travels on the wire: the status, the headers and
+ * the body bytes as sent. `Accept-Encoding` is whatever `headers` says (none by default).
+ */
+export async function rawRequest(
+  baseUrl: string,
+  path: string,
+  options: { method?: string; cookie?: string; body?: unknown; headers?: Record<string, string> } = {},
+): Promise<RawResponse> {
+  const { request } = await import("node:http");
+  const payload = options.body === undefined ? undefined : JSON.stringify(options.body);
+  const headers: Record<string, string> = { ...options.headers };
+  if (options.cookie) headers.Cookie = options.cookie;
+  if (payload !== undefined) headers["Content-Type"] = "application/json";
+  return new Promise((resolve, reject) => {
+    const req = request(`${baseUrl}${path}`, { method: options.method ?? (payload ? "POST" : "GET"), headers }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on("data", (c: Buffer) => chunks.push(c));
+      res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
+      res.on("error", reject);
+    });
+    req.on("error", reject);
+    req.end(payload);
+  });
+}

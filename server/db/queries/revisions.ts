@@ -141,3 +141,21 @@ export async function listAlternativeRevisionAerodynamics(db: DbOrTx, alternativ
     .where(eq(studies.alternativeId, alternativeId))
     .orderBy(asc(studies.name), asc(studyRevisions.number));
 }
+
+/** What a download of a revision's step table needs: its project (access), study name, number and engine. */
+export async function findRevisionHeader(db: DbOrTx, id: number) {
+  const [row] = await db
+    .select({
+      id: studyRevisions.id,
+      number: studyRevisions.number,
+      engineVersion: studyRevisions.engineVersion,
+      studyName: studies.name,
+      projectId: alternatives.projectId,
+    })
+    .from(studyRevisions)
+    .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
+    .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))
+    .where(eq(studyRevisions.id, id))
+    .limit(1);
+  return row;
+}

@@ -9,6 +9,7 @@ export * from "./alternatives.js";
 export * from "./aero-datasets.js";
 export * from "./studies.js";
 export * from "./study-revisions.js";
+export * from "./study-revision-tables.js";
 export * from "./mail.js";
 export * from "./review.js";
 export * from "./one-time-tokens.js";

@@ -2,6 +2,7 @@ import { asc, eq } from "drizzle-orm";
 import type { StudyDocument } from "../../../shared/schemas/study.js";
 import { recordComment, recordSubmission } from "../../services/review.js";
 import { saveRevision } from "../../services/revisions.js";
+import { runSweepInProcess } from "../../services/sweep-compute.js";
 import { recordSignature } from "../../services/summaries.js";
 import { buildSummaryPayload } from "../../services/summary-payload.js";
 import type { SummaryPayload } from "../../../shared/schemas/summary.js";
@@ -107,7 +108,7 @@ export const demoReview: SeedStep = {
       const torsion = study.structure.modes.find((m) => m.dof === "torsion")!;
       torsion.damping = Math.round(torsion.damping * 0.8 * 1e6) / 1e6;
       const changeNote = `Torsional damping ratio lowered to ${torsion.damping} (measured on the invented deck model)`;
-      await saveRevision(tx, analyst, studyId, { parentRevision: first.number, changeNote, study }, undefined, "seed");
+      await saveRevision(tx, runSweepInProcess, analyst, studyId, { parentRevision: first.number, changeNote, study }, undefined, "seed");
       revisions = await listRevisions(tx, studyId);
     }
     const toSign = (await findRevision(tx, revisions[revisions.length - 2].id))!;

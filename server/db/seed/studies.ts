@@ -1,6 +1,7 @@
 import type { StudyDocument } from "../../../shared/schemas/study.js";
 import { findDataset } from "../queries/datasets.js";
 import { saveRevision } from "../../services/revisions.js";
+import { runSweepInProcess } from "../../services/sweep-compute.js";
 import { createStudy } from "../../services/studies.js";
 import { seedUser } from "./alternatives.js";
 import { ref, type SeedContext, type SeedStep } from "./types.js";
@@ -80,7 +81,7 @@ export const demoStudies: SeedStep = {
   async run(ctx) {
     const analyst = await seedUser(ctx, "user:analyst");
     const single = deckStudy(SINGLE_BOX, await tabulatedFrom(ctx, "dataset:single"));
-    const studyB = await createStudy(ctx.tx, analyst, ref(ctx, "alternative:single"), {
+    const studyB = await createStudy(ctx.tx, runSweepInProcess, analyst, ref(ctx, "alternative:single"), {
       name: "Flutter and divergence — alternative B",
       purpose: "INVENTED DEMO. Does the single box with wind screens stay stable well above the required speeds?",
       study: single,
@@ -89,7 +90,7 @@ export const demoStudies: SeedStep = {
 
     const revised = structuredClone(single);
     revised.structure.modes[1].frequency = 0.271;
-    await saveRevision(ctx.tx, analyst, Number(studyB.id), {
+    await saveRevision(ctx.tx, runSweepInProcess, analyst, Number(studyB.id), {
       parentRevision: 1,
       changeNote: "Torsional frequency 0.286 → 0.271 Hz from the updated global model (cable sag stiffness revised).",
       study: revised,
@@ -97,13 +98,13 @@ export const demoStudies: SeedStep = {
     const heavier = structuredClone(revised);
     heavier.structure.mass = 17650;
     heavier.structure.inertia = 1.71e6;
-    await saveRevision(ctx.tx, analyst, Number(studyB.id), {
+    await saveRevision(ctx.tx, runSweepInProcess, analyst, Number(studyB.id), {
       parentRevision: 2,
       changeNote: "Heavier surfacing (mastic asphalt 60 mm) and screen posts: m 16 900 → 17 650 kg/m, I 1.62e6 → 1.71e6 kg·m²/m.",
       study: heavier,
     });
 
-    const studyA = await createStudy(ctx.tx, analyst, ref(ctx, "alternative:twin"), {
+    const studyA = await createStudy(ctx.tx, runSweepInProcess, analyst, ref(ctx, "alternative:twin"), {
       name: "Flutter and divergence — alternative A",
       purpose: "INVENTED DEMO. The twin box: reference for the comparison with alternative B.",
       study: deckStudy(TWIN_BOX, await tabulatedFrom(ctx, "dataset:twin")),

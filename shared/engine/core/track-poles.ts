@@ -7,6 +7,7 @@ import { createPkOutcome, solveBranchPk, type PkOutcome } from "./pk-branch";
 import { createPoleWorkspace } from "./quadratic-operator";
 import type { Pole } from "./refine-pole";
 import { settleStaticTransition } from "./static-transition";
+import { SweepStepLimitError } from "./step-limit-error";
 import { assessStep } from "./tracking-confidence";
 
 /** One solved speed of one tracked branch. */
@@ -47,6 +48,12 @@ export interface TrackOptions {
    * every interval six times (64 × the grid: a 20,000-step sweep then ran for a minute and held the server).
    */
   readonly maxSteps?: number;
+  /**
+   * Hard limit on the speeds solved in all (grid, lead-in and local refinement): a sweep that would need more
+   * stops with a `SweepStepLimitError` instead of finishing (a server bounds one request's work with it; the
+   * default is no limit). Unlike `maxSteps`, reaching it is an error, not a quieter refinement.
+   */
+  readonly stepLimit?: number;
 }
 
 /** A step is accepted without refinement when every branch has at least this MAC and confidence. */
@@ -153,6 +160,8 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
   // is identified with its structural mode by continuity rather than by shape at a possibly high first speed.
   const from = speedsMps[0];
   const grid = [...leadIn(speedsMps), ...speedsMps];
+  const stepLimit = options.stepLimit ?? Infinity;
+  if (grid.length > stepLimit) throw new SweepStepLimitError(stepLimit, grid[0]);
   const first = solveRobust(grid[0], references, references);
   accept(first, references, references, true);
 
@@ -163,6 +172,7 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     while (targets.length > 0) {
       const target = targets[targets.length - 1];
       const last = branches[0][branches[0].length - 1].speedMps;
+      if (branches[0].length >= stepLimit) throw new SweepStepLimitError(stepLimit, last);
       const prev = branches.map((b) => b[b.length - 1]);
       const pred = branches.map((b) => predict(b, target));
       if (accept(solveFast(target, prev, pred), prev, pred, false)) {

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { api, ApiError } from "@/lib/api-client";
+import { api, ApiError, apiFile } from "@/lib/api-client";
 
 function jsonResponse(status: number, body: unknown): Response {
   return new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
@@ -62,5 +62,20 @@ describe("api client", () => {
     fetchMock.mockResolvedValueOnce(new Response("<html>Bad gateway</html>", { status: 502, statusText: "Bad Gateway" }));
 
     await expect(api.get("/api/projects")).rejects.toMatchObject({ status: 502, code: "bad_response" });
+  });
+
+  it("a file answer gives the bytes and the name from Content-Disposition; a refusal the typed error", async () => {
+    fetchMock.mockResolvedValueOnce(
+      new Response("branch,speed_m_s\r\n", { status: 200, headers: { "Content-Type": "text/csv", "Content-Disposition": "attachment; filename=deck-steps.csv" } }),
+    );
+    const file = await apiFile("/api/sweep/steps.csv", { name: "deck" });
+    expect(file.fileName).toBe("deck-steps.csv");
+    expect(await file.blob.text()).toBe("branch,speed_m_s\r\n");
+    expect(fetchMock).toHaveBeenCalledWith("/api/sweep/steps.csv", expect.objectContaining({ method: "POST", body: '{"name":"deck"}', credentials: "same-origin" }));
+
+    fetchMock.mockResolvedValueOnce(jsonResponse(429, { error: { code: "busy", message: "The server is busy." } }));
+    const refusal = await apiFile("/api/sweep/steps.csv", {}).catch((error: unknown) => error);
+    expect(refusal).toBeInstanceOf(ApiError);
+    expect((refusal as ApiError).code).toBe("busy");
   });
 });

@@ -1,6 +1,7 @@
 import { useMemo } from "react";
 import { Card } from "@/components/ui/card";
 import { Plot } from "@/components/ui/plot";
+import { samplingNote } from "@/lib/sampling-note";
 import { dampingFigure, frequencyFigure, polePathFigure, type PlotRun } from "@/features/studies/utils/result-figures";
 
 /** The pole paths and the frequency and damping curves of one result (or several overlaid). */
@@ -10,6 +11,10 @@ export function ResultPlots({ runs, dimmed = false }: { runs: readonly PlotRun[]
     [runs],
   );
   const what = runs.length > 1 ? runs.map((r) => r.name).join(", ") : "the sweep";
+  const notes = runs.flatMap((r) => {
+    const note = samplingNote(r.result.sampling);
+    return note ? [runs.length > 1 ? `${r.name}: ${note}` : note] : [];
+  });
   return (
     <div className={dimmed ? "opacity-60 transition-opacity" : "transition-opacity"}>
       <div className="grid gap-4">
@@ -24,6 +29,9 @@ export function ResultPlots({ runs, dimmed = false }: { runs: readonly PlotRun[]
             <Plot {...figures.frequency} height={250} label={`Frequency against wind speed for ${what}`} />
           </Card>
         </div>
+        {notes.map((note) => (
+          <p key={note} className="text-sm text-ink-600">{note}</p>
+        ))}
       </div>
     </div>
   );

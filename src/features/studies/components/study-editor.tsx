@@ -18,7 +18,7 @@ import { LivePreview } from "@/features/studies/components/live-preview";
 import { ResultPlots } from "@/features/studies/components/result-plots";
 import { ResultSummary } from "@/features/studies/components/result-summary";
 import { SaveRevisionPanel, type RebasedDraft } from "@/features/studies/components/save-revision-panel";
-import { StepsTable } from "@/features/studies/components/steps-table";
+import { StepsTable, type StepsSource } from "@/features/studies/components/steps-table";
 import { StudyFileActions } from "@/features/studies/components/study-file-actions";
 import { StructureFields } from "@/features/studies/components/structure-fields";
 import { SweepFields } from "@/features/studies/components/sweep-fields";
@@ -51,6 +51,8 @@ interface ShownResult {
   /** The document it was computed from (to tell when the inputs have moved on). */
   document: StudyDocument;
   source: string;
+  /** Where its full step table comes from. */
+  steps: StepsSource;
 }
 
 const keyOf = (value: unknown) => JSON.stringify(value);
@@ -75,6 +77,7 @@ export function StudyEditor(props: StudyEditorProps) {
     result: revision.result,
     document: revision.study,
     source: `Stored with revision ${revision.number}`,
+    steps: { revisionId: revision.id },
   }));
   const runSweep = useRunSweep();
   // Stable while typing, so the plots redraw only when a new result arrives.
@@ -111,6 +114,7 @@ export function StudyEditor(props: StudyEditorProps) {
           result,
           document,
           source: `Server run at ${formatDateTime(new Date().toISOString())} — not saved`,
+          steps: { document },
         }),
     });
   };
@@ -226,8 +230,8 @@ export function StudyEditor(props: StudyEditorProps) {
         </div>
       </div>
       {renderFullWidth?.(revision)}
-      <Card title="Steps" subtitle="Every tracked pole at every speed, including locally refined steps" flush>
-        <StepsTable result={shown.result} fileName={`${(values.name || "study").replace(/[^\w.-]+/g, "-").slice(0, 60)}-steps.csv`} />
+      <Card title="Steps" subtitle="Every tracked pole by speed, locally refined steps included; long sweeps are thinned here" flush>
+        <StepsTable result={shown.result} source={shown.steps} />
       </Card>
     </div>
   );

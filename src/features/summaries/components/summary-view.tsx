@@ -8,6 +8,7 @@ import { Plot } from "@/components/ui/plot";
 import { apiPaths, paths } from "@/config/paths";
 import { cn } from "@/lib/cn";
 import { formatDateTime } from "@/lib/format";
+import { samplingNote } from "@/lib/sampling-note";
 import { VerificationStatus } from "@/features/summaries/components/verification-status";
 import { useSummaryVerification } from "@/features/summaries/hooks/use-summary-verification";
 import { dampingFigure, frequencyFigure, polePathFigure } from "@/features/summaries/utils/summary-figures";
@@ -186,6 +187,9 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
         <Card title="Pole paths" subtitle="λ through the sweep; right of the axis is unstable" className="lg:col-span-2">
           <Plot height={320} label="Pole paths in the complex plane" {...polePathFigure(summary.branches)} />
         </Card>
+        {samplingNote(summary.branchSampling) ? (
+          <p className="text-sm text-ink-600 lg:col-span-2">{samplingNote(summary.branchSampling)}</p>
+        ) : null}
       </div>
 
       <div className="grid gap-4 lg:grid-cols-2">

@@ -44,6 +44,7 @@ function dto(overrides: Partial<SummaryDto> = {}): SummaryDto {
     newerUnsigned: false,
     newestRevisionNumber: 3,
     branches: [],
+    branchSampling: null,
     jwksUrl: "/.well-known/jwks.json",
     ...overrides,
   };

@@ -2,23 +2,23 @@ import { describe, expect, it } from "vitest";
 import { runSweep } from "@shared/engine/run-sweep";
 import { benchmarkDeck } from "@shared/engine/__tests__/support/benchmark-deck";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
-import { stepRows, stepsCsv } from "@/features/studies/utils/result-csv";
+import { stepRows } from "@/features/studies/utils/step-rows";
 import { dampingFigure, polePathFigure } from "@/features/studies/utils/result-figures";
 import { dampingAxisRange } from "@/lib/damping-frame";
 
-/** The IABSE TG 3.1 benchmark deck on a short coarse sweep (the engine tests' one definition); only the plot and CSV plumbing is checked. */
+/** The IABSE TG 3.1 benchmark deck on a short coarse sweep (the engine tests' one definition); only the plot and table plumbing is checked. */
 const study = benchmarkDeck({ from: 60, to: 90, step: 2 });
 const result = runSweep(study);
 
-describe("steps CSV", () => {
-  it("has one row per tracked step of every branch, ordered by speed, with SI units in the header", () => {
-    const lines = stepsCsv(result).trimEnd().split("\r\n");
+describe("step rows of the steps table", () => {
+  it("has one row per step of every branch the result carries, ordered by speed, then by branch", () => {
+    const rows = stepRows(result);
     const total = result.modes.reduce((n, m) => n + m.steps.length, 0);
-    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_V1,participation_T1,mac,confidence");
-    expect(lines).toHaveLength(total + 1);
-    const speeds = stepRows(result).map((r) => r.speed);
+    expect(rows).toHaveLength(total);
+    const speeds = rows.map((r) => r.speed);
     expect(speeds).toEqual([...speeds].sort((x, y) => x - y));
-    expect(Number(lines[1].split(",")[1])).toBe(speeds[0]);
+    expect(rows.slice(0, 2).map((r) => r.mode)).toEqual(["T1", "V1"]);
+    expect(rows[0]).toMatchObject({ ...result.modes[1].steps[0], mode: "T1" });
   });
 });
 
