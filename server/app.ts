@@ -10,6 +10,7 @@ import type { Db } from "./db/client.js";
 import { AppError } from "./errors.js";
 import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
+import { sameOriginGuard } from "./middleware/same-origin.js";
 import { apiRouter } from "./routes/index.js";
 import { wellKnownRoutes } from "./routes/well-known.js";
 
@@ -45,6 +46,8 @@ export function createApp(options: CreateAppOptions): Express {
       strictTransportSecurity: ctx.config.trustProxy,
     }),
   );
+  // Before any body is read: a write from another site is refused without parsing it.
+  app.use("/api", sameOriginGuard(ctx.config));
   app.use(express.json({ limit: "1mb" }));
   app.use(cookieParser());
 
