@@ -57,6 +57,11 @@ export async function resubmitReviewRequest(
     .where(eq(reviewRequests.id, id));
 }
 
+/** Hands a request in review to another reviewer (the caller has locked it and checked its state). */
+export async function reassignReviewRequest(db: DbOrTx, id: number, reviewerId: number): Promise<void> {
+  await db.update(reviewRequests).set({ reviewerId }).where(eq(reviewRequests.id, id));
+}
+
 export async function decideReviewRequest(
   db: DbOrTx,
   id: number,
