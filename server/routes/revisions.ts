@@ -1,4 +1,5 @@
 import { Router } from "express";
+import { rerunRevisionSchema } from "../../shared/schemas/revisions.js";
 import type { AppContext } from "../app-context.js";
 import { currentUser, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
@@ -17,7 +18,9 @@ export function revisionRoutes({ db }: AppContext): Router {
     res.json(await diffRevisions(db, currentUser(req), revisionId(req.params.a), revisionId(req.params.b)));
   });
   router.post("/:id/rerun", async (req, res) => {
-    res.status(201).json(await rerunRevision(db, currentUser(req), revisionId(req.params.id), req.ip));
+    const id = revisionId(req.params.id);
+    const { parentRevision } = rerunRevisionSchema.parse(req.body ?? {});
+    res.status(201).json(await rerunRevision(db, currentUser(req), id, parentRevision, req.ip));
   });
   router.get("/:id/export", async (req, res) => {
     const file = await exportRevision(db, currentUser(req), revisionId(req.params.id));

@@ -56,7 +56,7 @@ export function studyRoutes({ db }: AppContext): Router {
   });
   router.post("/:id/import", uploadOne("file", MAX_STUDY_FILE_BYTES), async (req, res) => {
     const id = studyId(req.params.id);
-    const fields = importRevisionFieldsSchema.parse({ parentRevision: "", ...req.body });
+    const fields = importRevisionFieldsSchema.parse(req.body ?? {});
     res.status(201).json(await importRevision(db, currentUser(req), id, fields, req.file, req.ip));
   });
   return router;
