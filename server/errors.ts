@@ -32,3 +32,14 @@ export class AppError extends Error {
     return new AppError(409, "conflict", message, { details });
   }
 }
+
+/**
+ * A problem the person starting a command can fix (a busy port, a missing setting): its message is one sentence
+ * saying what to do, printed as it is — never with a stack trace.
+ */
+export class StartupError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "StartupError";
+  }
+}
