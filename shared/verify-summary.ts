@@ -43,7 +43,7 @@ function isCanonical(decoded: unknown, text: string): boolean {
  * Decoders ignore those bits, so without this check one signature has several spellings — and as many
  * verification codes, since the code hashes the JWS text.
  */
-export function isCanonicalBase64url(part: string): boolean {
+function isCanonicalBase64url(part: string): boolean {
   if (!/^[A-Za-z0-9_-]*$/.test(part) || part.length % 4 === 1) return false;
   try {
     return base64url.encode(base64url.decode(part)) === part;

@@ -26,7 +26,7 @@ function originHost(origin: string): string | undefined {
 }
 
 /** True when `origin` names the site this request was sent to, or the configured public address. */
-export function isOwnOrigin(req: Pick<Request, "headers">, origin: string, publicUrl: string): boolean {
+function isOwnOrigin(req: Pick<Request, "headers">, origin: string, publicUrl: string): boolean {
   const host = originHost(origin);
   if (host === undefined) return false;
   if (URL.canParse(publicUrl) && new URL(publicUrl).origin === new URL(origin).origin) return true;

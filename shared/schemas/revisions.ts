@@ -47,7 +47,6 @@ export const importRevisionFieldsSchema = z.strictObject({
 export const rerunRevisionSchema = z.strictObject({
   parentRevision: z.number({ error: "is required: the number of the study's newest revision" }).int("must be a whole number").positive("must be greater than 0"),
 });
-export type RerunRevisionInput = z.infer<typeof rerunRevisionSchema>;
 
 export const personSchema = z.object({ id: z.string(), name: z.string() });
 

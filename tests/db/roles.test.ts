@@ -5,6 +5,7 @@
  */
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { APP_SCHEMAS } from "../../server/db/pg-roles.js";
 import { testEnv } from "../support/env.js";
 
 let app: pg.Client;
@@ -93,6 +94,14 @@ describe("the app's database role", () => {
       "DELETE signatures": await attempt("DELETE FROM signatures"),
     };
     expect(refused).toEqual(Object.fromEntries(Object.keys(refused).map((k) => [k, APPEND_ONLY])));
+  });
+
+  it("may use every schema of the app's tables", async () => {
+    const { rows } = await app.query<{ schema: string; usage: boolean; create: boolean }>(
+      "SELECT s AS schema, has_schema_privilege(s, 'USAGE') AS usage, has_schema_privilege(s, 'CREATE') AS create FROM unnest($1::text[]) AS s",
+      [APP_SCHEMAS],
+    );
+    expect(rows).toEqual(APP_SCHEMAS.map((schema) => ({ schema, usage: true, create: false })));
   });
 
   it("may read and write the rows of the app's tables, including tables a later migration creates", async () => {

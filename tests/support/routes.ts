@@ -4,7 +4,7 @@ import { createApp } from "../../server/app.js";
 import { loadConfig } from "../../server/config.js";
 import { createDb } from "../../server/db/client.js";
 
-export interface RouteInfo {
+interface RouteInfo {
   method: string;
   /** Full path with its parameters, e.g. /api/revisions/:id/sign. */
   path: string;
@@ -28,7 +28,7 @@ function walk(stack: Layer[], prefix: string, out: RouteInfo[]): void {
   }
 }
 
-export function listRoutes(app: Express): RouteInfo[] {
+function listRoutes(app: Express): RouteInfo[] {
   const out: RouteInfo[] = [];
   walk((app as unknown as { router: { stack: Layer[] } }).router.stack, "", out);
   return out;

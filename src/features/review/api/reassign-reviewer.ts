@@ -4,7 +4,7 @@ import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
 import { useInvalidateReview } from "@/features/review/hooks/use-invalidate-review";
 
-export interface ReassignReviewerInput {
+interface ReassignReviewerInput {
   reviewerId: string;
   note?: string;
 }

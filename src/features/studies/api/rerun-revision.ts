@@ -7,7 +7,7 @@ import { getRevisionQueryOptions } from "@/features/studies/api/get-revision";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { getStudyQueryOptions } from "@/features/studies/api/get-study";
 
-export interface RerunRevisionInput {
+interface RerunRevisionInput {
   revisionId: string;
   /** The study's newest revision as the page shows it: the re-run goes on top of it (409 when a newer one exists). */
   parentRevision: number;
