@@ -4,13 +4,15 @@
  *   0. the static checks, `npm run lint` (ESLint and knip) and `npm run typecheck` (tsc): a failure of either
  *      ends the run before anything starts (skipped when arguments name what vitest runs, a focused run)
  *   1. Debian's Chromium for the browser tests (scripts/ensure-chromium.sh)
- *   2. the project's PostgreSQL cluster (started when needed), a database of its own (`stillspan_test_<pid>`, dropped afterwards) created,
- *      migrated and seeded with the demo data
+ *   2. the project's PostgreSQL cluster (started when needed, and stopped again at the end when this run started
+ *      it), a database of its own (`stillspan_test_<pid>`, dropped afterwards) created, migrated as the owner role
+ *      and seeded with the demo data as the app role
  *   3. `vite build` of the client into dist/client
  *   4. the app as a child process on a free port of its own (a running `npm start` does not collide)
  *   5. `vitest run` over every project (unit, client, integration incl. browser), with TEST_BASE_URL,
- *      TEST_DATABASE_URL, TEST_SESSION_SECRET, SMTP_PORT (the app's fake SMTP server) and STILLSPAN_TEST=1;
- *      arguments after `--` go to vitest
+ *      TEST_DATABASE_URL (the owner role, for arranging data), TEST_APP_DATABASE_URL (the app's role),
+ *      TEST_SESSION_SECRET, SMTP_PORT (the app's fake SMTP server) and STILLSPAN_TEST=1; arguments after `--` go
+ *      to vitest
  *
  * The app child is always stopped (its whole process group); the exit code is vitest's, or 1 when a static
  * check failed.
@@ -22,8 +24,9 @@ import net from "node:net";
 import path from "node:path";
 import { loadConfig, projectRoot } from "../server/config.js";
 import { createDb } from "../server/db/client.js";
-import { runMigrations } from "../server/db/migrate.js";
-import { createDatabase, dropDatabase, ensureLocalPostgres } from "../server/db/pg-local.js";
+import { migrateAsOwner } from "../server/db/migrate.js";
+import { createDatabase, dropDatabase, ensureLocalPostgres, releaseLocalPostgres, type LocalPostgres } from "../server/db/pg-local.js";
+import { OWNER_ROLE } from "../server/db/pg-roles.js";
 import { seedDemo } from "../server/db/seed.js";
 import { logger } from "../server/logger.js";
 import { ensureSigningKey } from "../server/services/signing.js";
@@ -68,33 +71,57 @@ async function waitForHealth(baseUrl: string, child: ChildProcess, timeoutMs: nu
   throw new Error(`the app did not answer ${baseUrl}/api/health within ${timeoutMs / 1000} s`);
 }
 
-async function prepareDatabase(): Promise<{ testUrl: string; maintenanceUrl: string }> {
-  const config = loadConfig({ ...process.env, DATABASE_URL: undefined });
-  let maintenanceUrl: string;
-  let testUrl: string;
+interface TestDatabase {
+  /** The app role's URL of the test database. */
+  appUrl: string;
+  /** The owner role's URL of the test database (migrations; tests arrange data with it). */
+  ownerUrl: string;
+  /** Where the test database is created and dropped. */
+  maintenanceUrl: string;
+  /** Our own cluster, when it is used. */
+  cluster?: LocalPostgres;
+}
+
+const withDatabase = (url: string, name: string) => {
+  const u = new URL(url);
+  u.pathname = `/${name}`;
+  return u.toString();
+};
+
+async function prepareDatabase(): Promise<TestDatabase> {
+  const config = loadConfig({ ...process.env, DATABASE_URL: undefined, DATABASE_OWNER_URL: undefined });
+  let target: TestDatabase;
   if (process.env.DATABASE_URL) {
-    // An external server: reuse its credentials for a database of our own.
-    const url = new URL(process.env.DATABASE_URL);
-    url.pathname = "/postgres";
-    maintenanceUrl = url.toString();
-    url.pathname = `/${TEST_DB}`;
-    testUrl = url.toString();
+    // An external server: the same roles, on a database of our own (the owner role needs CREATEDB).
+    const ownerBase = process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL;
+    target = {
+      appUrl: withDatabase(process.env.DATABASE_URL, TEST_DB),
+      ownerUrl: withDatabase(ownerBase, TEST_DB),
+      maintenanceUrl: withDatabase(ownerBase, "postgres"),
+    };
+    await dropDatabase(target.maintenanceUrl, TEST_DB);
+    await createDatabase(target.maintenanceUrl, TEST_DB);
   } else {
-    const cluster = await ensureLocalPostgres({ projectRoot, port: config.pgPort, logger });
-    maintenanceUrl = cluster.url;
-    testUrl = cluster.urlFor(TEST_DB);
+    const cluster = await ensureLocalPostgres({
+      projectRoot,
+      port: config.pgPort,
+      portIsDefault: !config.pgPortExplicit,
+      dataDir: config.dataDir,
+      logger,
+    });
+    target = { appUrl: cluster.appUrlFor(TEST_DB), ownerUrl: cluster.ownerUrlFor(TEST_DB), maintenanceUrl: cluster.url, cluster };
+    await dropDatabase(target.maintenanceUrl, TEST_DB);
+    await createDatabase(target.maintenanceUrl, TEST_DB, OWNER_ROLE);
   }
-  await dropDatabase(maintenanceUrl, TEST_DB);
-  await createDatabase(maintenanceUrl, TEST_DB);
-  const db = createDb(testUrl, { max: 2 });
+  const db = createDb(target.appUrl, { max: 2 });
   try {
-    await runMigrations(db);
+    await migrateAsOwner(target.ownerUrl, db, logger);
     await ensureSigningKey(config); // the demo seed signs a summary
     await seedDemo(db, config, logger);
   } finally {
     await db.$client.end();
   }
-  return { testUrl, maintenanceUrl };
+  return target;
 }
 
 /** `npm run lint` and `npm run typecheck`, both even when the first fails (one run shows every problem). */
@@ -125,7 +152,7 @@ async function main(): Promise<number> {
   run("bash", [path.join(projectRoot, "scripts", "ensure-chromium.sh")]);
 
   step(`preparing database ${TEST_DB}`);
-  const { testUrl: databaseUrl, maintenanceUrl } = await prepareDatabase();
+  const database = await prepareDatabase();
 
   // Each run builds into a folder of its own, so a running `npm start` or another run keeps its files.
   const clientDir = path.join(projectRoot, "dist", `test-client-${process.pid}`);
@@ -147,7 +174,8 @@ async function main(): Promise<number> {
     ...process.env,
     NODE_ENV: "test",
     PORT: String(port),
-    DATABASE_URL: databaseUrl,
+    DATABASE_URL: database.appUrl,
+    DATABASE_OWNER_URL: database.ownerUrl,
     STILLSPAN_SEED: "none",
     STILLSPAN_SESSION_SECRET: sessionSecret,
     STILLSPAN_SIGNIN_LIMIT: "100000",
@@ -179,7 +207,8 @@ async function main(): Promise<number> {
       env: {
         ...process.env,
         TEST_BASE_URL: baseUrl,
-        TEST_DATABASE_URL: databaseUrl,
+        TEST_DATABASE_URL: database.ownerUrl,
+        TEST_APP_DATABASE_URL: database.appUrl,
         TEST_SESSION_SECRET: sessionSecret,
         STILLSPAN_TEST: "1",
         ...mailEnv,
@@ -190,7 +219,8 @@ async function main(): Promise<number> {
   } finally {
     await stopProcessGroup(app);
     rmSync(clientDir, { recursive: true, force: true });
-    if (!process.env.STILLSPAN_TEST_DB) await dropDatabase(maintenanceUrl, TEST_DB).catch(() => undefined);
+    if (!process.env.STILLSPAN_TEST_DB) await dropDatabase(database.maintenanceUrl, TEST_DB).catch(() => undefined);
+    if (database.cluster) await releaseLocalPostgres(database.cluster, logger).catch(() => undefined);
   }
 }
 

@@ -12,6 +12,7 @@ import { AppError } from "./errors.js";
 import { refuseInvalidUtf8Body } from "./lib/strict-utf8.js";
 import { logger as defaultLogger, type Logger } from "./logger.js";
 import { apiNotFound, errorHandler } from "./middleware/error-handler.js";
+import { sameOriginGuard } from "./middleware/same-origin.js";
 import { apiRouter } from "./routes/index.js";
 import { wellKnownRoutes } from "./routes/well-known.js";
 import { SweepPool } from "./services/sweep-pool.js";
@@ -54,6 +55,8 @@ export function createApp(options: CreateAppOptions): Express {
       strictTransportSecurity: ctx.config.trustProxy,
     }),
   );
+  // Before any body is read: a write from another site is refused without parsing it.
+  app.use("/api", sameOriginGuard(ctx.config));
   // gzip or brotli for every compressible answer over 1 kB (zlib works in the thread pool, off the event loop).
   app.use(compression());
   app.use(express.json({ limit: "1mb", verify: refuseInvalidUtf8Body }));

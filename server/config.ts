@@ -21,6 +21,19 @@ const flag = z
   .optional()
   .transform((v) => v === "1" || v === "true");
 
+/**
+ * The site's address as users reach it: an http(s) origin, optionally with a trailing slash, nothing else — the app
+ * is served from the root of its host, and links and the same-origin check are built from this origin.
+ */
+const publicUrlSchema = z.url({ protocol: /^https?$/, error: "must be an http:// or https:// address" }).superRefine((value, ctx) => {
+  if (!URL.canParse(value)) return; // reported by z.url
+  const url = new URL(value);
+  if (url.username || url.password) ctx.addIssue({ code: "custom", message: "must not carry a user name or password" });
+  if (url.pathname !== "/" || url.search || url.hash) {
+    ctx.addIssue({ code: "custom", message: `must be an origin such as https://stillspan.example.org, without a path, query or fragment (got ${value})` });
+  }
+});
+
 /** Every environment variable the server reads, validated once at start. */
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -28,6 +41,7 @@ const envSchema = z.object({
   PORT: port(3000),
   PGPORT: port(54329),
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).optional(),
+  DATABASE_OWNER_URL: z.url({ protocol: /^postgres(ql)?$/ }).optional(),
   STILLSPAN_DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/, "lower-case letters, digits and _ only").default("stillspan"),
   STILLSPAN_DATA_DIR: optionalText,
   STILLSPAN_CLIENT_DIR: optionalText,
@@ -47,7 +61,7 @@ const envSchema = z.object({
   STILLSPAN_KEYS_DIR: optionalText,
   STILLSPAN_SIGNING_KEY: optionalText,
   STILLSPAN_SIGNING_RETIRED_JWKS: optionalText,
-  STILLSPAN_PUBLIC_URL: z.url({ protocol: /^https?$/ }).optional(),
+  STILLSPAN_PUBLIC_URL: publicUrlSchema.optional(),
   STILLSPAN_SWEEP_WORKERS: count(1, 2),
   STILLSPAN_SWEEP_TIMEOUT_MS: count(1, 20_000),
   STILLSPAN_SWEEP_QUEUE: count(0, 8),
@@ -65,7 +79,12 @@ export interface Config {
   host: string;
   port: number;
   pgPort: number;
+  /** True when PGPORT was set: a busy port is then reported, not replaced by a free one. */
+  pgPortExplicit: boolean;
+  /** The app's connection (DATABASE_URL): a role that may read and write rows, not change the schema. */
   databaseUrl?: string;
+  /** The owner role's connection for migrations (DATABASE_OWNER_URL; default: DATABASE_URL). */
+  databaseOwnerUrl?: string;
   databaseName: string;
   dataDir: string;
   /** Built client served by Express (default dist/client). */
@@ -79,7 +98,10 @@ export interface Config {
   smtp: { host?: string; port?: number; secure: boolean; user?: string; password?: string; from?: string };
   /** Summary signing keys: a key folder (default <dataDir>/keys), or a private key given by the environment. */
   signing: { keysDir: string; privateKey?: string; retiredJwks?: string };
-  /** Origin of the site as users reach it, for links in e-mails (STILLSPAN_PUBLIC_URL; default http://host:port). */
+  /**
+   * Origin of the site as users reach it (STILLSPAN_PUBLIC_URL; default http://host:port), no trailing slash: for
+   * absolute links (e-mails) and, beside the request's own Host, as the app's origin in the same-origin check.
+   */
   publicUrl: string;
   /** The sweep worker pool (STILLSPAN_SWEEP_*), see server/services/sweep-pool.ts. */
   sweeps: SweepPoolSettings;
@@ -105,6 +127,9 @@ export function parseEnv(env: NodeJS.ProcessEnv = process.env): Env {
     }
     if ((e.STILLSPAN_HEADERS_TIMEOUT_MS ?? 0) > e.STILLSPAN_REQUEST_TIMEOUT_MS) {
       problems.push("STILLSPAN_HEADERS_TIMEOUT_MS: must not be longer than STILLSPAN_REQUEST_TIMEOUT_MS");
+    }
+    if (e.DATABASE_OWNER_URL && !e.DATABASE_URL) {
+      problems.push("DATABASE_OWNER_URL: set DATABASE_URL too (the app's own role); without both, the project's own PostgreSQL is used");
     }
   }
   if (problems.length > 0 || !result.success) throw new ConfigError(problems);
@@ -134,7 +159,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     host: e.STILLSPAN_HOST,
     port: e.PORT,
     pgPort: e.PGPORT,
+    pgPortExplicit: env.PGPORT !== undefined && env.PGPORT !== "",
     databaseUrl: e.DATABASE_URL,
+    databaseOwnerUrl: e.DATABASE_OWNER_URL,
     databaseName: e.STILLSPAN_DB_NAME,
     dataDir,
     clientDir: path.resolve(projectRoot, e.STILLSPAN_CLIENT_DIR ?? path.join("dist", "client")),

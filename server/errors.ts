@@ -56,3 +56,14 @@ export function zodIssues(err: ZodError): { path: string; rule: string; message:
   }));
   return capList(issues, (count) => ({ path: "(body)", rule: "more", message: `… and ${count} more problems` }));
 }
+
+/**
+ * A problem the person starting a command can fix (a busy port, a missing setting): its message is one sentence
+ * saying what to do, printed as it is — never with a stack trace.
+ */
+export class StartupError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "StartupError";
+  }
+}

@@ -2,10 +2,11 @@
  * Verifies a signed stability summary against a JWKS document. Browser-safe (jose, the canonicaliser and the
  * schema only): the server's POST /api/signatures/verify and the summary page in the browser run the same check.
  *
- * Valid means all of: the compact JWS verifies with EdDSA under the key its `kid` names in the JWKS; the `typ` is
- * a Stillspan summary; the payload is UTF-8 JSON in RFC 8785 canonical form; it matches the summary schema.
+ * Valid means all of: each of the three parts is canonical base64url; the compact JWS verifies with EdDSA under the
+ * key its `kid` names in the JWKS; the `typ` is a Stillspan summary; the payload is UTF-8 JSON in RFC 8785
+ * canonical form; it matches the summary schema.
  */
-import { compactVerify, createLocalJWKSet, decodeProtectedHeader, errors, type JSONWebKeySet } from "jose";
+import { base64url, compactVerify, createLocalJWKSet, decodeProtectedHeader, errors, type JSONWebKeySet } from "jose";
 import { canonicalJson } from "./canonical-json";
 import {
   SUMMARY_FORMAT,
@@ -36,10 +37,29 @@ function isCanonical(decoded: unknown, text: string): boolean {
   }
 }
 
+/**
+ * True when `part` is the one canonical base64url spelling of its bytes (RFC 7515 §2, RFC 4648 §5 and §3.5): the
+ * URL-safe alphabet, no padding, no impossible length, and the unused low bits of the last character zero.
+ * Decoders ignore those bits, so without this check one signature has several spellings — and as many
+ * verification codes, since the code hashes the JWS text.
+ */
+function isCanonicalBase64url(part: string): boolean {
+  if (!/^[A-Za-z0-9_-]*$/.test(part) || part.length % 4 === 1) return false;
+  try {
+    return base64url.encode(base64url.decode(part)) === part;
+  } catch {
+    return false;
+  }
+}
+
 export async function verifySummary(jws: string, jwks: JSONWebKeySet): Promise<SummaryVerification> {
   const kid = headerKid(jws);
   const invalid = (reason: string): SummaryVerification => ({ valid: false, kid, summary: null, reason });
   if (kid === null) return invalid("not a compact JWS with a key id (kid) in its protected header");
+  const parts = jws.split(".");
+  const names = ["protected header", "payload", "signature"];
+  const spelt = parts.findIndex((part) => !isCanonicalBase64url(part));
+  if (parts.length === 3 && spelt >= 0) return invalid(`the ${names[spelt]} is not in canonical base64url (it has been re-encoded)`);
 
   let payload: Uint8Array;
   let typ: unknown;

@@ -3,7 +3,13 @@
 // plotly.js-dist-min ships no types. Plot components build their React wrapper with
 // `createPlotlyComponent(Plotly)` from react-plotly.js/factory (the default entry fails with dist-min).
 declare module "plotly.js-dist-min" {
-  const Plotly: object;
+  const Plotly: {
+    /** Renders the drawn figure `graph` as an image in the browser and saves it as `<filename>.<format>`. */
+    downloadImage(
+      graph: HTMLElement,
+      options: { format: "png" | "svg" | "jpeg" | "webp"; filename: string; width?: number; height?: number; scale?: number },
+    ): Promise<string>;
+  };
   export default Plotly;
 }
 

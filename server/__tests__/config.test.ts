@@ -23,6 +23,31 @@ describe("parseEnv", () => {
     expect(problems).toEqual(["DATABASE_URL", "PGPORT", "PORT", "STILLSPAN_SEED"]);
   });
 
+  it("takes STILLSPAN_PUBLIC_URL as an http(s) origin only, and refuses a path, credentials or another scheme", () => {
+    expect(parseEnv({ STILLSPAN_PUBLIC_URL: "https://stillspan.example.org/" }).STILLSPAN_PUBLIC_URL).toBe("https://stillspan.example.org/");
+    expect(loadConfig({ STILLSPAN_PUBLIC_URL: "https://stillspan.example.org:8443/", STILLSPAN_SESSION_SECRET: "s".repeat(32) }).publicUrl).toBe(
+      "https://stillspan.example.org:8443",
+    );
+    for (const bad of ["ftp://stillspan.example.org", "https://stillspan.example.org/app", "https://user:pw@stillspan.example.org", "not a url"]) {
+      expect(() => parseEnv({ STILLSPAN_PUBLIC_URL: bad }), bad).toThrow(/STILLSPAN_PUBLIC_URL/);
+    }
+  });
+
+  it("takes DATABASE_OWNER_URL for migrations only together with DATABASE_URL for the app", () => {
+    const env = { DATABASE_URL: "postgres://app:a@db/stillspan", DATABASE_OWNER_URL: "postgres://owner:o@db/stillspan" };
+    expect(loadConfig({ ...env, STILLSPAN_SESSION_SECRET: "s".repeat(32) })).toMatchObject({
+      databaseUrl: env.DATABASE_URL,
+      databaseOwnerUrl: env.DATABASE_OWNER_URL,
+    });
+    expect(() => parseEnv({ DATABASE_OWNER_URL: env.DATABASE_OWNER_URL })).toThrow(/set DATABASE_URL too/);
+  });
+
+  it("tells a set PGPORT from the default one", () => {
+    const secret = { STILLSPAN_SESSION_SECRET: "s".repeat(32) };
+    expect(loadConfig(secret)).toMatchObject({ pgPort: 54329, pgPortExplicit: false });
+    expect(loadConfig({ ...secret, PGPORT: "54330" })).toMatchObject({ pgPort: 54330, pgPortExplicit: true });
+  });
+
   it("requires the first-admin e-mail and password together", () => {
     expect(() => parseEnv({ STILLSPAN_ADMIN_EMAIL: "ops@example.org" })).toThrow(/set both or neither/);
   });

@@ -18,8 +18,8 @@ export function passwordResetRoutes(ctx: AppContext): Router {
 
   router.post("/", limiter, async (req, res) => {
     const { email } = passwordResetRequestSchema.parse(req.body ?? {});
-    await requestPasswordReset(ctx, email, req.ip);
-    // The same answer whether or not the account exists.
+    requestPasswordReset(ctx, email, req.ip);
+    // The same answer, after the same work, whether or not the account exists.
     res.status(202).json({
       message: "If an account exists for this address, a link to choose a new password is on its way. It works once, for 72 hours.",
     });

@@ -1,7 +1,7 @@
 import { Router, type Request } from "express";
 import { createCommentSchema, returnReviewSchema, signReviewSchema } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
-import { currentUser, requireAuth } from "../middleware/auth.js";
+import { currentUser, requireAdmin, requireAuth } from "../middleware/auth.js";
 import { parseObjectId } from "../services/access.js";
 import {
   addComment,
@@ -10,12 +10,13 @@ import {
   reviewQueue,
   submitForReview,
 } from "../services/review.js";
+import { reassignReviewer } from "../services/review-assignment.js";
 import { signRevision } from "../services/summaries.js";
 
 const revisionId = (req: Request) => parseObjectId(req.params.id, "Revision");
 
 /**
- * /api/revisions/:id/{review,submit,return,sign,comments}: the review workflow of one revision. Mounted beside
+ * /api/revisions/:id/{review,submit,return,sign,reviewer,comments}: the review workflow of one revision. Mounted beside
  * the studies API's /api/revisions router; only these sub-paths are handled here.
  */
 export function reviewRoutes(ctx: AppContext): Router {
@@ -38,6 +39,10 @@ export function reviewRoutes(ctx: AppContext): Router {
   router.post("/:id/sign", requireAuth, async (req, res) => {
     const { statement } = signReviewSchema.parse(req.body ?? {});
     res.status(201).json(await signRevision(ctx, currentUser(req), revisionId(req), statement, req.ip));
+  });
+
+  router.post("/:id/reviewer", requireAuth, requireAdmin, async (req, res) => {
+    res.json(await reassignReviewer(ctx, currentUser(req), revisionId(req), req.body ?? {}, req.ip));
   });
 
   router.post("/:id/comments", requireAuth, async (req, res) => {

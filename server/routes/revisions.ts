@@ -1,4 +1,5 @@
 import { Router } from "express";
+import { rerunRevisionSchema } from "../../shared/schemas/revisions.js";
 import type { AppContext } from "../app-context.js";
 import { requestSweeps } from "../lib/request-sweeps.js";
 import { sendStepsTable } from "../lib/send-steps-table.js";
@@ -23,8 +24,10 @@ export function revisionRoutes({ db, sweeps }: AppContext): Router {
     res.json(await diffRevisions(db, currentUser(req), revisionId(req.params.a), revisionId(req.params.b)));
   });
   router.post("/:id/rerun", async (req, res) => {
+    const id = revisionId(req.params.id);
+    const { parentRevision } = rerunRevisionSchema.parse(req.body ?? {});
     const user = currentUser(req);
-    res.status(201).json(await rerunRevision(db, requestSweeps(sweeps, user, res), user, revisionId(req.params.id), req.ip));
+    res.status(201).json(await rerunRevision(db, requestSweeps(sweeps, user, res), user, id, parentRevision, req.ip));
   });
   router.get("/:id/export", async (req, res) => {
     const file = await exportRevision(db, currentUser(req), revisionId(req.params.id));

@@ -59,7 +59,7 @@ export function studyRoutes({ db, sweeps }: AppContext): Router {
   });
   router.post("/:id/import", uploadOne("file", MAX_STUDY_FILE_BYTES), async (req, res) => {
     const id = studyId(req.params.id);
-    const fields = importRevisionFieldsSchema.parse({ parentRevision: "", ...req.body });
+    const fields = importRevisionFieldsSchema.parse(req.body ?? {});
     const user = currentUser(req);
     res.status(201).json(await importRevision(db, requestSweeps(sweeps, user, res), user, id, fields, req.file, req.ip));
   });

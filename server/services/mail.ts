@@ -6,6 +6,7 @@
 import type { Config } from "../config.js";
 import type { Db } from "../db/client.js";
 import { insertDevMail, listDevMail } from "../db/queries/dev-mail.js";
+import { StartupError } from "../errors.js";
 import type { Logger } from "../logger.js";
 import { startFakeSmtp, type FakeSmtp } from "../mail/fake-smtp.js";
 import { createMailer, DEFAULT_FROM, type Mailer, type OutgoingMail, type SmtpSettings } from "../mail/mailer.js";
@@ -41,27 +42,34 @@ export function mailerFor(config: MailConfig): Mailer {
 
 /**
  * Starts the local fake SMTP server when no SMTP_HOST is configured; null otherwise. Each received message is
- * stored in dev_mail_messages.
+ * stored in dev_mail_messages. When SMTP_PORT is not set and the default port is taken (another checkout's
+ * server, say), the fake takes a free port instead and the mailer follows it; a set SMTP_PORT that is taken stops
+ * the start with one sentence saying what to do.
  */
 export async function startFakeSmtpIfNeeded(config: MailConfig, db: Db, log: Logger): Promise<FakeSmtp | null> {
   if (!usesFakeSmtp(config)) return null;
-  const port = config.smtp.port ?? FAKE_SMTP_DEFAULT_PORT;
-  try {
-    return await startFakeSmtp({
+  const explicit = config.smtp.port !== undefined;
+  const start = (port: number) =>
+    startFakeSmtp({
       port,
       store: (mail) => insertDevMail(db, mail),
       onError: (err) => log.error({ err }, "fake SMTP server error"),
     });
+  const port = config.smtp.port ?? FAKE_SMTP_DEFAULT_PORT;
+  try {
+    return await start(port);
   } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    if (code === "EADDRINUSE") {
-      throw new Error(
-        `SMTP_PORT ${port} is in use: the local fake SMTP server cannot start. Set SMTP_PORT to a free port, ` +
+    if ((err as NodeJS.ErrnoException).code !== "EADDRINUSE") throw err;
+    if (explicit) {
+      throw new StartupError(
+        `SMTP_PORT ${port} is in use, so the local fake SMTP server cannot start: set SMTP_PORT to a free port, ` +
           "or SMTP_HOST (and SMTP_PORT, SMTP_USER, SMTP_PASSWORD, SMTP_FROM) for a real server.",
-        { cause: err },
       );
     }
-    throw err;
+    const fake = await start(0);
+    config.smtp.port = fake.port; // before the first message: the mailer is created on first use
+    log.warn({ busy: port, port: fake.port }, "the default fake SMTP port is in use: the local fake SMTP server took a free port");
+    return fake;
   }
 }
 

@@ -142,10 +142,19 @@ export async function acceptInvitation(
 }
 
 /**
- * POST /api/auth/password-reset: e-mails a reset link when the account exists. The caller learns nothing
- * either way (same answer, and the mail is sent in the background so the timing does not tell either).
+ * POST /api/auth/password-reset: e-mails a reset link when the account exists. The caller learns nothing either
+ * way: the answer is the same, and it is given before anything depends on the account — the request path does
+ * exactly the same work for every address (schedule, return), and the lookup, the token and the mail follow
+ * after the answer has gone. A failure there is logged; the caller could not act on it anyway.
  */
-export async function requestPasswordReset(ctx: AppContext, email: string, ip?: string): Promise<void> {
+export function requestPasswordReset(ctx: AppContext, email: string, ip?: string): void {
+  setImmediate(() => {
+    sendPasswordResetLink(ctx, email, ip).catch((err: unknown) => ctx.logger.error({ err }, "password reset request failed"));
+  });
+}
+
+/** The work behind a password-reset request, after the answer: a link for an existing account (throttled per hour). */
+async function sendPasswordResetLink(ctx: AppContext, email: string, ip?: string): Promise<void> {
   const { db } = ctx;
   const user = await findUserByEmail(db, email);
   if (!user) return;
@@ -160,7 +169,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string, ip?: 
     await writeAudit(tx, { actorId: user.id, action: "auth.password-reset.request", objectType: "user", objectId: user.id, ip });
   });
   const mail = passwordResetMail({ recipientName: user.name, link: appLinks.resetPassword(ctx.config.publicUrl, token), expiresAt });
-  void deliverMail(ctx, { to: user.email, ...mail });
+  await deliverMail(ctx, { to: user.email, ...mail });
 }
 
 /**

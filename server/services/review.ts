@@ -28,6 +28,7 @@ import {
   listReviewQueue,
   resubmitReviewRequest,
   reviewPeople,
+  type ReviewRequestRow,
 } from "../db/queries/review.js";
 import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignatureOfRevision } from "../db/queries/signatures.js";
@@ -60,6 +61,23 @@ export async function assertReviewer(db: DbOrTx, user: SessionUser, revision: Re
   }
   if (revision.authorId === user.id) {
     throw AppError.forbidden(`You are the author of revision ${revision.number}: nobody may ${what} their own revision.`);
+  }
+}
+
+/**
+ * Inside the decision's transaction, on the locked request: only the reviewer the revision is assigned to may sign
+ * or return it — another reviewer of the project may read and comment, not decide. An administrator reassigns.
+ */
+export function assertAssignedReviewer(
+  request: Pick<ReviewRequestRow, "reviewerId">,
+  user: SessionUser,
+  revision: Pick<RevisionRow, "number">,
+  what: string,
+): void {
+  if (request.reviewerId !== user.id) {
+    throw AppError.forbidden(
+      `Revision ${revision.number} is assigned to another reviewer: only they can ${what}. An administrator can reassign the review.`,
+    );
   }
 }
 
@@ -118,6 +136,20 @@ export async function getRevisionReview(db: Db, user: SessionUser, revisionId: n
   };
 }
 
+/** 400 on `reviewerId` unless the user is a reviewer of the revision's project and not its author. */
+export async function assertEligibleReviewer(
+  db: DbOrTx,
+  reviewerId: number,
+  revision: Pick<RevisionRow, "projectId" | "authorId">,
+): Promise<void> {
+  if ((await findMembershipRole(db, reviewerId, revision.projectId)) !== "reviewer") {
+    throw AppError.badRequest(`User ${reviewerId} is not a reviewer of this project: name one of its reviewers.`, { path: "reviewerId" });
+  }
+  if (reviewerId === revision.authorId) {
+    throw AppError.badRequest("The reviewer cannot be the revision's author.", { path: "reviewerId" });
+  }
+}
+
 /** POST /api/revisions/:id/submit — an analyst sends a draft (or a returned revision) to a reviewer of the project. */
 export async function submitForReview(
   ctx: AppContext,
@@ -129,15 +161,7 @@ export async function submitForReview(
   const input = submitReviewSchema.parse(body);
   const { db } = ctx;
   const revision = await revisionFor(db, user, revisionId, ["analyst"]);
-  const reviewerRole = await findMembershipRole(db, input.reviewerId, revision.projectId);
-  if (reviewerRole !== "reviewer") {
-    throw AppError.badRequest(`User ${input.reviewerId} is not a reviewer of this project: name one of its reviewers.`, {
-      path: "reviewerId",
-    });
-  }
-  if (input.reviewerId === revision.authorId) {
-    throw AppError.badRequest("The reviewer cannot be the revision's author.", { path: "reviewerId" });
-  }
+  await assertEligibleReviewer(db, input.reviewerId, revision);
   try {
     await db.transaction((tx) =>
       recordSubmission(tx, { revision, analystId: user.id, reviewerId: input.reviewerId, note: input.note, ip }),
@@ -167,6 +191,7 @@ export async function returnRevision(
     const request = await findReviewRequest(tx, revisionId, true);
     if (!request) throw AppError.conflict(`Revision ${revision.number} has not been submitted for review.`);
     if (request.state !== "in-review") throw AppError.conflict(`Revision ${revision.number} is ${request.state}, not in review.`);
+    assertAssignedReviewer(request, user, revision, "return it");
     await decideReviewRequest(tx, request.id, "returned", user.id, now);
     await insertReviewComment(tx, { revisionId, authorId: user.id, body: comments });
     await insertReviewEvent(tx, { revisionId, kind: "returned", actorId: user.id, note: comments, at: now });

@@ -235,14 +235,23 @@ export async function diffRevisions(db: DbOrTx, user: SessionUser, a: number, b:
 }
 
 /**
- * Re-runs a stored revision's document with the current engine as the study's next revision. The stored
- * result is never touched; the new revision's change note names the engine (and the source revision when it
- * is not the newest).
+ * Re-runs a stored revision's document with the current engine as the study's next revision, on top of
+ * `parentRevision` — the newest revision the caller saw: like every write that creates a revision, a stale base
+ * is refused with 409 `stale_parent`, so a re-run never silently drops a save made in between. The stored result
+ * is never touched; the new revision's change note names the engine (and the source revision when it is not the
+ * newest).
  */
-export async function rerunRevision(db: DbOrTx, sweeps: RunSweep, user: SessionUser, id: number, ip?: string): Promise<RevisionDto> {
+export async function rerunRevision(
+  db: DbOrTx,
+  sweeps: RunSweep,
+  user: SessionUser,
+  id: number,
+  parentRevision: number,
+  ip?: string,
+): Promise<RevisionDto> {
   const source = await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "write");
-  const note = `re-run with engine ${ENGINE_VERSION}` + (source.number < source.latestNumber ? ` (document of revision ${source.number})` : "");
-  return saveRevision(db, sweeps, user, source.studyId, { parentRevision: source.latestNumber, changeNote: note, study: source.document }, ip, "rerun");
+  const note = `re-run with engine ${ENGINE_VERSION}` + (source.number < parentRevision ? ` (document of revision ${source.number})` : "");
+  return saveRevision(db, sweeps, user, source.studyId, { parentRevision, changeNote: note, study: source.document }, ip, "rerun");
 }
 
 /** The document of a revision as a file: pretty JSON, and the canonical hash it was stored with. */

@@ -23,7 +23,7 @@ import { renderSummaryPdf } from "../pdf/summary-pdf.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
-import { assertReviewer, revisionFor } from "./review.js";
+import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
 import { notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
@@ -122,6 +122,7 @@ export async function signRevision(
           `Revision ${revision.number} is ${request ? request.state : "a draft"}: only a revision in review can be signed.`,
         );
       }
+      assertAssignedReviewer(request, user, revision, "sign it");
       return recordSignature(tx, config, {
         revision: full,
         requestId: request.id,

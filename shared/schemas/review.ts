@@ -13,7 +13,7 @@ export const REVIEW_REQUEST_STATES = ["in-review", "returned", "signed"] as cons
 export const REVIEW_STATES = ["draft", ...REVIEW_REQUEST_STATES] as const;
 export type ReviewState = (typeof REVIEW_STATES)[number];
 
-export const REVIEW_EVENT_KINDS = ["submitted", "returned", "signed", "commented"] as const;
+export const REVIEW_EVENT_KINDS = ["submitted", "returned", "signed", "commented", "reassigned"] as const;
 export type ReviewEventKind = (typeof REVIEW_EVENT_KINDS)[number];
 
 const text = (max: number) =>
@@ -33,6 +33,16 @@ export const submitReviewSchema = z.strictObject({
   note: userText().trim().max(4000, "must have at most 4000 characters").default(""),
 });
 export type SubmitReviewInput = z.input<typeof submitReviewSchema>;
+
+/**
+ * POST /api/revisions/:id/reviewer (administrators): hands a revision in review to another reviewer of the project,
+ * e.g. when the assigned one is away. Only the assigned reviewer may sign or return a revision.
+ */
+export const reassignReviewSchema = z.strictObject({
+  reviewerId: userId,
+  note: z.string().trim().max(4000, "must have at most 4000 characters").default(""),
+});
+export type ReassignReviewInput = z.input<typeof reassignReviewSchema>;
 
 /** POST /api/revisions/:id/return (reviewers): the comments are required — they say what to change. */
 export const returnReviewSchema = z.strictObject({ comments: text(8000) });

@@ -27,13 +27,25 @@ export const createRevisionSchema = z.strictObject({
 });
 export type CreateRevisionInput = z.input<typeof createRevisionSchema>;
 
-/** Multipart fields of POST /api/studies/:id/import besides the `file` part (a study JSON file). */
+/**
+ * Multipart fields of POST /api/studies/:id/import besides the `file` part (a study JSON file). `parentRevision`
+ * is required like on a save: the number of the newest revision the import goes on top of, or empty for the first
+ * revision of an empty study; 409 `stale_parent` when a newer one exists.
+ */
 export const importRevisionFieldsSchema = z.strictObject({
   parentRevision: z
-    .string()
+    .string({ error: "is required: the number of the newest revision the import goes on top of (empty for the first revision)" })
     .regex(/^(\d{1,9}|null|)$/, "must be a revision number, or empty for the first revision")
     .transform((v) => (v === "" || v === "null" ? null : Number(v))),
   changeNote: userText().trim().max(CHANGE_NOTE_MAX, `must have at most ${CHANGE_NOTE_MAX} characters`).default(""),
+});
+
+/**
+ * POST /api/revisions/:id/rerun (analysts): `parentRevision` is the study's newest revision as the caller saw it;
+ * the re-run is stored on top of it, or refused with 409 `stale_parent` when someone saved in between.
+ */
+export const rerunRevisionSchema = z.strictObject({
+  parentRevision: z.number({ error: "is required: the number of the study's newest revision" }).int("must be a whole number").positive("must be greater than 0"),
 });
 
 export const personSchema = z.object({ id: z.string(), name: z.string() });

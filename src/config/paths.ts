@@ -126,6 +126,7 @@ export const apiPaths = {
     submit: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/submit`,
     return: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/return`,
     sign: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/sign`,
+    reviewer: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/reviewer`,
     comments: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/comments`,
   },
   summaries: {

@@ -155,4 +155,17 @@ describe("sign-in settings of a deployment", () => {
     expect(third.status).toBe(429);
     expect(third.body.error.code).toBe("too_many_attempts");
   });
+
+  it("limits failed attempts per account too: a second address gets no more guesses at the same account", async () => {
+    const from = (address: string, email: string, password = "wrong-password") =>
+      api(app.baseUrl, "/api/auth/sign-in", { body: { email, password }, headers: { "X-Forwarded-For": address } });
+    expect((await from("203.0.113.10", "reviewer@stillspan.test")).status).toBe(401);
+    expect((await from("203.0.113.10", "reviewer@stillspan.test")).status).toBe(401);
+    // Another address, the same account (spelt in another case): refused.
+    const moved = await from("198.51.100.20", "Reviewer@Stillspan.test");
+    expect(moved.status).toBe(429);
+    expect(moved.body.error.code).toBe("too_many_attempts");
+    // That address may still try another account, which has its own count.
+    expect((await from("198.51.100.20", "analyst@stillspan.test")).status).toBe(401);
+  });
 });

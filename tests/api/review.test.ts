@@ -1,7 +1,11 @@
+import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { insertUser } from "../../server/db/queries/users.js";
+import { hashPassword } from "../../server/services/passwords.js";
 import { auditActions, createProjectWithMembers, openTestDb, userId } from "../support/db.js";
 import { testEnv } from "../support/env.js";
-import { api, signIn } from "../support/http.js";
+import { api, DEMO_PASSWORD, signIn } from "../support/http.js";
+import { lastAuditId } from "../support/workspace.js";
 import { addRevision, arrangeStudy, waitForMail, type ArrangedStudy } from "../support/review.js";
 
 const base = () => testEnv.baseUrl;
@@ -201,5 +205,83 @@ describe("nobody signs their own revision", () => {
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/own revision/);
     expect((await review(own, cookies.analyst)).body.state).toBe("in-review");
+  });
+});
+
+describe("only the assigned reviewer decides; an administrator reassigns", () => {
+  let assigned: ArrangedStudy;
+  let teamProjectId: number;
+  let second: { id: number; cookie: string };
+  const secondEmail = `second-reviewer-${suffix}@stillspan.test`;
+
+  beforeAll(async () => {
+    const secondId = await insertUser(db, { email: secondEmail, name: "Ines Calloway", passwordHash: await hashPassword(DEMO_PASSWORD) }).then((u) => u.id);
+    teamProjectId = await createProjectWithMembers(db, `Two-reviewer crossing ${suffix}`, {
+      "analyst@stillspan.test": "analyst",
+      "reviewer@stillspan.test": "reviewer",
+      [secondEmail]: "reviewer",
+      "viewer@stillspan.test": "viewer",
+    });
+    second = { id: secondId, cookie: await signIn(base(), secondEmail) };
+    assigned = await arrangeStudy(base(), cookies.analyst, teamProjectId, `Assignment ${suffix}`);
+    const submitted = await api(base(), `/api/revisions/${assigned.revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
+    expect(submitted.status).toBe(200);
+  });
+
+  it("refuses another reviewer of the project who is not assigned: sign and return are 403, nothing changes", async () => {
+    const auditBefore = await lastAuditId(db);
+    const sign = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: second.cookie, body: { statement: "Not mine to sign." } });
+    expect(sign.status).toBe(403);
+    expect(sign.body.error.message).toMatch(/assigned to another reviewer/);
+    const ret = await api(base(), `/api/revisions/${assigned.revisionId}/return`, { cookie: second.cookie, body: { comments: "Not mine to return." } });
+    expect(ret.status).toBe(403);
+    expect(await lastAuditId(db)).toBe(auditBefore);
+    const state = await review(assigned.revisionId, cookies.analyst);
+    expect(state.body).toMatchObject({ state: "in-review", signature: null, comments: [] });
+    // Not in their queue either; they may still read and comment.
+    const queue = await api(base(), "/api/review-queue", { cookie: second.cookie });
+    expect(queue.body.map((q: { revisionId: string }) => q.revisionId)).not.toContain(assigned.revisionId);
+  });
+
+  it("lets only administrators reassign (403 for the analyst and the assigned reviewer), to an eligible reviewer (400), not to the same one (409)", async () => {
+    const to = (cookie: string, body: unknown) => api(base(), `/api/revisions/${assigned.revisionId}/reviewer`, { cookie, body });
+    expect((await to(cookies.analyst, { reviewerId: second.id })).status).toBe(403);
+    expect((await to(cookies.reviewer, { reviewerId: second.id })).status).toBe(403);
+    const viewerId = await userId(db, "viewer@stillspan.test");
+    const notReviewer = await to(cookies.admin, { reviewerId: viewerId });
+    expect(notReviewer.status).toBe(400);
+    expect(notReviewer.body.error.message).toMatch(/not a reviewer of this project/);
+    const same = await to(cookies.admin, { reviewerId });
+    expect(same.status).toBe(409);
+    expect((await to(cookies.admin, {})).status).toBe(400);
+  });
+
+  it("reassigns: audited with from and to, kept in the history, moved between queues, e-mailed; then only the new reviewer decides", async () => {
+    const res = await api(base(), `/api/revisions/${assigned.revisionId}/reviewer`, {
+      cookie: cookies.admin,
+      body: { reviewerId: String(second.id), note: "Mira is away this week." },
+    });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.request.reviewer).toEqual({ id: String(second.id), name: "Ines Calloway" });
+    expect(res.body.events.map((e: { kind: string }) => e.kind)).toEqual(["submitted", "reassigned"]);
+    expect(res.body.events[1]).toMatchObject({ actor: { id: String(adminId) }, reviewer: { id: String(second.id) }, note: "Mira is away this week." });
+    const { rows } = await db.execute<{ details: { fromReviewerId: number; toReviewerId: number }; actor_id: number }>(
+      sql`select details, actor_id from audit_events where action = 'review.reassign' and object_id = ${assigned.revisionId}`,
+    );
+    expect(rows).toEqual([{ details: { fromReviewerId: reviewerId, toReviewerId: second.id }, actor_id: adminId }]);
+
+    const queueOf = async (cookie: string) =>
+      (await api(base(), "/api/review-queue", { cookie })).body.map((q: { revisionId: string }) => q.revisionId);
+    expect(await queueOf(second.cookie)).toContain(assigned.revisionId);
+    expect(await queueOf(cookies.reviewer)).not.toContain(assigned.revisionId);
+    const [mail] = await waitForMail(base(), cookies.admin, secondEmail, `Review requested: Assignment ${suffix}, revision 1`);
+    expect(mail, "review-requested message to the new reviewer").toBeDefined();
+
+    const formerSigns = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: cookies.reviewer, body: { statement: "I was first." } });
+    expect(formerSigns.status).toBe(403);
+    const signed = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: second.cookie, body: { statement: "Checked: stable with margin." } });
+    expect(signed.status, JSON.stringify(signed.body)).toBe(201);
+    const late = await api(base(), `/api/revisions/${assigned.revisionId}/reviewer`, { cookie: cookies.admin, body: { reviewerId } });
+    expect(late.status).toBe(409);
   });
 });

@@ -196,7 +196,7 @@ describe("reading, diffing and re-running revisions", () => {
     const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
     const before = await api(base(), `/api/revisions/${revision1Id}`, { cookie: analyst });
 
-    const res = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, method: "POST" });
+    const res = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, body: { parentRevision: 1 } });
 
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ number: 2, changeNote: `re-run with engine ${ENGINE_VERSION}`, documentSha256: before.body.documentSha256 });
@@ -204,6 +204,37 @@ describe("reading, diffing and re-running revisions", () => {
     expect(after.body.result).toEqual(before.body.result);
     expect(after.body.createdAt).toBe(before.body.createdAt);
     expect((await api(base(), `/api/studies/${studyId}/revisions`, { cookie: analyst })).body).toHaveLength(2);
+  });
+
+  it("refuses a re-run and an import on a stale base with 409 stale_parent, and either without a base with 400; nothing stored", async () => {
+    const { studyId, revision1Id } = await createAlternativeAndStudy(base(), analyst, projectId);
+    // Someone saves revision 2 while the re-run button still shows revision 1 as the newest.
+    const saved = inventedStudy();
+    saved.structure.mass = 16100;
+    expect((await api(base(), `/api/studies/${studyId}/revisions`, { cookie: analyst, body: { parentRevision: 1, changeNote: "mass", study: saved } })).status).toBe(201);
+    const counts = await rowCounts(db);
+
+    const staleRerun = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, body: { parentRevision: 1 } });
+    expect(staleRerun.status).toBe(409);
+    expect(staleRerun.body.error.code).toBe("stale_parent");
+    expect(staleRerun.body.error.details.latest.number).toBe(2);
+    const noBase = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, method: "POST" });
+    expect(noBase.status).toBe(400);
+    expect(noBase.body.error.details).toEqual([expect.objectContaining({ path: "parentRevision" })]);
+
+    const file = { name: "s.json", bytes: new TextEncoder().encode(JSON.stringify(inventedStudy())), type: "application/json" };
+    const staleImport = await upload(base(), `/api/studies/${studyId}/import`, { cookie: analyst, field: "file", file, fields: { parentRevision: "1", changeNote: "late import" } });
+    expect(staleImport.status).toBe(409);
+    expect(staleImport.body.error.code).toBe("stale_parent");
+    const importNoBase = await upload(base(), `/api/studies/${studyId}/import`, { cookie: analyst, field: "file", file, fields: { changeNote: "no base" } });
+    expect(importNoBase.status).toBe(400);
+    expect(importNoBase.body.error.details).toEqual([expect.objectContaining({ path: "parentRevision" })]);
+    expect(await rowCounts(db)).toEqual(counts);
+
+    // On the current base the re-run goes through, on top of revision 2, with revision 1's document.
+    const rerun = await api(base(), `/api/revisions/${revision1Id}/rerun`, { cookie: analyst, body: { parentRevision: 2 } });
+    expect(rerun.status).toBe(201);
+    expect(rerun.body).toMatchObject({ number: 3, parentNumber: 2, changeNote: `re-run with engine ${ENGINE_VERSION} (document of revision 1)` });
   });
 
   it("round-trips export → import → export to the identical canonical JSON and hash", async () => {
@@ -304,7 +335,7 @@ describe("audit trail", () => {
       label: "re-run",
       actor: analystId,
       action: "revision.create",
-      run: () => api(base(), `/api/revisions/${revisionId}/rerun`, { cookie: analyst, method: "POST" }),
+      run: () => api(base(), `/api/revisions/${revisionId}/rerun`, { cookie: analyst, body: { parentRevision: 2 } }),
     });
     steps.push({
       label: "rename study",

@@ -73,6 +73,18 @@ describe("POST /api/signatures/verify", () => {
     expect(res.body).toMatchObject({ valid: false, summary: null });
   });
 
+  it("answers valid: false for a signature re-spelt in the unused bits of its last character (same bytes, other text)", async () => {
+    const [header, payload, signature] = jws.split(".");
+    const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_";
+    // 64 bytes → 86 characters; the last one carries 2 bits of the signature and 4 unused bits.
+    const respelt = signature.slice(0, -1) + alphabet[alphabet.indexOf(signature.at(-1)!) ^ 1];
+    expect(Buffer.from(respelt, "base64url").equals(Buffer.from(signature, "base64url"))).toBe(true);
+    const res = await api(base(), "/api/signatures/verify", { body: { jws: `${header}.${payload}.${respelt}` } });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ valid: false, summary: null, current: null, summaryId: null });
+    expect(res.body.reason).toMatch(/signature is not in canonical base64url/);
+  });
+
   it("answers valid: false for a summary signed by a key this server never published", async () => {
     const foreign = await KeyStore.open({ dir: path.join(foreignDir, "keys") });
     const { jws: foreignJws, kid } = await signSummary(foreign, inventedSummary());

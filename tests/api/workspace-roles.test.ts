@@ -182,7 +182,13 @@ const ROUTES: Route[] = [
         fields: { parentRevision: parent, changeNote: "matrix import" },
       }),
   },
-  { name: "POST /revisions/:id/rerun", write: true, ok: 201, call: (c) => json("POST", `/api/revisions/${ids.revision2Id}/rerun`)(c) },
+  {
+    name: "POST /revisions/:id/rerun",
+    write: true,
+    ok: 201,
+    prepare: latestNumber,
+    call: (c, parent) => json("POST", `/api/revisions/${ids.revision2Id}/rerun`, { parentRevision: Number(parent) })(c),
+  },
 ];
 
 function expected(route: Route, caller: Caller): number {

@@ -38,14 +38,14 @@ async function revisionsWithoutOneAuditEvent(db: Db, projectId?: number) {
   return { total: rows.length, wrong: rows.filter((r) => r.n !== 1) };
 }
 
-/** Review history entries (submitted, commented, returned, signed) without their audit event, per revision and kind. */
+/** Review history entries (submitted, commented, returned, signed, reassigned) without their audit event, per revision and kind. */
 async function reviewEventsWithoutAudit(db: Db) {
   const { rows } = await db.execute<{ revision_id: number; kind: string; events: number; audits: number }>(sql`
     select e.revision_id, e.kind, count(*)::int as events, (
       select count(*)::int from audit_events a
       where a.object_type = 'revision' and a.object_id = e.revision_id::text
         and a.action = 'review.' || case e.kind when 'submitted' then 'submit' when 'commented' then 'comment'
-                                                when 'returned' then 'return' else 'sign' end
+                                                when 'returned' then 'return' when 'reassigned' then 'reassign' else 'sign' end
     ) as audits
     from review_events e group by e.revision_id, e.kind`);
   return { total: rows.length, wrong: rows.filter((r) => r.events !== r.audits) };

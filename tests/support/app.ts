@@ -17,7 +17,7 @@ export interface TestApp {
 }
 
 export interface StartTestAppOptions {
-  /** Database URL (default: the test database). */
+  /** Database URL (default: the test database, as the app's role). */
   databaseUrl?: string;
   /** Environment overrides on top of the test environment (e.g. { TRUST_PROXY: "1" }). */
   env?: Record<string, string>;
@@ -32,7 +32,7 @@ export async function startTestApp(options: StartTestAppOptions = {}): Promise<T
     STILLSPAN_SEED: "none",
     ...options.env,
   });
-  const db = createDb(options.databaseUrl ?? testEnv.databaseUrl, { max: 3, connectionTimeoutMillis: 2000 });
+  const db = createDb(options.databaseUrl ?? testEnv.appDatabaseUrl, { max: 3, connectionTimeoutMillis: 2000 });
   const app = createApp({ db, config, logger: options.logger ?? logger.child({}, { level: "silent" }), clientDir: "/nonexistent" });
   const server = createHttpServer(app, config).listen(0, "127.0.0.1");
   await new Promise<void>((resolve, reject) => {

@@ -11,8 +11,13 @@ export const testEnv = {
   get baseUrl(): string {
     return required("TEST_BASE_URL");
   },
+  /** The test database as the owner role (migrations' role): for arranging data and reading what the app wrote. */
   get databaseUrl(): string {
     return required("TEST_DATABASE_URL");
+  },
+  /** The test database as the app's own role (what the running app connects as). */
+  get appDatabaseUrl(): string {
+    return required("TEST_APP_DATABASE_URL");
   },
   /** The session secret the app child was started with (lets tests forge expired or foreign tokens). */
   get sessionSecret(): Uint8Array {

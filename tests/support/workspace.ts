@@ -27,12 +27,13 @@ export async function upload<T = any>(
     field: string;
     file: { name: string; bytes: Uint8Array; type: string };
     fields?: Record<string, string>;
+    headers?: Record<string, string>;
   },
 ): Promise<ApiResponse<T>> {
   const form = new FormData();
   for (const [k, v] of Object.entries(options.fields ?? {})) form.append(k, v);
   form.append(options.field, new Blob([new Uint8Array(options.file.bytes)], { type: options.file.type }), options.file.name);
-  const headers: Record<string, string> = { Accept: "application/json" };
+  const headers: Record<string, string> = { Accept: "application/json", ...options.headers };
   if (options.cookie) headers.Cookie = options.cookie;
   const res = await fetch(`${baseUrl}${urlPath}`, { method: options.method ?? "POST", headers, body: form });
   const text = await res.text();

@@ -35,6 +35,9 @@ export async function findReviewRequest(db: DbOrTx, revisionId: number, lock = f
   return row;
 }
 
+/** A review request row as `findReviewRequest` reads it. */
+export type ReviewRequestRow = NonNullable<Awaited<ReturnType<typeof findReviewRequest>>>;
+
 /** First submission: inserts the request; a concurrent first submission hits the unique key (23505). */
 export async function insertReviewRequest(
   db: DbOrTx,
@@ -53,6 +56,11 @@ export async function resubmitReviewRequest(
     .update(reviewRequests)
     .set({ ...values, state: "in-review", submittedAt: new Date(), decidedAt: null, decidedBy: null })
     .where(eq(reviewRequests.id, id));
+}
+
+/** Hands a request in review to another reviewer (the caller has locked it and checked its state). */
+export async function reassignReviewRequest(db: DbOrTx, id: number, reviewerId: number): Promise<void> {
+  await db.update(reviewRequests).set({ reviewerId }).where(eq(reviewRequests.id, id));
 }
 
 export async function decideReviewRequest(

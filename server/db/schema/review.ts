@@ -42,7 +42,10 @@ export const reviewRequests = pgTable(
 
 export const reviewEventKind = pgEnum("review_event_kind", REVIEW_EVENT_KINDS);
 
-/** The history of a revision's review (submitted, returned, signed, commented), append-only, oldest first. */
+/**
+ * The history of a revision's review (submitted, returned, signed, commented, reassigned), oldest first.
+ * Append-only: a trigger (drizzle/0011) refuses UPDATE, DELETE and TRUNCATE, as on review_comments (and on signatures, 0006).
+ */
 export const reviewEvents = pgTable(
   "review_events",
   {
@@ -60,7 +63,7 @@ export const reviewEvents = pgTable(
   (t) => [index("review_events_revision_idx").on(t.revisionId, t.id)],
 );
 
-/** Reviewers' (and analysts' replies) comments on a revision, shown in the workspace beside the revision. */
+/** Reviewers' (and analysts' replies) comments on a revision, shown in the workspace beside the revision. Append-only (drizzle/0011). */
 export const reviewComments = pgTable(
   "review_comments",
   {
@@ -83,6 +86,7 @@ export const reviewComments = pgTable(
 /**
  * Signed stability summaries: the compact JWS, the key id that signed it, the payload as signed and the SHA-256
  * of its canonical JSON. A revision is signed at most once (unique revision_id). The summary's id is this row's.
+ * Append-only (trigger in drizzle/0006).
  */
 export const signatures = pgTable(
   "signatures",

@@ -161,6 +161,30 @@ describe("signSummary / verifySummary", () => {
     expect(result).toMatchObject({ valid: false, reason: "the signature does not match the content" });
   });
 
+  it("refuses a signature, header or payload re-spelt in the unused bits of its last base64url character", async () => {
+    const store = await KeyStore.open({ dir });
+    const { jws } = await signSummary(store, inventedSummary());
+    const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_";
+    const parts = jws.split(".");
+    let respelt = 0;
+    for (let i = 0; i < 3; i++) {
+      const unusedBits = [0, 0, 4, 2][parts[i].length % 4]; // RFC 4648 §3.5: bits of the last character no byte uses
+      if (unusedBits === 0) continue;
+      const last = parts[i].at(-1)!;
+      const other = alphabet[alphabet.indexOf(last) ^ 1]; // flips the lowest, unused bit
+      const changed = parts.map((p, j) => (j === i ? p.slice(0, -1) + other : p));
+      // The same bytes: any lenient decoder reads the same signature…
+      expect(Buffer.from(changed[i], "base64url").equals(Buffer.from(parts[i], "base64url"))).toBe(true);
+      // …but only the canonical spelling verifies.
+      const result = await verifySummary(changed.join("."), await store.jwks());
+      expect(result, `part ${i} re-spelt`).toMatchObject({ valid: false, summary: null });
+      expect(result.valid ? "" : result.reason).toMatch(/not in canonical base64url/);
+      respelt++;
+    }
+    expect(respelt, "an Ed25519 signature (64 bytes) always has unused bits").toBeGreaterThanOrEqual(1);
+    expect((await verifySummary(jws, await store.jwks())).valid).toBe(true);
+  });
+
   it("still verifies a summary signed before a key rotation", async () => {
     const store = await KeyStore.open({ dir });
     const before = await signSummary(store, inventedSummary());

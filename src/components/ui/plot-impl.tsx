@@ -9,28 +9,25 @@ import type { PlotFigure } from "@/components/ui/plot";
  */
 const PlotlyComponent = createPlotlyComponent(Plotly);
 
-const BASE_CONFIG = {
+/**
+ * plotly's own toolbar stays off on every plot: it belongs to the library, not to this product, and it can offer
+ * to send a chart's data to an outside charting service — a leak path for confidential design data. Nothing here
+ * links to the library's site either. Downloading a figure is our own control (plot-download.tsx).
+ */
+const CONFIG = {
+  displayModeBar: false,
   displaylogo: false,
+  showLink: false,
+  showSendToCloud: false,
+  showEditInChartStudio: false,
   responsive: true,
   scrollZoom: false,
-  modeBarButtonsToRemove: ["select2d", "lasso2d", "toggleSpikelines"],
-  toImageButtonOptions: { format: "png", scale: 2 },
 };
-const CONFIG_WITH_MODE_BAR = { ...BASE_CONFIG, displayModeBar: "hover" };
-const CONFIG_WITHOUT_MODE_BAR = { ...BASE_CONFIG, displayModeBar: false };
 const STYLE = { width: "100%", height: "100%" };
 
-export default function PlotImpl({ data, layout, showModeBar }: PlotFigure) {
+export default function PlotImpl({ data, layout }: PlotFigure) {
   // react-plotly redraws when data, layout or config change identity: keep them stable between renders of the
   // parent (a keystroke elsewhere on the page must not redraw every plot).
   const fullLayout = useMemo(() => ({ autosize: true, ...layout }), [layout]);
-  return (
-    <PlotlyComponent
-      data={data}
-      layout={fullLayout}
-      config={showModeBar ? CONFIG_WITH_MODE_BAR : CONFIG_WITHOUT_MODE_BAR}
-      useResizeHandler
-      style={STYLE}
-    />
-  );
+  return <PlotlyComponent data={data} layout={fullLayout} config={CONFIG} useResizeHandler style={STYLE} />;
 }

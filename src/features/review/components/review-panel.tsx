@@ -13,7 +13,9 @@ import { useAddComment } from "@/features/review/api/add-comment";
 import { useRevisionReview } from "@/features/review/api/get-revision-review";
 import { useProjectReviewers } from "@/features/review/api/get-project-reviewers";
 import { useSubmitRevision } from "@/features/review/api/submit-revision";
+import { ReassignForm } from "@/features/review/components/reassign-form";
 import { ReviewDecisionForm } from "@/features/review/components/review-decision-form";
+import { ReviewerSelect } from "@/features/review/components/reviewer-select";
 import { ReviewStateBadge } from "@/features/review/components/review-state-badge";
 
 export interface ReviewPanelProps {
@@ -40,27 +42,14 @@ function SubmitForm({ review, projectId }: { review: RevisionReviewDto; projectI
         if (chosen) submit.mutate({ reviewerId: chosen, note });
       }}
     >
-      <div className="space-y-1">
-        <label htmlFor={`reviewer-${review.revisionId}`} className="block text-sm font-semibold text-ink-800">
-          Reviewer
-        </label>
-        <select
-          id={`reviewer-${review.revisionId}`}
-          className="block h-9 w-full rounded-md border border-ink-300 bg-white px-2 text-[0.95rem]"
-          value={chosen}
-          onChange={(e) => setReviewerId(e.target.value)}
-          disabled={options.length === 0}
-        >
-          {options.length === 0 ? (
-            <option value="">{reviewers.isPending ? "Loading the project's reviewers…" : "No reviewer on this project"}</option>
-          ) : null}
-          {options.map((r) => (
-            <option key={r.userId} value={r.userId}>
-              {r.name}
-            </option>
-          ))}
-        </select>
-      </div>
+      <ReviewerSelect
+        id={`reviewer-${review.revisionId}`}
+        label="Reviewer"
+        options={options}
+        isLoading={reviewers.isPending}
+        value={chosen}
+        onChange={setReviewerId}
+      />
       <TextAreaField label="Note to the reviewer (optional)" rows={2} maxLength={4000} value={note} onChange={(e) => setNote(e.target.value)} />
       <Button type="submit" variant="accent" size="sm" isLoading={submit.isPending} disabled={!chosen}>
         {review.state === "returned" ? "Submit again for review" : "Submit for review"}
@@ -100,7 +89,7 @@ function CommentForm({ revisionId }: { revisionId: string }) {
 
 /**
  * The review of one revision, for the workspace: its state, who reviews it, the comments, and the actions the
- * caller's role allows (analysts submit; the assigned reviewer signs or returns). Self-contained: it loads its
+ * caller's role allows (analysts submit; the assigned reviewer signs or returns; administrators reassign). Self-contained: it loads its
  * own data and can be mounted beside any revision.
  */
 export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = false }: ReviewPanelProps) {
@@ -119,7 +108,10 @@ export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = fal
   }
   const review = query.data;
   const canSubmit = (role === "analyst" || (isAdmin && role === null)) && (review.state === "draft" || review.state === "returned");
-  const canDecide = role === "reviewer" && review.state === "in-review" && review.author?.id !== userId;
+  const inReview = review.state === "in-review";
+  // Only the assigned reviewer decides; another reviewer of the project reads and comments.
+  const assignedToMe = review.request?.reviewer.id === userId;
+  const canDecide = role === "reviewer" && inReview && assignedToMe && review.author?.id !== userId;
 
   return (
     <Card
@@ -167,6 +159,12 @@ export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = fal
           )}
         </section>
         {canDecide ? <ReviewDecisionForm revisionId={revisionId} revisionNumber={review.revisionNumber} /> : null}
+        {role === "reviewer" && inReview && !assignedToMe ? (
+          <p className="text-sm text-ink-700">
+            This revision is assigned to {review.request?.reviewer.name}: only they can sign or return it. An administrator can reassign the review.
+          </p>
+        ) : null}
+        {isAdmin && inReview ? <ReassignForm review={review} projectId={projectId} /> : null}
         {canSubmit ? <SubmitForm review={review} projectId={projectId} /> : null}
         {role === "analyst" || role === "reviewer" ? <CommentForm revisionId={revisionId} /> : null}
       </div>

@@ -7,9 +7,15 @@ import { getRevisionQueryOptions } from "@/features/studies/api/get-revision";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { getStudyQueryOptions } from "@/features/studies/api/get-study";
 
+interface RerunRevisionInput {
+  revisionId: string;
+  /** The study's newest revision as the page shows it: the re-run goes on top of it (409 when a newer one exists). */
+  parentRevision: number;
+}
+
 /** Computes a revision's document again with the server's current engine, stored as the study's next revision. */
-export function rerunRevision(revisionId: string): Promise<RevisionDto> {
-  return api.post<RevisionDto>(apiPaths.revisions.rerun(revisionId));
+export function rerunRevision({ revisionId, parentRevision }: RerunRevisionInput): Promise<RevisionDto> {
+  return api.post<RevisionDto>(apiPaths.revisions.rerun(revisionId), { parentRevision });
 }
 
 export function useRerunRevision(studyId: string, projectId: string) {

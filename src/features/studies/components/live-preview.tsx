@@ -14,7 +14,7 @@ export function LivePreview({ state, blockedReason }: { state: PreviewState; blo
     if (!result) return null;
     const f = dampingFigure([{ name: "Preview", result }]);
     // The legend names the branches (which curve is heave, which torsion); it sits above the plot area.
-    return { ...f, layout: { ...f.layout, margin: { l: 44, r: 8, t: 24, b: 34 }, showlegend: true }, showModeBar: false };
+    return { ...f, layout: { ...f.layout, margin: { l: 44, r: 8, t: 24, b: 34 }, showlegend: true } };
   }, [result]);
 
   let line: React.ReactNode;

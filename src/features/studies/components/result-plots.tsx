@@ -19,14 +19,14 @@ export function ResultPlots({ runs, dimmed = false }: { runs: readonly PlotRun[]
     <div className={dimmed ? "opacity-60 transition-opacity" : "transition-opacity"}>
       <div className="grid gap-4">
         <Card title="Pole paths" subtitle="Re λ against Im λ; markers grow with wind speed; right of the heavy axis a pole grows">
-          <Plot {...figures.poles} height={330} label={`Pole paths in the complex plane for ${what}`} />
+          <Plot {...figures.poles} height={330} label={`Pole paths in the complex plane for ${what}`} downloadName="pole-paths" />
         </Card>
         <div className="grid gap-4 xl:grid-cols-2">
           <Card title="Damping ratio" subtitle="ζ against U; below zero the motion grows">
-            <Plot {...figures.damping} height={250} label={`Damping ratio against wind speed for ${what}`} />
+            <Plot {...figures.damping} height={250} label={`Damping ratio against wind speed for ${what}`} downloadName="damping-ratio" />
           </Card>
           <Card title="Frequency" subtitle="f against U">
-            <Plot {...figures.frequency} height={250} label={`Frequency against wind speed for ${what}`} />
+            <Plot {...figures.frequency} height={250} label={`Frequency against wind speed for ${what}`} downloadName="frequency" />
           </Card>
         </div>
         {notes.map((note) => (

@@ -36,5 +36,5 @@ export function RevisionTrend({ revisions }: { revisions: readonly RevisionSumma
       }),
     };
   }, [revisions]);
-  return <Plot {...figure} height={240} label="Critical speeds by revision" />;
+  return <Plot {...figure} height={240} label="Critical speeds by revision" downloadName="critical-speeds-by-revision" />;
 }

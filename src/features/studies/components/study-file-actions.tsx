@@ -67,7 +67,7 @@ export function StudyFileActions({ projectId, studyId, revision, canEdit }: Stud
         <p className="flex flex-wrap items-center gap-2 rounded-sm bg-caution-100 px-2 py-1 text-caution-700">
           Stored with engine {revision.engineVersion}; this release computes with engine {ENGINE_VERSION}.
           {canEdit ? (
-            <Button size="sm" variant="secondary" isLoading={rerun.isPending} onClick={() => rerun.mutate(revision.id, { onSuccess: toRevision })}>
+            <Button size="sm" variant="secondary" isLoading={rerun.isPending} onClick={() => rerun.mutate({ revisionId: revision.id, parentRevision: revision.latestNumber }, { onSuccess: toRevision })}>
               Re-run as a new revision
             </Button>
           ) : null}

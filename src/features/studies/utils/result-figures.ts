@@ -88,7 +88,6 @@ export function polePathFigure(runs: readonly PlotRun[]): PlotFigure {
         { type: "line", xref: "x", yref: "paper", x0: 0, x1: 0, y0: 0, y1: 1, line: { color: token("--color-ink-900"), width: 2 } },
       ],
     }),
-    showModeBar: true,
   };
 }
 
@@ -163,7 +162,6 @@ function versusSpeed(
       annotations: flutterAnnotations(runs),
       hovermode: "x unified",
     }),
-    showModeBar: true,
   };
 }
 

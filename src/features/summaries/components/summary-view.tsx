@@ -179,13 +179,13 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
 
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Damping of each branch" subtitle="Damping ratio ζ against wind speed; flutter where a branch crosses zero">
-          <Plot height={300} label="Damping ratio of each pole branch against mean wind speed" {...dampingFigure(p, summary.branches)} />
+          <Plot height={300} label="Damping ratio of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-damping-ratio`} {...dampingFigure(p, summary.branches)} />
         </Card>
         <Card title="Frequency of each branch" subtitle="Frequency against wind speed">
-          <Plot height={300} label="Frequency of each pole branch against mean wind speed" {...frequencyFigure(p, summary.branches)} />
+          <Plot height={300} label="Frequency of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-frequency`} {...frequencyFigure(p, summary.branches)} />
         </Card>
         <Card title="Pole paths" subtitle="λ through the sweep; right of the axis is unstable" className="lg:col-span-2">
-          <Plot height={320} label="Pole paths in the complex plane" {...polePathFigure(summary.branches)} />
+          <Plot height={320} label="Pole paths in the complex plane" downloadName={`summary-${summary.id}-pole-paths`} {...polePathFigure(summary.branches)} />
         </Card>
         {samplingNote(summary.branchSampling) ? (
           <p className="text-sm text-ink-600 lg:col-span-2">{samplingNote(summary.branchSampling)}</p>

@@ -9,6 +9,8 @@ import { ReviewPanel, type ReviewPanelProps } from "@/features/review/components
 
 const ANALYST = { id: "2", name: "Tomas Reedwell" };
 const REVIEWER = { id: "3", name: "Mira Holloway" };
+const SECOND_REVIEWER = { id: "5", name: "Ines Calloway" };
+const ADMIN = { id: "1", name: "Ada Lindqvist" };
 
 function review(overrides: Partial<RevisionReviewDto> = {}): RevisionReviewDto {
   return {
@@ -30,6 +32,7 @@ const members = [
   { userId: ANALYST.id, name: ANALYST.name, email: "analyst@stillspan.test", role: "analyst" },
   { userId: REVIEWER.id, name: REVIEWER.name, email: "reviewer@stillspan.test", role: "reviewer" },
   { userId: "4", name: "Owen Farrant", email: "viewer@stillspan.test", role: "viewer" },
+  { userId: SECOND_REVIEWER.id, name: SECOND_REVIEWER.name, email: "second@stillspan.test", role: "reviewer" },
 ];
 
 const json = (status: number, body: unknown) =>
@@ -64,6 +67,12 @@ describe("ReviewPanel", () => {
         });
         return json(200, current);
       }
+      if (url.endsWith("/reviewer") && init?.method === "POST") {
+        const body = JSON.parse(String(init.body));
+        const reviewer = [REVIEWER, SECOND_REVIEWER].find((r) => r.id === body.reviewerId)!;
+        current = review({ ...current, request: { ...current.request!, reviewer } });
+        return json(200, current);
+      }
       if (url.endsWith("/sign")) return json(403, { error: { code: "forbidden", message: "nobody may sign their own revision" } });
       return json(404, { error: { code: "not_found", message: `unexpected ${url}` } });
     });
@@ -80,7 +89,7 @@ describe("ReviewPanel", () => {
     const select = await screen.findByLabelText("Reviewer");
     await waitFor(() => expect(select).toHaveValue(REVIEWER.id));
     // Only reviewers are offered: not the analyst, not the viewer.
-    expect(Array.from((select as HTMLSelectElement).options).map((o) => o.textContent)).toEqual([REVIEWER.name]);
+    expect(Array.from((select as HTMLSelectElement).options).map((o) => o.textContent)).toEqual([REVIEWER.name, SECOND_REVIEWER.name]);
     fireEvent.change(screen.getByLabelText("Note to the reviewer (optional)"), { target: { value: "Margins please." } });
     fireEvent.click(screen.getByRole("button", { name: "Submit for review" }));
 
@@ -115,6 +124,36 @@ describe("ReviewPanel", () => {
     fireEvent.change(screen.getByLabelText("Reviewer's statement"), { target: { value: "Fine." } });
     fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
     expect(await screen.findByText("nobody may sign their own revision")).toBeInTheDocument();
+  });
+
+  it("gives a reviewer of the project who is not the assigned one no sign or return, and says who decides", async () => {
+    current = review({
+      state: "in-review",
+      request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
+    });
+    renderPanel({ userId: SECOND_REVIEWER.id, role: "reviewer" });
+    expect(await screen.findByText(/assigned to Mira Holloway: only they can sign or return it/)).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Return with comments" })).not.toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Reassign the review" })).not.toBeInTheDocument();
+    // Comments stay open to them.
+    expect(screen.getByLabelText("Add a comment")).toBeInTheDocument();
+  });
+
+  it("lets an administrator reassign a revision in review to another reviewer (not the author, not the current one)", async () => {
+    current = review({
+      state: "in-review",
+      request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
+    });
+    renderPanel({ userId: ADMIN.id, role: null, isAdmin: true });
+    const select = await screen.findByLabelText("New reviewer");
+    await waitFor(() => expect(select).toHaveValue(SECOND_REVIEWER.id));
+    expect(Array.from((select as HTMLSelectElement).options).map((o) => o.textContent)).toEqual([SECOND_REVIEWER.name]);
+    fireEvent.click(screen.getByRole("button", { name: "Reassign the review" }));
+    expect(await screen.findByText(/Reviewer: Ines Calloway/)).toBeInTheDocument();
+    const call = fetchMock.mock.calls.find(([url]) => String(url).endsWith("/reviewer"))!;
+    expect(JSON.parse(String(call[1]!.body))).toEqual({ reviewerId: SECOND_REVIEWER.id });
+    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
   });
 
   it("gives the author no sign button even when they hold the reviewer role, and a signed revision no actions", async () => {

@@ -1,0 +1,1 @@
+ALTER TYPE "public"."review_event_kind" ADD VALUE 'reassigned';
