@@ -33,7 +33,7 @@ export function ProjectRoute() {
     <div key={projectId}>
       <ProjectOverview projectId={projectId} isAdmin={isAdmin} />
       {project.data ? (
-        <DesignWindPanel className="mt-4" projectId={projectId} canEdit={project.data.role === "analyst" || isAdmin} />
+        <DesignWindPanel className="mt-4" projectId={projectId} canEdit={project.data.role === "reviewer" || isAdmin} />
       ) : null}
       <ProjectStudies projectId={projectId} canEdit={project.data?.role === "analyst"} />
       {isAdmin ? <ProjectMembers projectId={projectId} /> : null}
