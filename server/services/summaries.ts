@@ -4,7 +4,8 @@
  * Viewers (owner's representatives) read the summaries of their projects and nothing else.
  */
 import type { ProjectCriteria } from "../../shared/schemas/criteria.js";
-import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
+import type { SweepResult } from "../../shared/schemas/result.js";
+import type { SignReviewInput, SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
 import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
@@ -24,6 +25,7 @@ import { verificationCode } from "../signing/verification-code.js";
 import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
+import { assertBasesConfirmed, assertSameAsPreview } from "./review-sign-checks.js";
 import { notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
@@ -40,6 +42,8 @@ export interface RecordSignatureInput {
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
+  /** The `previewSha256` of the summary preview the signer read; a different summary is refused (409). */
+  previewSha256?: string;
   ip?: string;
 }
 
@@ -59,6 +63,7 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     signedAt,
     statement: input.statement,
   });
+  if (input.previewSha256 !== undefined) assertSameAsPreview(payload, input.previewSha256);
   const signed = await signStabilitySummary(config, payload);
   const payloadSha256 = canonicalSha256Hex(signed.summary);
   const id = await insertSignature(tx, {
@@ -86,13 +91,15 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
 /**
  * POST /api/revisions/:id/sign — the reviewer's statement, the summary built from the stored revision, signed
  * (compact JWS over RFC 8785 canonical JSON) and stored with its key id and payload hash, in one transaction
- * with the review state, the history and the audit event. 409 when already signed.
+ * with the review state, the history and the audit event. 409 when already signed, when a criterion's basis is
+ * unconfirmed (`criteria_unconfirmed`), or when the summary is not the preview the reviewer read
+ * (`preview_outdated`).
  */
 export async function signRevision(
   ctx: AppContext,
   user: SessionUser,
   revisionId: number,
-  statement: string,
+  { statement, previewSha256 }: SignReviewInput,
   ip?: string,
 ): Promise<{ summaryId: string }> {
   const { db, config } = ctx;
@@ -108,9 +115,10 @@ export async function signRevision(
   if (!full || !project || !alternative || !signer) throw AppError.notFound("Revision");
   if (!criteria) {
     throw AppError.conflict(
-      "The project has no design wind and criteria yet: the summary states the required speeds and margins, so an analyst must save the criteria first.",
+      "The project has no design wind and criteria yet: the summary states the required speeds and margins, so a reviewer or administrator must save the criteria first.",
     );
   }
+  assertBasesConfirmed(criteria);
   const signedAt = new Date();
   let summaryId: number;
   try {
@@ -132,6 +140,7 @@ export async function signRevision(
         signer,
         signedAt,
         statement,
+        previewSha256,
         ip,
       });
     });
@@ -191,6 +200,14 @@ async function currentOf(db: DbOrTx, row: SignatureRow): Promise<SummaryDto["cur
   return current ? { id: String(current.id), revisionNumber: current.revisionNumber, signedAt: current.signedAt.toISOString() } : null;
 }
 
+/** The pole paths of a stored result, as the summary's plots draw them. */
+export function summaryBranches(result: SweepResult | undefined): SummaryDto["branches"] {
+  return (result?.modes ?? []).map((m) => ({
+    id: m.id,
+    steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
+  }));
+}
+
 /** GET /api/summaries/:id — the payload as signed, its JWS, and whether it is still current. */
 export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Promise<SummaryDto> {
   const row = await readableSignature(db, user, id);
@@ -209,10 +226,7 @@ export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Pro
     currentSummary: await currentOf(db, row),
     newerUnsigned: row.newerUnsigned,
     newestRevisionNumber: row.newestRevisionNumber,
-    branches: (revision?.result.modes ?? []).map((m) => ({
-      id: m.id,
-      steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
-    })),
+    branches: summaryBranches(revision?.result),
     branchSampling: revision?.result.sampling ?? null,
     jwksUrl: JWKS_PATH,
   };
