@@ -1,4 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
+import { useState } from "react";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
@@ -6,7 +7,7 @@ import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { canUseWorkspace } from "@/lib/authorization";
 import { getSummaryPreviewQueryOptions, useSummaryPreview } from "@/features/review/api/get-summary-preview";
-import { SummaryPreviewDecision, SummaryPreviewHead } from "@/features/review/components/summary-preview-parts";
+import { SignedNotice, SummaryPreviewDecision, SummaryPreviewHead, UnconfirmedCriterionNote } from "@/features/review/components/summary-preview-parts";
 import { SummaryView } from "@/features/summaries/components/summary-view";
 import { requireAccess } from "@/app/routes/guards";
 
@@ -32,6 +33,8 @@ function signedSummaryId(error: Error): string | null {
 export function SummaryPreviewRoute() {
   const { revisionId = "" } = useParams();
   const preview = useSummaryPreview(revisionId);
+  const [signed, setSigned] = useState<{ summaryId: string; studyName: string; revisionNumber: number } | null>(null);
+  if (signed) return <SignedNotice {...signed} />;
   if (preview.isError) {
     const summaryId = signedSummaryId(preview.error);
     if (summaryId) {
@@ -61,7 +64,14 @@ export function SummaryPreviewRoute() {
       summary={{ id: `preview-${data.revisionId}`, payload: data.payload, branches: data.branches, branchSampling: data.branchSampling }}
       preview={{
         head: <SummaryPreviewHead preview={data} />,
-        decision: <SummaryPreviewDecision preview={data} onOutdated={() => void preview.refetch()} />,
+        criterionNote: (phenomenon) => <UnconfirmedCriterionNote preview={data} phenomenon={phenomenon} />,
+        decision: (
+          <SummaryPreviewDecision
+            preview={data}
+            onOutdated={() => void preview.refetch()}
+            onSigned={(summaryId) => setSigned({ summaryId, studyName: data.payload.study.name, revisionNumber: data.revisionNumber })}
+          />
+        ),
       }}
     />
   );

@@ -21,7 +21,11 @@ export function BasisStatusNote({ status }: { status: BasisStatus }) {
   }
   return (
     <span className="text-xs text-ink-600" data-basis-state="confirmed">
-      {defaultText ? <span className={`${badge} bg-ink-100 text-ink-700`}>Default text</span> : null}{" "}
+      {defaultText ? (
+        <>
+          <span className={`${badge} bg-ink-100 text-ink-700`}>Default text</span>{" "}
+        </>
+      ) : null}
       {confirmation.how === "confirmed" ? "Confirmed" : "Written"} by {confirmation.by.name}, {formatDate(confirmation.at)} (version{" "}
       {confirmation.version})
     </span>

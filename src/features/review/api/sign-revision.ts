@@ -2,6 +2,7 @@ import { useMutation } from "@tanstack/react-query";
 import type { SignReviewInput } from "@shared/schemas/review";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
 import { useInvalidateReview } from "@/features/review/hooks/use-invalidate-review";
 
 /**
@@ -13,6 +14,6 @@ export function signRevision(revisionId: string, body: SignReviewInput): Promise
 }
 
 export function useSignRevision(revisionId: string) {
-  const invalidate = useInvalidateReview();
+  const invalidate = useInvalidateReview(queryKeys.reviews.preview(revisionId));
   return useMutation({ mutationFn: (body: SignReviewInput) => signRevision(revisionId, body), onSuccess: invalidate });
 }

@@ -18,6 +18,7 @@ export function ReviewDecisionForm({
   previewSha256,
   signBlocker,
   onOutdated,
+  onSigned,
 }: {
   revisionId: string;
   revisionNumber: number;
@@ -27,6 +28,8 @@ export function ReviewDecisionForm({
   signBlocker: string | null;
   /** The server found the summary changed since the preview was loaded: load it again. */
   onOutdated: () => void;
+  /** Called with the new summary's id once signed (the page then leaves the preview, which no longer exists). */
+  onSigned?: (summaryId: string) => void;
 }) {
   const [statement, setStatement] = useState("");
   const [comments, setComments] = useState("");
@@ -77,6 +80,7 @@ export function ReviewDecisionForm({
           setProblem(e.message);
           if (e instanceof ApiError && e.code === "preview_outdated") onOutdated();
         },
+        onSuccess: (data) => onSigned?.(data.summaryId),
       },
     );
   };

@@ -56,7 +56,7 @@ export function ReviewStatusLine({ status, className }: { status: RevisionReview
   const { look, detail } = reviewStatusWords(status);
   return (
     <span className={cn("inline-flex flex-wrap items-center gap-x-1.5 text-sm", className)} data-testid={`review-state-r${status.number}`}>
-      <Badge look={look} />
+      <Badge look={look} />{" "}
       <span className="text-ink-700">{detail}</span>
     </span>
   );

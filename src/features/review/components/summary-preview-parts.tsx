@@ -1,5 +1,6 @@
 import { Link } from "react-router-dom";
 import { unconfirmedBasesMessage } from "@shared/criteria/basis-confirmation";
+import type { Phenomenon } from "@shared/schemas/criteria";
 import type { SummaryPreviewDto } from "@shared/schemas/review";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -66,7 +67,11 @@ export function SummaryPreviewHead({ preview }: { preview: SummaryPreviewDto }) 
 }
 
 /** Where a signed summary has its statement, the preview has the decision: sign with a statement, or return. */
-export function SummaryPreviewDecision({ preview, onOutdated }: { preview: SummaryPreviewDto; onOutdated: () => void }) {
+export function SummaryPreviewDecision({ preview, onOutdated, onSigned }: {
+  preview: SummaryPreviewDto;
+  onOutdated: () => void;
+  onSigned: (summaryId: string) => void;
+}) {
   const n = preview.revisionNumber;
   if (preview.state !== "in-review") {
     return (
@@ -87,7 +92,31 @@ export function SummaryPreviewDecision({ preview, onOutdated }: { preview: Summa
         previewSha256={preview.previewSha256}
         signBlocker={preview.signBlocker}
         onOutdated={onOutdated}
+        onSigned={onSigned}
       />
     </Card>
+  );
+}
+
+/** After the signature: the preview is gone (the revision is signed); the signed summary is what to read now. */
+export function SignedNotice({ studyName, revisionNumber, summaryId }: { studyName: string; revisionNumber: number; summaryId: string }) {
+  return (
+    <p role="status" className="rounded-md border border-steady-100 bg-steady-100 px-3 py-2 text-steady-700">
+      {studyName}: revision {revisionNumber} is signed with your statement.{" "}
+      <Link className="font-semibold underline" to={paths.app.summary.getHref(summaryId)}>
+        Open the signed summary
+      </Link>
+    </p>
+  );
+}
+
+/** Beside each criterion of the preview whose basis no reviewer confirmed: what it still is. */
+export function UnconfirmedCriterionNote({ preview, phenomenon }: { preview: SummaryPreviewDto; phenomenon: Phenomenon }) {
+  const open = preview.unconfirmedBases.find((u) => u.phenomenon === phenomenon);
+  if (!open) return null;
+  return (
+    <span className="rounded-sm bg-caution-100 px-1.5 py-px text-xs font-semibold whitespace-nowrap text-caution-700" data-testid={`unconfirmed-${phenomenon}`}>
+      {open.defaultText ? "Default text — not confirmed" : "Not confirmed"}
+    </span>
   );
 }

@@ -155,6 +155,8 @@ function SignedHead({ summary }: { summary: SummaryDto }) {
 export interface SummaryPreviewSlots {
   head: ReactNode;
   decision: ReactNode;
+  /** A mark beside a criterion whose basis stands unconfirmed (signing is refused until it is confirmed). */
+  criterionNote?: (phenomenon: SummaryPayload["criteria"][number]["phenomenon"]) => ReactNode;
 }
 
 type SummaryViewProps =
@@ -229,7 +231,8 @@ export function SummaryView({ summary, preview }: SummaryViewProps) {
                     = {c.factor}
                     {c.gustFactor ? ` × ${c.gustFactor}` : ""}
                     {c.angleFactor ? ` × ${c.angleFactor}` : ""} × v_m
-                  </span>
+                  </span>{" "}
+                  {preview?.criterionNote?.(c.phenomenon)}
                 </p>
                 <ul className="list-disc pl-5 text-sm text-ink-700">
                   {c.basis.map((b) => (
