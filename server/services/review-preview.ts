@@ -6,7 +6,7 @@
 import type { SummaryPreviewDto } from "../../shared/schemas/review.js";
 import type { Db } from "../db/client.js";
 import { findAlternative } from "../db/queries/alternatives.js";
-import { findCurrentCriteria } from "../db/queries/criteria.js";
+import { findCurrentCriteria, type CriteriaVersionRow } from "../db/queries/criteria.js";
 import { findProjectById } from "../db/queries/projects.js";
 import { findReviewRequest, type ReviewRequestRow } from "../db/queries/review.js";
 import type { RevisionRow } from "../db/queries/revisions.js";
@@ -21,26 +21,36 @@ import { summaryBranches } from "./summaries.js";
 import { buildSummaryPayload } from "./summary-payload.js";
 
 /**
- * Why `user` cannot sign the revision now (the same checks, in the same order, as the sign request), or null.
- * Only the sentence of an expected refusal is kept; anything else is a fault and propagates.
+ * Why `user` cannot decide on the revision now — not its assigned reviewer, its author, or not in review — with the
+ * same checks, in the same order, as the sign and return requests; null when they can. Only the sentence of an
+ * expected refusal is kept; anything else is a fault and propagates.
  */
-async function signBlocker(
+async function decisionBlocker(
   db: Db,
   user: SessionUser,
   revision: RevisionRow,
   request: ReviewRequestRow | undefined,
-  checkCriteria: () => void,
 ): Promise<string | null> {
   try {
     await assertReviewer(db, user, revision, "sign a revision");
-    checkCriteria();
     if (!request || request.state !== "in-review") {
       return `Revision ${revision.number} is ${request ? request.state : "a draft"}: only a revision in review can be signed.`;
     }
     assertAssignedReviewer(request, user, revision, "sign it");
     return null;
   } catch (err) {
-    if (err instanceof AppError && (err.status === 403 || err.status === 409)) return err.message;
+    if (err instanceof AppError && err.status === 403) return err.message;
+    throw err;
+  }
+}
+
+/** The refusal of unconfirmed criteria bases, as the sign request words it, or null. */
+function criteriaBlocker(criteria: CriteriaVersionRow): string | null {
+  try {
+    assertBasesConfirmed(criteria);
+    return null;
+  } catch (err) {
+    if (err instanceof AppError) return err.message;
     throw err;
   }
 }
@@ -78,6 +88,7 @@ export async function getSummaryPreview(db: Db, user: SessionUser, revisionId: n
     signedAt: new Date(),
     statement: "",
   });
+  const decision = await decisionBlocker(db, user, revision, request);
   return {
     revisionId: String(revision.id),
     revisionNumber: revision.number,
@@ -90,7 +101,8 @@ export async function getSummaryPreview(db: Db, user: SessionUser, revisionId: n
     previewSha256: previewSha256(payload),
     criteriaVersion: criteria.version,
     unconfirmedBases: unconfirmedBasesOf(criteria),
-    signBlocker: await signBlocker(db, user, revision, request, () => assertBasesConfirmed(criteria)),
+    canDecide: decision === null,
+    signBlocker: decision ?? criteriaBlocker(criteria),
     branches: summaryBranches(revision.result),
     branchSampling: revision.result.sampling ?? null,
   };

@@ -9,12 +9,12 @@ import { AppError } from "../errors.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
 
 /** The criteria whose basis nobody confirmed or wrote, in the version `criteria`. */
-export function unconfirmedBasesOf(criteria: CriteriaVersionRow) {
+export function unconfirmedBasesOf(criteria: Pick<CriteriaVersionRow, "criteria" | "basisConfirmations">) {
   return unconfirmedBases(basisStatuses(criteria.criteria, criteria.basisConfirmations));
 }
 
 /** 409 `criteria_unconfirmed`, naming each criterion whose basis is still a default text or unconfirmed. */
-export function assertBasesConfirmed(criteria: CriteriaVersionRow): void {
+export function assertBasesConfirmed(criteria: Pick<CriteriaVersionRow, "version" | "criteria" | "basisConfirmations">): void {
   const unconfirmed = unconfirmedBasesOf(criteria);
   if (unconfirmed.length === 0) return;
   throw new AppError(409, "criteria_unconfirmed", unconfirmedBasesMessage(unconfirmed, criteria.version), {

@@ -3,7 +3,6 @@
  * revision of the same study has been signed; it also tells when later revisions exist that are not signed.
  * Viewers (owner's representatives) read the summaries of their projects and nothing else.
  */
-import type { ProjectCriteria } from "../../shared/schemas/criteria.js";
 import type { SweepResult } from "../../shared/schemas/result.js";
 import type { SignReviewInput, SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
@@ -11,7 +10,7 @@ import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
-import { findCurrentCriteria } from "../db/queries/criteria.js";
+import { findCurrentCriteria, type CriteriaVersionRow } from "../db/queries/criteria.js";
 import { findAlternative } from "../db/queries/alternatives.js";
 import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
 import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
@@ -38,7 +37,8 @@ export interface RecordSignatureInput {
   requestId: number;
   projectName: string;
   alternativeName: string;
-  criteria: { version: number; criteria: ProjectCriteria };
+  /** The criteria version the summary states: every basis must stand confirmed (409 `criteria_unconfirmed`). */
+  criteria: Pick<CriteriaVersionRow, "version" | "criteria" | "basisConfirmations">;
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
@@ -48,12 +48,14 @@ export interface RecordSignatureInput {
 }
 
 /**
- * Inside the caller's transaction: builds the summary of the stored revision, signs it, stores the signature
+ * Inside the caller's transaction: refuses criteria whose basis no reviewer confirmed, builds the summary of the
+ * stored revision (refused when it is not the preview the signer read), signs it, stores the signature
  * (JWS, key id, payload, payload hash), marks the review signed, and records the history and audit events.
  * Used by the sign route and by the demo seed. Returns the summary id.
  */
 export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
   const { revision, signer, signedAt } = input;
+  assertBasesConfirmed(input.criteria);
   const payload = await buildSummaryPayload(tx, {
     revision,
     projectName: input.projectName,
@@ -118,7 +120,6 @@ export async function signRevision(
       "The project has no design wind and criteria yet: the summary states the required speeds and margins, so a reviewer or administrator must save the criteria first.",
     );
   }
-  assertBasesConfirmed(criteria);
   const signedAt = new Date();
   let summaryId: number;
   try {

@@ -224,7 +224,9 @@ export interface SummaryPreviewDto {
   criteriaVersion: number;
   /** Criteria whose basis no reviewer has confirmed or written: signing is refused while any is listed. */
   unconfirmedBases: { phenomenon: Phenomenon; defaultText: boolean }[];
-  /** Why the caller cannot sign this revision now, in one sentence; null when they can. */
+  /** The caller may sign or return the revision now: its assigned reviewer, not its author, while it is in review. */
+  canDecide: boolean;
+  /** Why the caller cannot sign this revision now (the above, or unconfirmed criteria bases), in one sentence; null when they can. */
   signBlocker: string | null;
   branches: SummaryBranchDto[];
   branchSampling: SweepSampling | null;

@@ -48,6 +48,11 @@ describe("criteria a signer can stand behind", () => {
     expect(before.status, JSON.stringify(before.body)).toBe(200);
     expect(before.body.unconfirmedBases).toEqual(PHENOMENA.map((phenomenon) => ({ phenomenon, defaultText: true })));
     expect(before.body.signBlocker).toMatch(/flutter, torsional divergence, vortex-shedding onset, galloping onset still have the default basis text/);
+    expect(before.body.canDecide).toBe(true); // the assigned reviewer may still return it
+    // The analyst reads the same summary, with no decision to make.
+    const asAnalyst = await preview(revisionIds[1], cookies.analyst);
+    expect(asAnalyst.body).toMatchObject({ previewSha256: before.body.previewSha256, canDecide: false });
+    expect(asAnalyst.body.signBlocker).toBe("Only a reviewer of this project can sign a revision; your role is analyst.");
 
     const refused = await sign(revisionIds[1], before.body.previewSha256);
     expect(refused.status).toBe(409);

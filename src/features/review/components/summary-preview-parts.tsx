@@ -84,6 +84,13 @@ export function SummaryPreviewDecision({ preview, onOutdated, onSigned }: {
       </Card>
     );
   }
+  if (!preview.canDecide) {
+    return (
+      <Card title="Decision">
+        <p className="text-ink-800">{preview.signBlocker}</p>
+      </Card>
+    );
+  }
   return (
     <Card title="Your decision" subtitle="Sign the summary above with your statement, or return the revision to the analyst with comments" aria-label="Your decision">
       <ReviewDecisionForm
