@@ -3,9 +3,9 @@ import { putCriteriaBodySchema } from "../../shared/schemas/criteria.js";
 import type { AppContext } from "../app-context.js";
 import { currentUser, fromParam, requireAuth, requireRole } from "../middleware/auth.js";
 import { ANY_ROLE, parseProjectId } from "../services/access.js";
-import { getProjectCriteria, getProjectCriteriaHistory, saveProjectCriteria } from "../services/criteria.js";
+import { CRITERIA_OWNER_ROLES, getProjectCriteria, getProjectCriteriaHistory, saveProjectCriteria } from "../services/criteria.js";
 
-/** /api/projects/:projectId/criteria: read (members), save a new version (analysts), history (members). */
+/** /api/projects/:projectId/criteria: read (members), save a new version (reviewers and administrators, the criteria owners), history (members). */
 export function criteriaRoutes({ db }: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.use(requireAuth);
@@ -15,7 +15,7 @@ export function criteriaRoutes({ db }: AppContext): Router {
     res.json(await getProjectCriteria(db, currentUser(req), parseProjectId(projectId(req))));
   });
 
-  router.put("/", requireRole(projectId, ["analyst"]), async (req, res) => {
+  router.put("/", requireRole(projectId, CRITERIA_OWNER_ROLES), async (req, res) => {
     const body = putCriteriaBodySchema.parse(req.body ?? {});
     res.json(await saveProjectCriteria(db, currentUser(req), parseProjectId(projectId(req)), body, req.ip));
   });

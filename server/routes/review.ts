@@ -1,8 +1,8 @@
 import { Router, type Request } from "express";
 import { createCommentSchema, returnReviewSchema, signReviewSchema } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
-import { currentUser, requireAdmin, requireAuth } from "../middleware/auth.js";
-import { parseObjectId } from "../services/access.js";
+import { currentUser, fromParam, requireAdmin, requireAuth, requireRole } from "../middleware/auth.js";
+import { parseObjectId, parseProjectId, READ_ROLES } from "../services/access.js";
 import {
   addComment,
   getRevisionReview,
@@ -11,12 +11,15 @@ import {
   submitForReview,
 } from "../services/review.js";
 import { reassignReviewer } from "../services/review-assignment.js";
+import { getSummaryPreview } from "../services/review-preview.js";
+import { projectReviewStates, studyReviewStates } from "../services/review-states.js";
 import { signRevision } from "../services/summaries.js";
 
 const revisionId = (req: Request) => parseObjectId(req.params.id, "Revision");
 
 /**
- * /api/revisions/:id/{review,submit,return,sign,reviewer,comments}: the review workflow of one revision. Mounted beside
+ * /api/revisions/:id/{review,summary-preview,submit,return,sign,reviewer,comments}: the review workflow of one
+ * revision — the reviewer reads the summary preview, then signs it with its hash. Mounted beside
  * the studies API's /api/revisions router; only these sub-paths are handled here.
  */
 export function reviewRoutes(ctx: AppContext): Router {
@@ -25,6 +28,11 @@ export function reviewRoutes(ctx: AppContext): Router {
 
   router.get("/:id/review", requireAuth, async (req, res) => {
     res.json(await getRevisionReview(db, currentUser(req), revisionId(req)));
+  });
+
+  router.get("/:id/summary-preview", requireAuth, async (req, res) => {
+    res.setHeader("Cache-Control", "no-store");
+    res.json(await getSummaryPreview(db, currentUser(req), revisionId(req)));
   });
 
   router.post("/:id/submit", requireAuth, async (req, res) => {
@@ -37,8 +45,8 @@ export function reviewRoutes(ctx: AppContext): Router {
   });
 
   router.post("/:id/sign", requireAuth, async (req, res) => {
-    const { statement } = signReviewSchema.parse(req.body ?? {});
-    res.status(201).json(await signRevision(ctx, currentUser(req), revisionId(req), statement, req.ip));
+    const body = signReviewSchema.parse(req.body ?? {});
+    res.status(201).json(await signRevision(ctx, currentUser(req), revisionId(req), body, req.ip));
   });
 
   router.post("/:id/reviewer", requireAuth, requireAdmin, async (req, res) => {
@@ -59,6 +67,25 @@ export function reviewQueueRoutes({ db }: AppContext): Router {
   router.get("/", requireAuth, async (req, res) => {
     res.setHeader("Cache-Control", "no-store");
     res.json(await reviewQueue(db, currentUser(req)));
+  });
+  return router;
+}
+
+/** /api/studies/:studyId/review-states: the review state of every revision of the study (analysts, reviewers). */
+export function studyReviewStateRoutes({ db }: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  router.get("/", requireAuth, async (req, res) => {
+    res.json(await studyReviewStates(db, currentUser(req), parseObjectId(fromParam("studyId")(req), "Study")));
+  });
+  return router;
+}
+
+/** /api/projects/:projectId/review-states: the review state of every revision of the project's studies. */
+export function projectReviewStateRoutes({ db }: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  const projectId = fromParam();
+  router.get("/", requireAuth, requireRole(projectId, READ_ROLES), async (req, res) => {
+    res.json(await projectReviewStates(db, currentUser(req), parseProjectId(projectId(req))));
   });
   return router;
 }

@@ -1,3 +1,4 @@
+import { basisStatuses, nextConfirmations } from "../../shared/criteria/basis-confirmation.js";
 import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
 import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
 import type {
@@ -6,7 +7,7 @@ import type {
   ProjectCriteriaVersionDto,
   PutCriteriaBody,
 } from "../../shared/schemas/criteria.js";
-import type { Db } from "../db/client.js";
+import type { Db, DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import {
@@ -40,6 +41,7 @@ function toDto(projectId: number, row: CriteriaVersionRow | undefined): ProjectC
     evaluated: row ? evaluateOrReject(row.criteria) : null,
     savedAt: row?.createdAt.toISOString() ?? null,
     savedBy: row ? savedBy(row) : null,
+    bases: row ? basisStatuses(row.criteria, row.basisConfirmations) : null,
     defaults: DEFAULT_REQUIREMENTS,
   };
 }
@@ -58,22 +60,35 @@ export async function getProjectCriteriaHistory(
 ): Promise<ProjectCriteriaVersionDto[]> {
   await assertRole(db, user, projectId, ANY_ROLE);
   const rows = await listCriteriaVersions(db, projectId);
-  return rows.map((row) => ({ version: row.version, savedAt: row.createdAt.toISOString(), savedBy: savedBy(row), criteria: row.criteria }));
+  return rows.map((row) => ({
+    version: row.version,
+    savedAt: row.createdAt.toISOString(),
+    savedBy: savedBy(row),
+    criteria: row.criteria,
+    bases: basisStatuses(row.criteria, row.basisConfirmations),
+  }));
 }
 
 /**
- * Saves a new version of the project's criteria (analysts and administrators), audited in the same
- * transaction. 409 when `baseVersion` is given and another version was saved since, or when a concurrent
- * save took the same version number.
+ * Who owns a project's criteria: its reviewers (the engineers who sign against them) and administrators — not the
+ * analysts whose work is checked against them.
+ */
+export const CRITERIA_OWNER_ROLES = ["reviewer"] as const;
+
+/**
+ * Saves a new version of the project's criteria (reviewers and administrators), audited in the same transaction,
+ * with the record of who confirmed or wrote each requirement's basis (shared/criteria/basis-confirmation.ts). 409
+ * when `baseVersion` is given and another version was saved since, or when a concurrent save took the same
+ * version number.
  */
 export async function saveProjectCriteria(
-  db: Db,
+  db: DbOrTx,
   user: SessionUser,
   projectId: number,
   body: PutCriteriaBody,
   ip?: string,
 ): Promise<ProjectCriteriaDto> {
-  await assertRole(db, user, projectId, ["analyst"]);
+  await assertRole(db, user, projectId, CRITERIA_OWNER_ROLES);
   const evaluated = evaluateOrReject(body.criteria);
   try {
     return await db.transaction(async (tx) => {
@@ -86,7 +101,16 @@ export async function saveProjectCriteria(
         );
       }
       const version = (currentVersion ?? 0) + 1;
-      await insertCriteriaVersion(tx, { projectId, version, criteria: body.criteria, createdBy: user.id });
+      const confirmBases = body.confirmBases ?? [];
+      const basisConfirmations = nextConfirmations(
+        current && { criteria: current.criteria, confirmations: current.basisConfirmations },
+        body.criteria,
+        confirmBases,
+        { id: String(user.id), name: user.name },
+        new Date().toISOString(),
+        version,
+      );
+      await insertCriteriaVersion(tx, { projectId, version, criteria: body.criteria, basisConfirmations, createdBy: user.id });
       await writeAudit(tx, {
         actorId: user.id,
         action: "criteria.update",
@@ -95,6 +119,7 @@ export async function saveProjectCriteria(
         ip,
         details: {
           version,
+          confirmedBases: confirmBases,
           meanSpeedMps: evaluated.designWind.meanSpeedMps,
           requiredSpeedsMps: Object.fromEntries(
             Object.entries(evaluated.required).map(([phenomenon, r]) => [phenomenon, r.requiredSpeedMps]),

@@ -30,7 +30,7 @@ import {
   reviewPeople,
   type ReviewRequestRow,
 } from "../db/queries/review.js";
-import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
+import { findLatestRevision, findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignatureOfRevision } from "../db/queries/signatures.js";
 import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
@@ -97,6 +97,7 @@ export async function getRevisionReview(db: Db, user: SessionUser, revisionId: n
   return {
     revisionId: String(revision.id),
     revisionNumber: revision.number,
+    latestNumber: revision.latestNumber,
     studyId: String(revision.studyId),
     projectId: String(revision.projectId),
     author: person(revision.authorId, revision.authorName),
@@ -219,15 +220,28 @@ export async function addComment(
 /**
  * Inside the caller's transaction: puts the revision in review (a new request, or the returned one again) with
  * its history entry and audit event. Used by the submit route and by the demo seed (`at`: when it happened).
+ * A returned revision that a newer revision of its study supersedes is not submitted again (409
+ * `superseded`): the newer revision is what answers the reviewer's comments.
  */
 export async function recordSubmission(
   tx: DbOrTx,
-  m: { revision: Pick<RevisionRow, "id" | "number">; analystId: number; reviewerId: number; note: string; ip?: string; at?: Date },
+  m: { revision: Pick<RevisionRow, "id" | "number" | "studyId">; analystId: number; reviewerId: number; note: string; ip?: string; at?: Date },
 ): Promise<void> {
   const revisionId = m.revision.id;
   const existing = await findReviewRequest(tx, revisionId, true);
   if (existing?.state === "in-review") throw AppError.conflict(`Revision ${m.revision.number} is already in review.`);
   if (existing?.state === "signed") throw AppError.conflict(`Revision ${m.revision.number} is signed; it cannot be submitted again.`);
+  if (existing?.state === "returned") {
+    const latest = await findLatestRevision(tx, m.revision.studyId);
+    if (latest && latest.number > m.revision.number) {
+      throw new AppError(
+        409,
+        "superseded",
+        `Revision ${m.revision.number} was returned and revision ${latest.number} supersedes it: submit revision ${latest.number} instead.`,
+        { details: { latestNumber: latest.number, latestRevisionId: String(latest.id) } },
+      );
+    }
+  }
   const values = { requestedBy: m.analystId, reviewerId: m.reviewerId, note: m.note };
   if (existing) await resubmitReviewRequest(tx, existing.id, values);
   else await insertReviewRequest(tx, { revisionId, ...values, submittedAt: m.at });
@@ -281,7 +295,7 @@ export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<Review
     flutterSpeedMps: r.critical.flutter?.speedMps ?? null,
     divergenceSpeedMps: r.critical.divergenceSpeedMps ?? null,
     margins: queueMargins(r.critical, required.get(r.projectId)?.required ?? null),
-    warningCount: r.critical.warningCodes.length,
+    warningCount: r.warningCount,
     engineVersion: r.engineVersion,
     documentSha256: r.documentSha256,
   }));

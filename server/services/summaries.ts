@@ -3,14 +3,14 @@
  * revision of the same study has been signed; it also tells when later revisions exist that are not signed.
  * Viewers (owner's representatives) read the summaries of their projects and nothing else.
  */
-import type { ProjectCriteria } from "../../shared/schemas/criteria.js";
-import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
+import type { SweepResult } from "../../shared/schemas/result.js";
+import type { SignReviewInput, SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
 import type { AppContext } from "../app-context.js";
 import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
-import { findCurrentCriteria } from "../db/queries/criteria.js";
+import { findCurrentCriteria, type CriteriaVersionRow } from "../db/queries/criteria.js";
 import { findAlternative } from "../db/queries/alternatives.js";
 import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
 import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
@@ -24,6 +24,7 @@ import { verificationCode } from "../signing/verification-code.js";
 import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
+import { assertBasesConfirmed, assertSameAsPreview } from "./review-sign-checks.js";
 import { notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
@@ -36,20 +37,25 @@ export interface RecordSignatureInput {
   requestId: number;
   projectName: string;
   alternativeName: string;
-  criteria: { version: number; criteria: ProjectCriteria };
+  /** The criteria version the summary states: every basis must stand confirmed (409 `criteria_unconfirmed`). */
+  criteria: Pick<CriteriaVersionRow, "version" | "criteria" | "basisConfirmations">;
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
+  /** The `previewSha256` of the summary preview the signer read; a different summary is refused (409). */
+  previewSha256?: string;
   ip?: string;
 }
 
 /**
- * Inside the caller's transaction: builds the summary of the stored revision, signs it, stores the signature
+ * Inside the caller's transaction: refuses criteria whose basis no reviewer confirmed, builds the summary of the
+ * stored revision (refused when it is not the preview the signer read), signs it, stores the signature
  * (JWS, key id, payload, payload hash), marks the review signed, and records the history and audit events.
  * Used by the sign route and by the demo seed. Returns the summary id.
  */
 export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
   const { revision, signer, signedAt } = input;
+  assertBasesConfirmed(input.criteria);
   const payload = await buildSummaryPayload(tx, {
     revision,
     projectName: input.projectName,
@@ -59,6 +65,7 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     signedAt,
     statement: input.statement,
   });
+  if (input.previewSha256 !== undefined) assertSameAsPreview(payload, input.previewSha256);
   const signed = await signStabilitySummary(config, payload);
   const payloadSha256 = canonicalSha256Hex(signed.summary);
   const id = await insertSignature(tx, {
@@ -86,13 +93,15 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
 /**
  * POST /api/revisions/:id/sign — the reviewer's statement, the summary built from the stored revision, signed
  * (compact JWS over RFC 8785 canonical JSON) and stored with its key id and payload hash, in one transaction
- * with the review state, the history and the audit event. 409 when already signed.
+ * with the review state, the history and the audit event. 409 when already signed, when a criterion's basis is
+ * unconfirmed (`criteria_unconfirmed`), or when the summary is not the preview the reviewer read
+ * (`preview_outdated`).
  */
 export async function signRevision(
   ctx: AppContext,
   user: SessionUser,
   revisionId: number,
-  statement: string,
+  { statement, previewSha256 }: SignReviewInput,
   ip?: string,
 ): Promise<{ summaryId: string }> {
   const { db, config } = ctx;
@@ -108,7 +117,7 @@ export async function signRevision(
   if (!full || !project || !alternative || !signer) throw AppError.notFound("Revision");
   if (!criteria) {
     throw AppError.conflict(
-      "The project has no design wind and criteria yet: the summary states the required speeds and margins, so an analyst must save the criteria first.",
+      "The project has no design wind and criteria yet: the summary states the required speeds and margins, so a reviewer or administrator must save the criteria first.",
     );
   }
   const signedAt = new Date();
@@ -132,6 +141,7 @@ export async function signRevision(
         signer,
         signedAt,
         statement,
+        previewSha256,
         ip,
       });
     });
@@ -191,6 +201,14 @@ async function currentOf(db: DbOrTx, row: SignatureRow): Promise<SummaryDto["cur
   return current ? { id: String(current.id), revisionNumber: current.revisionNumber, signedAt: current.signedAt.toISOString() } : null;
 }
 
+/** The pole paths of a stored result, as the summary's plots draw them. */
+export function summaryBranches(result: SweepResult | undefined): SummaryDto["branches"] {
+  return (result?.modes ?? []).map((m) => ({
+    id: m.id,
+    steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
+  }));
+}
+
 /** GET /api/summaries/:id — the payload as signed, its JWS, and whether it is still current. */
 export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Promise<SummaryDto> {
   const row = await readableSignature(db, user, id);
@@ -209,10 +227,7 @@ export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Pro
     currentSummary: await currentOf(db, row),
     newerUnsigned: row.newerUnsigned,
     newestRevisionNumber: row.newestRevisionNumber,
-    branches: (revision?.result.modes ?? []).map((m) => ({
-      id: m.id,
-      steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
-    })),
+    branches: summaryBranches(revision?.result),
     branchSampling: revision?.result.sampling ?? null,
     jwksUrl: JWKS_PATH,
   };

@@ -131,9 +131,20 @@ export type DesignWindInput = z.input<typeof designWindSchema>;
 export type ProjectCriteria = z.infer<typeof projectCriteriaSchema>;
 export type ProjectCriteriaInput = z.input<typeof projectCriteriaSchema>;
 
-/** Body of PUT /api/projects/:id/criteria. `baseVersion` (the version the editor started from) guards against lost updates. */
+/**
+ * Body of PUT /api/projects/:id/criteria (reviewers and administrators: the criteria owners). `baseVersion` (the
+ * version the editor started from) guards against lost updates; `confirmBases` lists the phenomena whose basis the
+ * saver confirms as written (a default text included) with this version.
+ */
 export const putCriteriaBodySchema = object({
   criteria: projectCriteriaSchema,
+  confirmBases: z
+    .array(z.enum(PHENOMENA, { error: 'must be "flutter", "divergence", "vortexOnset" or "gallopingOnset"' }), {
+      error: typeError("a list of phenomena"),
+    })
+    .max(PHENOMENA.length, { error: `must have at most ${PHENOMENA.length} entries` })
+    .optional()
+    .describe("Phenomena whose basis the saver confirms with this version (recorded with their name and the time)"),
   baseVersion: normalNumber({ error: typeError("a whole number or null") })
     .int({ error: "must be a whole number" })
     .positive({ error: "must be greater than 0" })
@@ -142,6 +153,29 @@ export const putCriteriaBodySchema = object({
     .describe("Version the edit started from (null: there was none); a newer saved version gives 409"),
 });
 export type PutCriteriaBody = z.infer<typeof putCriteriaBodySchema>;
+
+/**
+ * Who stands behind one requirement's basis: confirmed as written ("confirmed", e.g. a default text a reviewer
+ * accepts for the project) or saved as their own text ("written") by a criteria owner, in criteria version
+ * `version`. Kept by later versions while the requirement stays unchanged.
+ */
+export interface BasisConfirmation {
+  by: { id: string; name: string };
+  at: string;
+  version: number;
+  how: "confirmed" | "written";
+}
+export type BasisConfirmations = Partial<Record<Phenomenon, BasisConfirmation>>;
+
+/**
+ * The state of one requirement's basis: `defaultText` when it is still one of the shipped default texts
+ * (shared/criteria/default-requirements.ts); `confirmation` null while no reviewer or administrator has confirmed
+ * or written it — signing a summary is then refused.
+ */
+export interface BasisStatus {
+  defaultText: boolean;
+  confirmation: BasisConfirmation | null;
+}
 
 /**
  * Response of GET/PUT /api/projects/:id/criteria. `evaluated` holds v_m at deck level with its factors and the
@@ -155,6 +189,8 @@ export interface ProjectCriteriaDto {
   evaluated: EvaluatedCriteria | null;
   savedAt: string | null;
   savedBy: { id: string; name: string } | null;
+  /** Per phenomenon, the state of the current version's basis; null when the project has no criteria yet. */
+  bases: Record<Phenomenon, BasisStatus> | null;
   defaults: ProjectCriteria["requirements"];
 }
 
@@ -164,6 +200,7 @@ export interface ProjectCriteriaVersionDto {
   savedAt: string;
   savedBy: { id: string; name: string } | null;
   criteria: ProjectCriteria;
+  bases: Record<Phenomenon, BasisStatus>;
 }
 
 export const screeningOptionsSchema = object({

@@ -7,6 +7,7 @@ import { z } from "zod";
 import { userText } from "./input-rules";
 import type { SweepSampling } from "./result";
 import type { ComparisonMargin } from "./comparison";
+import type { Phenomenon } from "./criteria";
 import type { SummaryPayload } from "./summary";
 
 export const REVIEW_REQUEST_STATES = ["in-review", "returned", "signed"] as const;
@@ -47,8 +48,18 @@ export type ReassignReviewInput = z.input<typeof reassignReviewSchema>;
 /** POST /api/revisions/:id/return (reviewers): the comments are required — they say what to change. */
 export const returnReviewSchema = z.strictObject({ comments: text(8000) });
 
-/** POST /api/revisions/:id/sign (reviewers): the reviewer's statement, signed with the summary. */
-export const signReviewSchema = z.strictObject({ statement: text(4000) });
+/**
+ * POST /api/revisions/:id/sign (the assigned reviewer): the reviewer's statement, signed with the summary, and the
+ * `previewSha256` of the summary preview they read (GET /api/revisions/:id/summary-preview). The server refuses
+ * with 409 `preview_outdated` when the summary it would sign now differs from that preview.
+ */
+export const signReviewSchema = z.strictObject({
+  statement: text(4000),
+  previewSha256: z
+    .string({ error: "is required: the previewSha256 of the summary preview you read before signing" })
+    .regex(/^[0-9a-f]{64}$/, "must be 64 lower-case hex digits (the previewSha256 of the summary preview)"),
+});
+export type SignReviewInput = z.infer<typeof signReviewSchema>;
 
 /** POST /api/revisions/:id/comments (analysts and reviewers of the project). */
 export const createCommentSchema = z.strictObject({ body: text(8000) });
@@ -77,6 +88,8 @@ export interface ReviewEventDto {
 export interface RevisionReviewDto {
   revisionId: string;
   revisionNumber: number;
+  /** Number of the study's newest revision: a returned revision older than it is not submitted again. */
+  latestNumber: number;
   studyId: string;
   projectId: string;
   author: PersonDto | null;
@@ -118,7 +131,7 @@ export interface ReviewQueueItemDto {
   divergenceSpeedMps: number | null;
   /** Flutter and divergence against the project's required speeds; null while the project has no criteria. */
   margins: { flutter: ComparisonMargin; divergence: ComparisonMargin } | null;
-  /** Number of the sweep's warnings (one per kind). */
+  /** Number of the stored result's warnings, as the study page lists them (a kind may occur once per branch). */
   warningCount: number;
   engineVersion: string;
   documentSha256: string;
@@ -172,4 +185,49 @@ export interface SummaryDto {
   /** How many of the solved steps `branches` carries (the stored result's `sampling`; null for older results). */
   branchSampling: SweepSampling | null;
   jwksUrl: string;
+}
+
+/**
+ * The review state of one revision, for the study header, the revision timeline and the project's studies table.
+ * `reviewer`: the reviewer of its request (in review with, returned by, signed by). `supersededBy`: for a signed
+ * revision, the number of a later signed revision of the same study; for a draft or a returned revision, the
+ * number of the study's newest revision when a newer one exists (a returned revision is then not submitted again);
+ * null otherwise, and always null while in review.
+ */
+export interface RevisionReviewStatusDto {
+  revisionId: string;
+  studyId: string;
+  number: number;
+  state: ReviewState;
+  reviewer: PersonDto | null;
+  decidedAt: string | null;
+  supersededBy: number | null;
+}
+
+/**
+ * GET /api/revisions/:id/summary-preview: the stability summary exactly as the server would sign it now, built by
+ * the same builder as the signature. Only `signedAt` (here: when the preview was built) and `statement` (empty
+ * here) are set at the moment of signing; `previewSha256` is the SHA-256 over the canonical JSON of the payload
+ * without those two members, and the sign request carries it back.
+ */
+export interface SummaryPreviewDto {
+  revisionId: string;
+  revisionNumber: number;
+  latestNumber: number;
+  studyId: string;
+  projectId: string;
+  state: ReviewState;
+  /** The reviewer the revision is assigned to (in review) or was (returned); null for a draft. */
+  reviewer: PersonDto | null;
+  payload: SummaryPayload;
+  previewSha256: string;
+  criteriaVersion: number;
+  /** Criteria whose basis no reviewer has confirmed or written: signing is refused while any is listed. */
+  unconfirmedBases: { phenomenon: Phenomenon; defaultText: boolean }[];
+  /** The caller may sign or return the revision now: its assigned reviewer, not its author, while it is in review. */
+  canDecide: boolean;
+  /** Why the caller cannot sign this revision now (the above, or unconfirmed criteria bases), in one sentence; null when they can. */
+  signBlocker: string | null;
+  branches: SummaryBranchDto[];
+  branchSampling: SweepSampling | null;
 }

@@ -136,6 +136,15 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
+          path: paths.app.summaryPreview.path,
+          ErrorBoundary: RouteErrorBoundary,
+          HydrateFallback: ScreenFallback,
+          lazy: async () => {
+            const { SummaryPreviewRoute, clientLoader } = await import("@/app/routes/app/summary-preview");
+            return { Component: SummaryPreviewRoute, loader: clientLoader(queryClient) };
+          },
+        },
+        {
           path: paths.app.admin.path,
           ErrorBoundary: RouteErrorBoundary,
           HydrateFallback: ScreenFallback,

@@ -59,6 +59,11 @@ export const paths = {
       path: "/reviews",
       getHref: () => "/reviews",
     },
+    summaryPreview: {
+      path: "/reviews/:revisionId/summary",
+      /** The summary of a revision as it would be signed now: read here, then sign or return. */
+      getHref: (revisionId: string) => `/reviews/${encodeURIComponent(revisionId)}/summary`,
+    },
     admin: {
       path: "/admin",
       /** `projectId`: the project whose members the page opens on. */
@@ -91,6 +96,7 @@ export const apiPaths = {
     comparison: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/comparison`,
     criteria: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/criteria`,
     criteriaHistory: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/criteria/history`,
+    reviewStates: (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}/review-states`,
   },
   alternatives: {
     studies: (alternativeId: string) => `/api/alternatives/${encodeURIComponent(alternativeId)}/studies`,
@@ -103,6 +109,7 @@ export const apiPaths = {
     detail: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}`,
     revisions: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/revisions`,
     import: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/import`,
+    reviewStates: (studyId: string) => `/api/studies/${encodeURIComponent(studyId)}/review-states`,
   },
   revisions: {
     detail: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}`,
@@ -123,6 +130,7 @@ export const apiPaths = {
   review: {
     queue: "/api/review-queue",
     state: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/review`,
+    summaryPreview: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/summary-preview`,
     submit: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/submit`,
     return: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/return`,
     sign: (revisionId: string) => `/api/revisions/${encodeURIComponent(revisionId)}/sign`,

@@ -40,8 +40,13 @@ export const queryKeys = {
     list: (alternativeId: string) => ["datasets", "list", alternativeId] as const,
   },
   reviews: {
+    /** Prefix of every review key: a review write, or a new revision (it supersedes older ones), refreshes them all. */
+    all: () => ["reviews"] as const,
     queue: () => ["reviews", "queue"] as const,
     revision: (revisionId: string) => ["reviews", "revision", revisionId] as const,
+    preview: (revisionId: string) => ["reviews", "preview", revisionId] as const,
+    studyStates: (studyId: string) => ["reviews", "states", "study", studyId] as const,
+    projectStates: (projectId: string) => ["reviews", "states", "project", projectId] as const,
   },
   summaries: {
     /** Prefix of the list and of every signed summary (a signature adds one). */

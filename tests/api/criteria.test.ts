@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import invented from "../../shared/schemas/__tests__/fixtures/invented-deck-study.json";
 import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
@@ -67,9 +68,9 @@ describe("GET /api/projects/:id/criteria", () => {
   });
 });
 
-describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
-  it("answers 403 to the viewer and to the reviewer and saves nothing", async () => {
-    for (const who of ["viewer", "reviewer"] as const) {
+describe("PUT /api/projects/:id/criteria (reviewers and administrators own the criteria)", () => {
+  it("answers 403 to the viewer and to the analyst whose work is checked against them, and saves nothing", async () => {
+    for (const who of ["viewer", "analyst"] as const) {
       const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies[who], body: { criteria: criteria() } });
       expect(res.status, who).toBe(403);
       expect(res.body.error.code).toBe("forbidden");
@@ -83,7 +84,7 @@ describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
     bad.wind.deckHeight = 250;
     bad.wind.terrain = { kind: "category", category: "VI" };
     bad.requirements.flutter.basis = "";
-    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: bad } });
+    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.reviewer, body: { criteria: bad } });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("invalid_input");
     const paths = res.body.error.details.map((d: { path: string }) => d.path);
@@ -95,7 +96,7 @@ describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
 
   it("saves version 1, reads it back unchanged with v_m and required speeds, and audits the save", async () => {
     const sent = criteria();
-    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: sent, baseVersion: null } });
+    const res = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.reviewer, body: { criteria: sent, baseVersion: null } });
     expect(res.status).toBe(200);
     expect(res.body.version).toBe(1);
     const read = await api(base(), criteriaUrl(projectId), { cookie: cookies.viewer });
@@ -110,12 +111,12 @@ describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
   it("appends version 2 on the next save, refuses a stale baseVersion with 409, and keeps the history", async () => {
     const edited = criteria();
     edited.requirements.flutter = { factor: 1.4, basis: "Owner's specification (invented for the test)" } as any;
-    const second = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: edited, baseVersion: 1 } });
+    const second = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.reviewer, body: { criteria: edited, baseVersion: 1 } });
     expect(second.status).toBe(200);
     expect(second.body.version).toBe(2);
     expect(second.body.evaluated.required.flutter.totalFactor).toBe(1.4);
 
-    const stale = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.analyst, body: { criteria: criteria(), baseVersion: 1 } });
+    const stale = await api(base(), criteriaUrl(projectId), { method: "PUT", cookie: cookies.reviewer, body: { criteria: criteria(), baseVersion: 1 } });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe("conflict");
 
@@ -128,6 +129,57 @@ describe("PUT /api/projects/:id/criteria (analysts and administrators)", () => {
     const res = await api(base(), criteriaUrl(otherProjectId), { method: "PUT", cookie: cookies.admin, body: { criteria: criteria() } });
     expect(res.status).toBe(200);
     expect(res.body.version).toBe(1);
+  });
+});
+
+describe("who stands behind each basis", () => {
+  it("marks a default basis as such until a reviewer confirms it, and records who confirmed it in which version", async () => {
+    // Version 2 (above): flutter replaced by the reviewer's own text, the other three still the shipped defaults.
+    const v2 = await api(base(), criteriaUrl(projectId), { cookie: cookies.viewer });
+    expect(v2.body.version).toBe(2);
+    expect(v2.body.bases.flutter).toMatchObject({ defaultText: false, confirmation: { by: { name: "Mira Holloway" }, version: 2, how: "written" } });
+    for (const p of ["divergence", "vortexOnset", "gallopingOnset"]) expect(v2.body.bases[p], p).toEqual({ defaultText: true, confirmation: null });
+
+    const bad = await api(base(), criteriaUrl(projectId), {
+      method: "PUT",
+      cookie: cookies.reviewer,
+      body: { criteria: v2.body.criteria, baseVersion: 2, confirmBases: ["divergence", "buffeting"] },
+    });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details.map((d: { path: string }) => d.path)).toEqual(["confirmBases.1"]);
+
+    const confirmed = await api(base(), criteriaUrl(projectId), {
+      method: "PUT",
+      cookie: cookies.reviewer,
+      body: { criteria: v2.body.criteria, baseVersion: 2, confirmBases: ["divergence"] },
+    });
+    expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(200);
+    expect(confirmed.body.version).toBe(3);
+    expect(confirmed.body.bases.divergence).toMatchObject({ defaultText: true, confirmation: { by: { name: "Mira Holloway" }, version: 3, how: "confirmed" } });
+    // Unchanged requirements keep their record from the version that made it.
+    expect(confirmed.body.bases.flutter.confirmation).toEqual(v2.body.bases.flutter.confirmation);
+    expect(confirmed.body.bases.vortexOnset.confirmation).toBeNull();
+
+    const history = await api(base(), `${criteriaUrl(projectId)}/history`, { cookie: cookies.analyst });
+    expect(history.body.map((v: { version: number; bases: Record<string, { confirmation: unknown }> }) => [v.version, v.bases.divergence.confirmation !== null])).toEqual([
+      [3, true],
+      [2, false],
+      [1, false],
+    ]);
+    const { rows } = await db.execute<{ details: { confirmedBases: string[] } }>(
+      sql`select details from audit_events where action = 'criteria.update' and object_id = ${String(projectId)} order by id desc limit 1`,
+    );
+    expect(rows[0].details.confirmedBases).toEqual(["divergence"]);
+  });
+
+  it("seeds the demo crossing with its own invented design basis, every basis written by the demo reviewer", async () => {
+    const projects = await api(base(), "/api/projects", { cookie: cookies.viewer });
+    const demo = projects.body.find((p: { name: string }) => p.name.startsWith("Harrowmere"));
+    const res = await api(base(), criteriaUrl(Number(demo.id)), { cookie: cookies.viewer });
+    for (const [phenomenon, requirement] of Object.entries(res.body.criteria.requirements) as [string, { basis: string }][]) {
+      expect(requirement.basis, phenomenon).toMatch(/^Harrowmere Crossing design basis, invented for the demo, clause 7\.\d\.\d/);
+      expect(res.body.bases[phenomenon]).toMatchObject({ defaultText: false, confirmation: { by: { name: "Mira Holloway" } } });
+    }
   });
 });
 

@@ -6,7 +6,7 @@ import { auditActions, createProjectWithMembers, openTestDb, userId } from "../s
 import { testEnv } from "../support/env.js";
 import { api, DEMO_PASSWORD, signIn } from "../support/http.js";
 import { lastAuditId } from "../support/workspace.js";
-import { addRevision, arrangeStudy, waitForMail, type ArrangedStudy } from "../support/review.js";
+import { addRevision, ANY_PREVIEW_SHA256, arrangeStudy, signFromPreview, waitForMail, type ArrangedStudy } from "../support/review.js";
 
 const base = () => testEnv.baseUrl;
 const db = openTestDb();
@@ -31,7 +31,7 @@ beforeAll(async () => {
   cookies = { admin, analyst, reviewer, viewer };
   reviewerId = await userId(db, "reviewer@stillspan.test");
   adminId = await userId(db, "admin@stillspan.test");
-  arranged = await arrangeStudy(base(), analyst, projectId, studyName);
+  arranged = await arrangeStudy(base(), analyst, projectId, studyName, reviewer);
 });
 afterAll(() => db.$client.end());
 
@@ -71,7 +71,10 @@ describe("submit → return → submit again → sign", () => {
     const bad = await api(base(), `/api/revisions/${arranged.revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId: viewerId } });
     expect(bad.status).toBe(400);
     expect(bad.body.error.message).toMatch(/not a reviewer of this project/);
-    const sign = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, { cookie: cookies.reviewer, body: { statement: "Early." } });
+    const sign = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, {
+      cookie: cookies.reviewer,
+      body: { statement: "Early.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(sign.status).toBe(409);
     expect(sign.body.error.message).toMatch(/draft/);
   });
@@ -111,7 +114,10 @@ describe("submit → return → submit again → sign", () => {
   });
 
   it("lets an analyst not sign (403) and not return (403)", async () => {
-    const sign = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, { cookie: cookies.analyst, body: { statement: "Looks fine." } });
+    const sign = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, {
+      cookie: cookies.analyst,
+      body: { statement: "Looks fine.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(sign.status).toBe(403);
     const ret = await api(base(), `/api/revisions/${arranged.revisionId}/return`, { cookie: cookies.analyst, body: { comments: "x" } });
     expect(ret.status).toBe(403);
@@ -150,10 +156,12 @@ describe("submit → return → submit again → sign", () => {
   it("signs after resubmission: 201 with the summary id, e-mail to the analyst and the project's viewer", async () => {
     const again = await api(base(), `/api/revisions/${arranged.revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
     expect(again.status).toBe(200);
-    const res = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, {
-      cookie: cookies.reviewer,
-      body: { statement: "Reviewed the conversion, the sweep and the margins: stable with margin at this stage." },
-    });
+    const res = await signFromPreview(
+      base(),
+      cookies.reviewer,
+      arranged.revisionId,
+      "Reviewed the conversion, the sweep and the margins: stable with margin at this stage.",
+    );
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.summaryId).toMatch(/^\d+$/);
     const state = await review(arranged.revisionId, cookies.analyst);
@@ -178,14 +186,18 @@ describe("submit → return → submit again → sign", () => {
   });
 
   it("refuses signing the same revision twice (409), also when two signatures race", async () => {
-    const res = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, { cookie: cookies.reviewer, body: { statement: "Again." } });
+    const res = await api(base(), `/api/revisions/${arranged.revisionId}/sign`, {
+      cookie: cookies.reviewer,
+      body: { statement: "Again.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/already signed/);
 
     const second = await addRevision(base(), cookies.analyst, arranged.studyId, 1, 0.0045);
     await api(base(), `/api/revisions/${second}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
+    const { previewSha256 } = (await api(base(), `/api/revisions/${second}/summary-preview`, { cookie: cookies.reviewer })).body;
     const both = await Promise.all(
-      [1, 2].map((i) => api(base(), `/api/revisions/${second}/sign`, { cookie: cookies.reviewer, body: { statement: `Race ${i}` } })),
+      [1, 2].map((i) => api(base(), `/api/revisions/${second}/sign`, { cookie: cookies.reviewer, body: { statement: `Race ${i}`, previewSha256 } })),
     );
     expect(both.map((r) => r.status).sort()).toEqual([201, 409]);
   });
@@ -201,7 +213,10 @@ describe("nobody signs their own revision", () => {
 
     const submitted = await api(base(), `/api/revisions/${own}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
     expect(submitted.status).toBe(200);
-    const res = await api(base(), `/api/revisions/${own}/sign`, { cookie: cookies.admin, body: { statement: "My own work is fine." } });
+    const res = await api(base(), `/api/revisions/${own}/sign`, {
+      cookie: cookies.admin,
+      body: { statement: "My own work is fine.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/own revision/);
     expect((await review(own, cookies.analyst)).body.state).toBe("in-review");
@@ -223,14 +238,17 @@ describe("only the assigned reviewer decides; an administrator reassigns", () =>
       "viewer@stillspan.test": "viewer",
     });
     second = { id: secondId, cookie: await signIn(base(), secondEmail) };
-    assigned = await arrangeStudy(base(), cookies.analyst, teamProjectId, `Assignment ${suffix}`);
+    assigned = await arrangeStudy(base(), cookies.analyst, teamProjectId, `Assignment ${suffix}`, cookies.reviewer);
     const submitted = await api(base(), `/api/revisions/${assigned.revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
     expect(submitted.status).toBe(200);
   });
 
   it("refuses another reviewer of the project who is not assigned: sign and return are 403, nothing changes", async () => {
     const auditBefore = await lastAuditId(db);
-    const sign = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: second.cookie, body: { statement: "Not mine to sign." } });
+    const sign = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, {
+      cookie: second.cookie,
+      body: { statement: "Not mine to sign.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(sign.status).toBe(403);
     expect(sign.body.error.message).toMatch(/assigned to another reviewer/);
     const ret = await api(base(), `/api/revisions/${assigned.revisionId}/return`, { cookie: second.cookie, body: { comments: "Not mine to return." } });
@@ -277,9 +295,12 @@ describe("only the assigned reviewer decides; an administrator reassigns", () =>
     const [mail] = await waitForMail(base(), cookies.admin, secondEmail, `Review requested: Assignment ${suffix}, revision 1`);
     expect(mail, "review-requested message to the new reviewer").toBeDefined();
 
-    const formerSigns = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: cookies.reviewer, body: { statement: "I was first." } });
+    const formerSigns = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, {
+      cookie: cookies.reviewer,
+      body: { statement: "I was first.", previewSha256: ANY_PREVIEW_SHA256 },
+    });
     expect(formerSigns.status).toBe(403);
-    const signed = await api(base(), `/api/revisions/${assigned.revisionId}/sign`, { cookie: second.cookie, body: { statement: "Checked: stable with margin." } });
+    const signed = await signFromPreview(base(), second.cookie, assigned.revisionId, "Checked: stable with margin.");
     expect(signed.status, JSON.stringify(signed.body)).toBe(201);
     const late = await api(base(), `/api/revisions/${assigned.revisionId}/reviewer`, { cookie: cookies.admin, body: { reviewerId } });
     expect(late.status).toBe(409);

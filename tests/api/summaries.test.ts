@@ -13,7 +13,7 @@ import { startTestApp, type TestApp } from "../support/app.js";
 import { createProjectWithMembers, openTestDb, userId } from "../support/db.js";
 import { testEnv } from "../support/env.js";
 import { api, signIn } from "../support/http.js";
-import { addRevision, arrangeStudy, type ArrangedStudy } from "../support/review.js";
+import { addRevision, arrangeStudy, signFromPreview, type ArrangedStudy } from "../support/review.js";
 
 const base = () => testEnv.baseUrl;
 const db = openTestDb();
@@ -43,7 +43,7 @@ async function fetchJwks(origin: string): Promise<JSONWebKeySet> {
 async function submitAndSign(origin: string, revisionId: string, statement: string): Promise<string> {
   const submitted = await api(origin, `/api/revisions/${revisionId}/submit`, { cookie: cookies.analyst, body: { reviewerId } });
   expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
-  const signed = await api(origin, `/api/revisions/${revisionId}/sign`, { cookie: cookies.reviewer, body: { statement } });
+  const signed = await signFromPreview(origin, cookies.reviewer, revisionId, statement);
   expect(signed.status, JSON.stringify(signed.body)).toBe(201);
   return signed.body.summaryId;
 }
@@ -57,7 +57,7 @@ beforeAll(async () => {
   const [analyst, reviewer, viewer] = await Promise.all(["analyst", "reviewer", "viewer"].map((r) => signIn(base(), `${r}@stillspan.test`)));
   cookies = { analyst, reviewer, viewer };
   reviewerId = await userId(db, "reviewer@stillspan.test");
-  arranged = await arrangeStudy(base(), analyst, projectId, `Summary study ${suffix}`);
+  arranged = await arrangeStudy(base(), analyst, projectId, `Summary study ${suffix}`, reviewer);
   firstSummaryId = await submitAndSign(base(), arranged.revisionId, "Stable with margin (ζ > 0 up to the sweep end, λ tracked).");
 });
 afterAll(() => db.$client.end());

@@ -100,6 +100,8 @@ const ROUTES: Route[] = [
   { name: "GET /revisions/:id", write: false, ok: 200, call: (c) => json("GET", `/api/revisions/${ids.revision1Id}`)(c) },
   { name: "GET /revisions/:a/diff/:b", write: false, ok: 200, call: (c) => json("GET", `/api/revisions/${ids.revision1Id}/diff/${ids.revision2Id}`)(c) },
   { name: "GET /revisions/:id/export", write: false, ok: 200, call: (c) => json("GET", `/api/revisions/${ids.revision1Id}/export`)(c) },
+  { name: "GET /studies/:id/review-states", write: false, ok: 200, call: (c) => json("GET", `/api/studies/${ids.studyId}/review-states`)(c) },
+  { name: "GET /projects/:id/review-states", write: false, ok: 200, call: (c) => json("GET", `/api/projects/${projectId}/review-states`)(c) },
   {
     name: "POST /projects/:id/alternatives",
     write: true,

@@ -1,7 +1,8 @@
 /**
  * The design wind and acceptance criteria in the browser: the project page shows v_m at deck level and the
- * required speeds; an analyst edits the basic wind speed and sees v_m follow, saves, and meets a stale-version
- * conflict with a way to reload; a reviewer reads without an editor.
+ * required speeds with who stands behind each basis; a reviewer (the criteria's owner) edits the basic wind speed
+ * and sees v_m follow, saves, meets a stale-version conflict with a way to reload, and confirms default bases one by
+ * one; the analyst reads without an editor.
  *
  * Expected numbers come from shared/criteria (the module the server uses) applied to what GET returns, and the
  * headline one also from EN 1991-1-4:2005 Expr. (4.3)–(4.5) written out by hand.
@@ -23,6 +24,7 @@ import { artifactsDir, launchBrowser, type BrowserSession } from "../support/bro
 const DEMO_PROJECT = "Harrowmere Estuary Crossing (invented demo)";
 const db = openTestDb();
 let analyst: BrowserSession;
+let owner: BrowserSession;
 let ownProjectId: string;
 const problems: string[] = [];
 
@@ -87,10 +89,14 @@ beforeAll(async () => {
   analyst = await launchBrowser();
   watchProblems(analyst, "analyst");
   await signIn(analyst, "analyst@stillspan.test");
+  owner = await launchBrowser();
+  watchProblems(owner, "reviewer");
+  await signIn(owner, "reviewer@stillspan.test");
 });
 
 afterAll(async () => {
   await analyst?.close();
+  await owner?.close();
   await db.$client.end();
 });
 
@@ -120,8 +126,12 @@ describe("design wind and criteria on the project page", () => {
       const shown = await panel(page).getByTestId(`required-${phenomenon}`).textContent();
       expect(shown, phenomenon).toBe(mps(expected.required[phenomenon].requiredSpeedMps));
     }
-    // The defaults' clauses are recalled, and the screen says so beside them.
-    expect(await panel(page).getByText("from memory", { exact: true }).count()).toBeGreaterThanOrEqual(3);
+    // The demo cites its own (invented) design basis, each written by the demo reviewer: nothing is left to confirm.
+    for (const phenomenon of PHENOMENA) {
+      const state = panel(page).getByTestId(`basis-state-${phenomenon}`);
+      expect(await state.textContent(), phenomenon).toMatch(/^Written by Mira Holloway, .+ \(version \d+\)$/);
+    }
+    expect(await panel(page).getByRole("note", { name: "Criteria not confirmed" }).count()).toBe(0);
     expect(await panel(page).getByText(/§4\.3\.2, Expr\. \(4\.5\)/).count()).toBeGreaterThan(0);
     await analyst.screenshot("criteria-project-page");
 
@@ -133,14 +143,14 @@ describe("design wind and criteria on the project page", () => {
     await page.setViewportSize({ width: 1280, height: 800 });
   });
 
-  it("the analyst edits the basic wind speed, sees v_m follow before saving, and saves a new version", async () => {
-    const { page } = analyst;
+  it("the reviewer edits the basic wind speed, sees v_m follow before saving, and saves a new version", async () => {
+    const { page } = owner;
     const saved = await pageApi<ProjectCriteriaDto>(page, "PUT", `/api/projects/${ownProjectId}/criteria`, {
       criteria: ownCriteria(26),
       baseVersion: null,
     });
     expect(saved.status).toBe(200);
-    await page.goto(analyst.url(`/projects/${ownProjectId}`));
+    await page.goto(owner.url(`/projects/${ownProjectId}`));
     await panel(page).getByTestId("design-speed").waitFor();
     expect(await panel(page).getByTestId("design-speed").textContent()).toBe(
       mps(evaluateCriteria(ownCriteria(26)).designWind.meanSpeedMps),
@@ -156,7 +166,10 @@ describe("design wind and criteria on the project page", () => {
     const expected = evaluateCriteria(ownCriteria(30.5));
     await expect.poll(() => preview.getByTestId("design-speed").textContent()).toBe(mps(expected.designWind.meanSpeedMps));
     expect(await preview.getByTestId("required-flutter").textContent()).toBe(mps(expected.required.flutter.requiredSpeedMps));
-    await analyst.screenshot("criteria-editor");
+    // The default texts are named as such in the editor, with the saved version's state beside each.
+    expect(await page.getByText(/^Stillspan's default text, recalled from memory/).count()).toBe(4);
+    expect(await page.getByText("Default text — not confirmed").count()).toBe(4);
+    await owner.screenshot("criteria-editor");
 
     await page.getByRole("button", { name: "Save as version 2" }).click();
     await panel(page).getByRole("status").filter({ hasText: "Saved as version 2." }).waitFor();
@@ -171,7 +184,7 @@ describe("design wind and criteria on the project page", () => {
   });
 
   it("a bad input is named at its field and pauses the preview; nothing is saved", async () => {
-    const { page } = analyst;
+    const { page } = owner;
     await panel(page).getByRole("button", { name: "Edit criteria" }).click();
     const deckHeight = page.getByLabel("Deck height z");
     await deckHeight.fill("250");
@@ -185,7 +198,7 @@ describe("design wind and criteria on the project page", () => {
   });
 
   it("a save on a stale version is refused with a way to load the newer version", async () => {
-    const { page } = analyst;
+    const { page } = owner;
     await panel(page).getByRole("button", { name: "Edit criteria" }).click();
     await page.getByLabel("Deck height z").fill("65");
     // Someone else saves version 3 meanwhile.
@@ -199,7 +212,7 @@ describe("design wind and criteria on the project page", () => {
     const alert = panel(page).getByRole("alert");
     await alert.waitFor();
     expect(await alert.textContent()).toContain("Someone saved the criteria meanwhile");
-    await analyst.screenshot("criteria-conflict");
+    await owner.screenshot("criteria-conflict");
     await alert.getByRole("button", { name: /Load the latest version/ }).click();
 
     await page.getByRole("button", { name: "Save as version 4" }).waitFor();
@@ -210,28 +223,51 @@ describe("design wind and criteria on the project page", () => {
     expect(after.body.criteria?.wind.deckHeight).toBe(60);
   });
 
-  it("a reviewer reads the criteria and their history but gets no editor", async () => {
-    const reviewer = await launchBrowser();
-    watchProblems(reviewer, "reviewer");
-    try {
-      await signIn(reviewer, "reviewer@stillspan.test");
-      await reviewer.page.goto(reviewer.url(`/projects/${ownProjectId}`));
-      const reviewerPanel = panel(reviewer.page);
-      await reviewerPanel.getByTestId("design-speed").waitFor();
-      expect(await reviewerPanel.getByTestId("design-speed").textContent()).toBe(
-        mps(evaluateCriteria(ownCriteria(27)).designWind.meanSpeedMps),
-      );
-      expect(await reviewerPanel.getByRole("button", { name: "Edit criteria" }).count()).toBe(0);
-      await reviewerPanel.getByText("Read-only: the project's analysts edit the criteria.").waitFor();
-
-      await reviewerPanel.getByRole("button", { name: "History" }).click();
-      const rows = reviewerPanel.getByRole("table", { name: /Saved versions/ }).getByRole("row");
-      await expect.poll(() => rows.count()).toBe(4); // header + versions 3, 2, 1
-      expect(await rows.nth(1).getByRole("rowheader").textContent()).toBe("3");
-      await reviewer.screenshot("criteria-reviewer-history");
-    } finally {
-      await reviewer.close();
+  it("marks each default basis, refuses nothing silently, and lets the reviewer confirm them one by one", async () => {
+    const { page } = owner;
+    await page.goto(owner.url(`/projects/${ownProjectId}`));
+    const note = panel(page).getByRole("note", { name: "Criteria not confirmed" });
+    await note.waitFor();
+    expect(await note.textContent()).toContain(
+      "In version 3 of the project's criteria, flutter, torsional divergence, vortex-shedding onset, galloping onset still have the default basis text.",
+    );
+    for (const phenomenon of PHENOMENA) {
+      expect(await panel(page).getByTestId(`basis-state-${phenomenon}`).textContent(), phenomenon).toContain("Default text — not confirmed");
     }
+    await owner.screenshot("criteria-default-bases");
+    let version = 3;
+    for (const phenomenon of PHENOMENA) {
+      const state = panel(page).getByTestId(`basis-state-${phenomenon}`);
+      await state.getByRole("button", { name: /^Confirm the .+ basis$/ }).click();
+      version += 1;
+      await expect.poll(() => state.textContent()).toMatch(new RegExp(`^Default text Confirmed by Mira Holloway, .+ \\(version ${version}\\)$`));
+    }
+    expect(await note.count()).toBe(0);
+    const after = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
+    expect(after.body.version).toBe(7);
+    expect(after.body.criteria?.wind.basicSpeed).toBe(27); // confirming changes no value
+    await owner.screenshot("criteria-bases-confirmed");
+  });
+
+  it("the analyst reads the criteria, who stands behind each basis and their history, but gets no editor", async () => {
+    const { page } = analyst;
+    await page.goto(analyst.url(`/projects/${ownProjectId}`));
+    const analystPanel = panel(page);
+    await analystPanel.getByTestId("design-speed").waitFor();
+    expect(await analystPanel.getByTestId("design-speed").textContent()).toBe(mps(evaluateCriteria(ownCriteria(27)).designWind.meanSpeedMps));
+    expect(await analystPanel.getByRole("button", { name: "Edit criteria" }).count()).toBe(0);
+    expect(await analystPanel.getByRole("button", { name: /^Confirm the / }).count()).toBe(0);
+    await analystPanel.getByText("Read-only: the project's reviewers and administrators own the criteria.").waitFor();
+    expect(await analystPanel.getByTestId("basis-state-flutter").textContent()).toMatch(/Confirmed by Mira Holloway/);
+
+    await analystPanel.getByRole("button", { name: "History" }).click();
+    const rows = analystPanel.getByRole("table", { name: /Saved versions/ }).getByRole("row");
+    await expect.poll(() => rows.count()).toBe(8); // header + versions 7 … 1
+    expect(await rows.nth(1).getByRole("rowheader").textContent()).toBe("7");
+    expect(await rows.nth(1).textContent()).toContain("all confirmed");
+    expect(await rows.nth(4).textContent()).toContain("not confirmed: torsional divergence (default text), vortex-shedding onset (default text)");
+    expect(await rows.nth(5).textContent()).toContain("not confirmed: flutter (default text), torsional divergence (default text)");
+    await analyst.screenshot("criteria-analyst-history");
   });
 
   it("the study workspace shows the margins per phenomenon and the screening table of the shown result", async () => {
@@ -252,8 +288,8 @@ describe("design wind and criteria on the project page", () => {
     const revision = await pageApi<{ result: SweepResult }>(page, "GET", `/api/revisions/${study.body.latestRevision.id}`);
     let { body: dto } = await pageApi<ProjectCriteriaDto>(page, "GET", `/api/projects/${ownProjectId}/criteria`);
     if (dto.criteria === null) {
-      // Run on its own (-t), the earlier tests have not saved criteria for this project yet.
-      dto = (await pageApi<ProjectCriteriaDto>(page, "PUT", `/api/projects/${ownProjectId}/criteria`, { criteria: ownCriteria(27) })).body;
+      // Run on its own (-t), the earlier tests have not saved criteria for this project yet (the reviewer owns them).
+      dto = (await pageApi<ProjectCriteriaDto>(owner.page, "PUT", `/api/projects/${ownProjectId}/criteria`, { criteria: ownCriteria(27) })).body;
     }
     const criteria = dto.criteria as ProjectCriteria;
     const screening = screenStudy(inventedStudy as Parameters<typeof screenStudy>[0], criteria);

@@ -33,7 +33,7 @@ describe("review and signed summary in the browser", () => {
 
   const signOut = () => signOutInPage(browser.page);
 
-  it("the reviewer finds the demo study's latest revision in the review queue and signs it with a statement", async () => {
+  it("the reviewer finds the demo study's latest revision in the review queue, reads its summary preview and signs it there", async () => {
     const { page } = browser;
     await signIn("reviewer@stillspan.test", "/reviews");
     expect(await page.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents()).toContain("Review queue");
@@ -48,9 +48,21 @@ describe("review and signed summary in the browser", () => {
     expect(facts).toMatch(/Warnings(none|\d+ warnings?)/);
     await browser.screenshot("review-queue");
 
-    await card.getByLabel("Reviewer's statement").fill("Checked the derivatives, the sweep and the margins: stable with margin at this design stage.");
-    await card.getByRole("button", { name: "Sign the summary" }).click();
-    const done = page.getByRole("status").filter({ hasText: `${DEMO_STUDY}: revision ${signedRevision} is signed.` });
+    // No signing from a queue row: the row leads to the summary exactly as it will be signed.
+    expect(await card.getByRole("button", { name: "Sign the summary" }).count()).toBe(0);
+    await card.getByRole("link", { name: "Read the summary to sign or return" }).click();
+    await page.waitForURL((url) => /^\/reviews\/\d+\/summary$/.test(url.pathname));
+    await page.getByRole("heading", { level: 1, name: `Summary to sign — ${DEMO_STUDY}, revision ${signedRevision}` }).waitFor();
+    await page.getByRole("note", { name: "Not signed yet" }).waitFor();
+    // The demo's criteria cite its own confirmed design basis: nothing stands in the way.
+    expect(await page.getByRole("alert").filter({ hasText: "Criteria not confirmed" }).count()).toBe(0);
+    const criteriaCard = page.locator("section").filter({ has: page.getByRole("heading", { name: "Criteria and their basis" }) });
+    expect(await criteriaCard.textContent()).toContain("Harrowmere Crossing design basis, invented for the demo");
+    const decision = page.getByRole("region", { name: "Your decision" });
+    await decision.getByLabel("Reviewer's statement").fill("Checked the derivatives, the sweep and the margins: stable with margin at this design stage.");
+    await browser.screenshot("review-summary-preview");
+    await decision.getByRole("button", { name: "Sign the summary" }).click();
+    const done = page.getByRole("status").filter({ hasText: `${DEMO_STUDY}: revision ${signedRevision} is signed with your statement.` });
     await done.waitFor();
     await browser.screenshot("review-signed");
     await done.getByRole("link", { name: "Open the signed summary" }).click();

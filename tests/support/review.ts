@@ -2,16 +2,41 @@
 import { expect } from "vitest";
 import invented from "../../shared/schemas/__tests__/fixtures/invented-deck-study.json";
 import { DEFAULT_REQUIREMENTS } from "../../shared/criteria/default-requirements.js";
+import { PHENOMENA } from "../../shared/schemas/criteria.js";
 import type { StudyDocument } from "../../shared/schemas/study.js";
 import { api } from "./http.js";
 
 export const inventedStudy = (): StudyDocument => structuredClone(invented) as StudyDocument;
 
-/** Invented design wind for test projects: v_b 28 m/s, category 0, deck at 62 m (v_m ≈ 43.4 m/s). */
+/**
+ * Invented design wind for test projects: v_b 28 m/s, category 0, deck at 62 m (v_m ≈ 43.4 m/s), with the default
+ * factors and their default basis texts.
+ */
 export const testCriteria = () => ({
   wind: { basicSpeed: 28, probability: { kind: "return-period", years: 50 }, terrain: { kind: "category", category: "0" }, deckHeight: 62 },
   requirements: structuredClone(DEFAULT_REQUIREMENTS),
 });
+
+/** Saves `testCriteria()` as a criteria owner (reviewer or administrator), confirming every basis unless told not to. */
+export async function saveTestCriteria(base: string, owner: string, projectId: number, { confirm = true } = {}) {
+  const res = await api(base, `/api/projects/${projectId}/criteria`, {
+    method: "PUT",
+    cookie: owner,
+    body: { criteria: testCriteria(), ...(confirm ? { confirmBases: [...PHENOMENA] } : {}) },
+  });
+  expect(res.status, JSON.stringify(res.body)).toBe(200);
+  return res.body;
+}
+
+/** A well-formed preview hash that matches no summary: for requests refused before the hash is compared. */
+export const ANY_PREVIEW_SHA256 = "0".repeat(64);
+
+/** Signs as a reviewer does: reads the summary preview, then signs it with its hash. Returns the sign response. */
+export async function signFromPreview(base: string, cookie: string, revisionId: string, statement: string) {
+  const preview = await api(base, `/api/revisions/${revisionId}/summary-preview`, { cookie });
+  expect(preview.status, JSON.stringify(preview.body)).toBe(200);
+  return api(base, `/api/revisions/${revisionId}/sign`, { cookie, body: { statement, previewSha256: preview.body.previewSha256 } });
+}
 
 /** The fixture's derivative table as a CSV in the study convention (Ur, forces on B, h down). */
 export function fixtureCsv(): string {
@@ -29,12 +54,19 @@ export interface ArrangedStudy {
 }
 
 /**
- * Criteria, an alternative, a flutter-derivative data set (the fixture's table) and a study whose revision 1 is
- * the fixture computed by the engine — everything through the API as the analyst.
+ * Criteria (saved and confirmed by `criteriaOwner`, a reviewer or administrator), an alternative, a
+ * flutter-derivative data set (the fixture's table) and a study whose revision 1 is the fixture computed by the
+ * engine — everything through the API, the rest as the analyst.
  */
-export async function arrangeStudy(base: string, analyst: string, projectId: number, name: string): Promise<ArrangedStudy> {
-  const criteria = await api(base, `/api/projects/${projectId}/criteria`, { method: "PUT", cookie: analyst, body: { criteria: testCriteria() } });
-  expect(criteria.status, JSON.stringify(criteria.body)).toBe(200);
+export async function arrangeStudy(
+  base: string,
+  analyst: string,
+  projectId: number,
+  name: string,
+  criteriaOwner: string,
+  { confirmCriteria = true } = {},
+): Promise<ArrangedStudy> {
+  await saveTestCriteria(base, criteriaOwner, projectId, { confirm: confirmCriteria });
   const alt = await api(base, `/api/projects/${projectId}/alternatives`, {
     cookie: analyst,
     body: { name: `${name} — twin box (invented)`, deckWidthM: 27.5, deckDepthM: 3.6 },

@@ -1,5 +1,5 @@
 import { and, desc, eq, inArray } from "drizzle-orm";
-import type { ProjectCriteria } from "../../../shared/schemas/criteria.js";
+import type { BasisConfirmations, ProjectCriteria } from "../../../shared/schemas/criteria.js";
 import type { ProjectRole } from "../../../shared/schemas/auth.js";
 import type { DbOrTx } from "../client.js";
 import { memberships, projectCriteria, users } from "../schema/index.js";
@@ -7,6 +7,7 @@ import { memberships, projectCriteria, users } from "../schema/index.js";
 export interface CriteriaVersionRow {
   version: number;
   criteria: ProjectCriteria;
+  basisConfirmations: BasisConfirmations;
   createdAt: Date;
   createdById: number | null;
   createdByName: string | null;
@@ -15,6 +16,7 @@ export interface CriteriaVersionRow {
 const versionColumns = {
   version: projectCriteria.version,
   criteria: projectCriteria.criteria,
+  basisConfirmations: projectCriteria.basisConfirmations,
   createdAt: projectCriteria.createdAt,
   createdById: projectCriteria.createdBy,
   createdByName: users.name,
@@ -45,7 +47,7 @@ export async function listCriteriaVersions(db: DbOrTx, projectId: number): Promi
 /** Appends a version; the unique (project, version) key rejects a concurrent save of the same version. */
 export async function insertCriteriaVersion(
   db: DbOrTx,
-  params: { projectId: number; version: number; criteria: ProjectCriteria; createdBy: number | null },
+  params: { projectId: number; version: number; criteria: ProjectCriteria; basisConfirmations: BasisConfirmations; createdBy: number | null },
 ): Promise<void> {
   await db.insert(projectCriteria).values(params);
 }

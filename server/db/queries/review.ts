@@ -158,6 +158,8 @@ export async function listReviewQueue(db: DbOrTx, reviewerId: number) {
       submittedAt: reviewRequests.submittedAt,
       changeNote: studyRevisions.changeNote,
       critical: studyRevisions.critical,
+      // The stored result's own list of warnings, which the study page lists one by one.
+      warningCount: sql<number>`jsonb_array_length(${studyRevisions.result}->'warnings')`,
       engineVersion: studyRevisions.engineVersion,
       documentSha256: studyRevisions.documentSha256,
     })
@@ -175,3 +177,32 @@ export async function listReviewQueue(db: DbOrTx, reviewerId: number) {
     .orderBy(asc(reviewRequests.submittedAt), asc(reviewRequests.id));
 }
 
+
+/**
+ * Every revision of one study, or of every study of a project, oldest first, with its review request's state and
+ * reviewer (none: a draft), the study's newest revision number and the number of its latest signed revision.
+ */
+export async function listRevisionReviewStates(db: DbOrTx, scope: { studyId: number } | { projectId: number }) {
+  return db
+    .select({
+      revisionId: studyRevisions.id,
+      studyId: studyRevisions.studyId,
+      number: studyRevisions.number,
+      state: reviewRequests.state,
+      reviewerId: reviewRequests.reviewerId,
+      reviewerName: reviewer.name,
+      decidedAt: reviewRequests.decidedAt,
+      latestNumber: sql<number>`(select max(r2.number)::int from ${studyRevisions} r2 where r2.study_id = ${studyRevisions.studyId})`,
+      latestSignedNumber: sql<number | null>`(
+        select max(r3.number)::int from ${studyRevisions} r3
+        join ${reviewRequests} q3 on q3.revision_id = r3.id and q3.state = 'signed'
+        where r3.study_id = ${studyRevisions.studyId})`,
+    })
+    .from(studyRevisions)
+    .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
+    .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))
+    .leftJoin(reviewRequests, eq(reviewRequests.revisionId, studyRevisions.id))
+    .leftJoin(reviewer, eq(reviewer.id, reviewRequests.reviewerId))
+    .where("studyId" in scope ? eq(studyRevisions.studyId, scope.studyId) : eq(alternatives.projectId, scope.projectId))
+    .orderBy(asc(studyRevisions.studyId), asc(studyRevisions.number));
+}

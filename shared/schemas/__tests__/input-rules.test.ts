@@ -49,7 +49,7 @@ const INPUTS: [string, z.ZodType, unknown][] = [
   ["patch project", projectPatchSchema, { name: "P", description: "d", siteNotes: "s" }],
   ["submit review", submitReviewSchema, { reviewerId: "3", note: "please" }],
   ["return review", returnReviewSchema, { comments: "fix" }],
-  ["sign review", signReviewSchema, { statement: "signed" }],
+  ["sign review", signReviewSchema, { statement: "signed", previewSha256: "ab".repeat(32) }],
   ["comment", createCommentSchema, { body: "note" }],
   ["save revision", createRevisionSchema, { parentRevision: 1, changeNote: "c", study: study() }],
   ["import fields", importRevisionFieldsSchema, { parentRevision: "1", changeNote: "c" }],

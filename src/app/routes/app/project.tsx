@@ -9,6 +9,7 @@ import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison
 import { getCriteriaQueryOptions } from "@/features/criteria/api/get-criteria";
 import { DesignWindPanel } from "@/features/criteria/components/design-wind-panel";
 import { ProjectStudies } from "@/features/studies/components/project-studies";
+import { StudyLatestReviewState } from "@/features/review/components/revision-review-state";
 import { requireAccess } from "@/app/routes/guards";
 
 export const clientLoader =
@@ -33,9 +34,13 @@ export function ProjectRoute() {
     <div key={projectId}>
       <ProjectOverview projectId={projectId} isAdmin={isAdmin} />
       {project.data ? (
-        <DesignWindPanel className="mt-4" projectId={projectId} canEdit={project.data.role === "analyst" || isAdmin} />
+        <DesignWindPanel className="mt-4" projectId={projectId} canEdit={project.data.role === "reviewer" || isAdmin} />
       ) : null}
-      <ProjectStudies projectId={projectId} canEdit={project.data?.role === "analyst"} />
+      <ProjectStudies
+        projectId={projectId}
+        canEdit={project.data?.role === "analyst"}
+        renderReviewState={(studyId) => <StudyLatestReviewState projectId={projectId} studyId={studyId} />}
+      />
       {isAdmin ? <ProjectMembers projectId={projectId} /> : null}
     </div>
   );

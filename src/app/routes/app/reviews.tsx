@@ -17,7 +17,7 @@ export function ReviewsRoute() {
     <>
       <PageHeader
         title="Review queue"
-        description="Study revisions submitted to you. Sign the stability summary with your statement, or return the revision with comments."
+        description="Study revisions submitted to you. Read each one's stability summary exactly as it will be signed, then sign it with your statement or return the revision with comments."
       />
       <ReviewQueue />
     </>

@@ -3,6 +3,7 @@ import { useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { canUseWorkspace } from "@/lib/authorization";
 import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { StudyRevisions } from "@/features/studies/components/study-revisions";
+import { RevisionReviewState } from "@/features/review/components/revision-review-state";
 import { requireAccess } from "@/app/routes/guards";
 
 export const clientLoader =
@@ -15,5 +16,12 @@ export const clientLoader =
 
 export function StudyRevisionsRoute() {
   const { projectId = "", studyId = "" } = useParams();
-  return <StudyRevisions key={studyId} projectId={projectId} studyId={studyId} />;
+  return (
+    <StudyRevisions
+      key={studyId}
+      projectId={projectId}
+      studyId={studyId}
+      renderReviewState={(revision) => <RevisionReviewState studyId={studyId} revisionId={revision.id} />}
+    />
+  );
 }

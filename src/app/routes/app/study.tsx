@@ -7,6 +7,7 @@ import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { StudyChecks } from "@/features/criteria/components/study-checks";
 import { ReviewPanel } from "@/features/review/components/review-panel";
+import { RevisionReviewState } from "@/features/review/components/revision-review-state";
 import { StudyWorkspace } from "@/features/studies/components/study-workspace";
 import { requireAccess } from "@/app/routes/guards";
 
@@ -34,6 +35,7 @@ export function StudyRoute() {
       readOnly={role !== "analyst"}
       criteria={criteria}
       renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
+      renderRevisionState={(revision) => <RevisionReviewState studyId={studyId} revisionId={revision.id} />}
       // The review of the revision being viewed, across both columns (beside the long result column it left a
       // hole): analysts submit it, its reviewer returns or signs it.
       renderFullWidth={(revision) =>

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { ProjectCriteria, ProjectCriteriaDto } from "@shared/schemas/criteria";
+import type { Phenomenon, ProjectCriteria, ProjectCriteriaDto } from "@shared/schemas/criteria";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
@@ -10,6 +10,8 @@ export interface UpdateCriteriaInput {
   criteria: ProjectCriteria;
   /** The version the edit started from (null: none saved yet); a newer saved version answers 409. */
   baseVersion: number | null;
+  /** Phenomena whose basis the saver confirms as it stands with this version (recorded with their name). */
+  confirmBases?: Phenomenon[];
 }
 
 /** Saves the criteria as the project's next version. */
@@ -17,12 +19,13 @@ export function updateCriteria(projectId: string, input: UpdateCriteriaInput): P
   return api.put<ProjectCriteriaDto>(apiPaths.projects.criteria(projectId), {
     criteria: input.criteria,
     baseVersion: input.baseVersion,
+    ...(input.confirmBases?.length ? { confirmBases: input.confirmBases } : {}),
   });
 }
 
 /**
  * On success the answer becomes the cached current version; the history, the screenings (they read the
- * required speeds) and the project's comparison (its margins) are refetched.
+ * required speeds), the project's comparison (its margins) and the summary previews are refetched.
  */
 export function useUpdateCriteria(projectId: string, options: { onSuccess?: (saved: ProjectCriteriaDto) => void } = {}) {
   const queryClient = useQueryClient();
@@ -35,6 +38,8 @@ export function useUpdateCriteria(projectId: string, options: { onSuccess?: (sav
         queryClient.invalidateQueries({ queryKey: queryKeys.criteria.screenings() }),
         // The project's comparison carries margins computed against the criteria (studies feature's key).
         queryClient.invalidateQueries({ queryKey: queryKeys.comparison(projectId) }),
+        // A summary preview states the criteria and whether their bases stand confirmed (review feature's keys).
+        queryClient.invalidateQueries({ queryKey: queryKeys.reviews.all() }),
       ]);
       options.onSuccess?.(saved);
     },

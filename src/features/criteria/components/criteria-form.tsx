@@ -1,9 +1,9 @@
-import { useEffect, useMemo, useRef } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { evaluateCriteria, type EvaluatedCriteria } from "@shared/criteria/evaluate-criteria";
 import { TERRAIN_CATEGORIES, TERRAIN_CATEGORY_IDS, type TerrainCategory } from "@shared/criteria/terrain-categories";
 import { formatStudyIssues } from "@shared/schemas/study";
-import { PHENOMENA, projectCriteriaSchema, type ProjectCriteria, type ProjectCriteriaDto } from "@shared/schemas/criteria";
+import { PHENOMENA, projectCriteriaSchema, type Phenomenon, type ProjectCriteria, type ProjectCriteriaDto } from "@shared/schemas/criteria";
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field } from "@/components/ui/field";
@@ -65,6 +65,7 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
     mode: "onTouched",
   });
   const update = useUpdateCriteria(projectId, { onSuccess: onSaved });
+  const [confirmBases, setConfirmBases] = useState<readonly Phenomenon[]>([]);
   const values = useWatch({ control }) as CriteriaFormValues;
   const preview = usePreview(values);
   const firstField = useRef<HTMLInputElement | null>(null);
@@ -89,7 +90,7 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
       noValidate
       aria-label="Edit the design wind and criteria"
       className="space-y-4"
-      onSubmit={handleSubmit((criteria) => update.mutate({ criteria, baseVersion: current.version }))}
+      onSubmit={handleSubmit((criteria) => update.mutate({ criteria, baseVersion: current.version, confirmBases: [...confirmBases] }))}
     >
       {conflict ? (
         <ErrorPanel
@@ -265,7 +266,18 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
         </legend>
         <div className="grid gap-3 xl:grid-cols-2">
           {PHENOMENA.map((phenomenon) => (
-            <RequirementFields key={phenomenon} phenomenon={phenomenon} control={control} register={register} errors={errors} />
+            <RequirementFields
+              key={phenomenon}
+              phenomenon={phenomenon}
+              control={control}
+              register={register}
+              errors={errors}
+              status={current.bases?.[phenomenon] ?? null}
+              confirm={confirmBases.includes(phenomenon)}
+              onConfirmChange={(on) =>
+                setConfirmBases((list) => (on ? [...list, phenomenon] : list.filter((p) => p !== phenomenon)))
+              }
+            />
           ))}
         </div>
       </fieldset>
@@ -285,7 +297,7 @@ export function CriteriaForm({ projectId, current, onSaved, onCancel, onReload }
         <Button variant="secondary" onClick={onCancel}>
           Cancel
         </Button>
-        {!isDirty ? <span className="text-sm text-ink-600">No changes yet.</span> : null}
+        {!isDirty && confirmBases.length === 0 ? <span className="text-sm text-ink-600">No changes yet.</span> : null}
       </div>
     </form>
   );

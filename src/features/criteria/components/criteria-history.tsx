@@ -1,10 +1,12 @@
 import { evaluateCriteria } from "@shared/criteria/evaluate-criteria";
-import type { ProjectCriteria } from "@shared/schemas/criteria";
+import { unconfirmedBases } from "@shared/criteria/basis-confirmation";
+import type { ProjectCriteria, ProjectCriteriaVersionDto } from "@shared/schemas/criteria";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { ApiError } from "@/lib/api-client";
 import { formatDateTime } from "@/lib/format";
 import { useCriteriaHistory } from "@/features/criteria/api/get-criteria-history";
+import { PHENOMENON_LABEL } from "@/features/criteria/components/phenomenon-labels";
 import { fixed, sig } from "@/features/criteria/utils/format";
 
 function windSummary(criteria: ProjectCriteria): string {
@@ -22,7 +24,21 @@ function windSummary(criteria: ProjectCriteria): string {
   return `v_b ${sig(wind.basicSpeed)} m/s · ${probability} · ${terrain} · z ${sig(wind.deckHeight)} m`;
 }
 
-/** Every saved version, newest first, with v_m and the flutter requirement recomputed from what was saved. */
+/** "all confirmed", or the phenomena whose basis stood unconfirmed in that version (a default text named as such). */
+function basesSummary(bases: ProjectCriteriaVersionDto["bases"]) {
+  const open = unconfirmedBases(bases);
+  if (open.length === 0) return <span className="text-ink-700">all confirmed</span>;
+  return (
+    <span className="text-caution-700">
+      not confirmed: {open.map((u) => `${PHENOMENON_LABEL[u.phenomenon].toLowerCase()}${u.defaultText ? " (default text)" : ""}`).join(", ")}
+    </span>
+  );
+}
+
+/**
+ * Every saved version, newest first, with v_m and the flutter requirement recomputed from what was saved, and
+ * whether every basis stood confirmed in it.
+ */
 export function CriteriaHistory({ projectId }: { projectId: string }) {
   const history = useCriteriaHistory(projectId);
   if (history.isPending) return <LoadingBlock label="Loading the saved versions…" className="min-h-16" />;
@@ -49,7 +65,8 @@ export function CriteriaHistory({ projectId }: { projectId: string }) {
             <th scope="col" className="py-1 pr-3 font-semibold">By</th>
             <th scope="col" className="py-1 pr-3 font-semibold">Wind inputs</th>
             <th scope="col" className="py-1 pr-3 text-right font-semibold normal-case">v_m</th>
-            <th scope="col" className="py-1 text-right font-semibold">Flutter required</th>
+            <th scope="col" className="py-1 pr-3 text-right font-semibold">Flutter required</th>
+            <th scope="col" className="py-1 font-semibold">Bases</th>
           </tr>
         </thead>
         <tbody>
@@ -66,9 +83,10 @@ export function CriteriaHistory({ projectId }: { projectId: string }) {
                 <td className="py-1.5 pr-3">{entry.savedBy?.name ?? "—"}</td>
                 <td className="num py-1.5 pr-3 text-ink-700">{windSummary(entry.criteria)}</td>
                 <td className="num py-1.5 pr-3 text-right whitespace-nowrap">{fixed(evaluated.designWind.meanSpeedMps, 2)} m/s</td>
-                <td className="num py-1.5 text-right whitespace-nowrap">
+                <td className="num py-1.5 pr-3 text-right whitespace-nowrap">
                   {fixed(evaluated.required.flutter.requiredSpeedMps, 2)} m/s
                 </td>
+                <td className="py-1.5">{basesSummary(entry.bases)}</td>
               </tr>
             );
           })}

@@ -1,5 +1,4 @@
 import { useEffect, useRef, useState } from "react";
-import type { ProjectCriteria, ProjectCriteriaDto } from "@shared/schemas/criteria";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { CautionsLine } from "@/components/ui/cautions";
@@ -10,85 +9,19 @@ import { formatDateTime } from "@/lib/format";
 import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { CriteriaForm } from "@/features/criteria/components/criteria-form";
 import { CriteriaHistory } from "@/features/criteria/components/criteria-history";
-import { DesignWindDerivation } from "@/features/criteria/components/design-wind-derivation";
-import { RequiredSpeedsTable } from "@/features/criteria/components/required-speeds-table";
-import { SourceList } from "@/features/criteria/components/source-badge";
-import { sig } from "@/features/criteria/utils/format";
+import { SavedView } from "@/features/criteria/components/saved-criteria-view";
 
 interface DesignWindPanelProps {
   projectId: string;
-  /** Analysts and administrators edit; reviewers and viewers read. The server enforces the same rule. */
+  /** Reviewers and administrators own the criteria; analysts and viewers read. The server enforces the same rule. */
   canEdit: boolean;
   className?: string;
 }
 
-function probabilityText(probability: ProjectCriteria["wind"]["probability"]): string {
-  switch (probability.kind) {
-    case "return-period":
-      return `return period ${sig(probability.years)} years`;
-    case "annual-probability":
-      return `annual probability of exceedance ${sig(probability.value)}`;
-    case "factor":
-      return `c_prob = ${sig(probability.value)} given: ${probability.basis}`;
-  }
-}
-
-function terrainText(terrain: ProjectCriteria["wind"]["terrain"]): string {
-  return terrain.kind === "category"
-    ? `category ${terrain.category} (EN 1991-1-4 Table 4.1)`
-    : `z0 = ${sig(terrain.roughnessLength)} m, z_min = ${sig(terrain.minimumHeight)} m (site values)`;
-}
-
-function SavedView({ dto }: { dto: ProjectCriteriaDto & { criteria: ProjectCriteria; evaluated: NonNullable<ProjectCriteriaDto["evaluated"]> } }) {
-  const { wind, notes } = dto.criteria;
-  const { designWind, required } = dto.evaluated;
-  return (
-    <div className="space-y-4">
-      <div className="grid gap-4 lg:grid-cols-[minmax(14rem,0.8fr)_minmax(0,2fr)]">
-        <section aria-label="Wind inputs">
-          <h3 className="mb-1 text-sm font-semibold tracking-wide text-ink-600 uppercase">Inputs</h3>
-          <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-[0.95rem]">
-            <dt className="text-ink-600">Basic wind speed v_b</dt>
-            <dd className="num" data-testid="basic-speed">{sig(wind.basicSpeed)} m/s</dd>
-            <dt className="text-ink-600">Probability</dt>
-            <dd>{probabilityText(wind.probability)}</dd>
-            <dt className="text-ink-600">Terrain</dt>
-            <dd>{terrainText(wind.terrain)}</dd>
-            <dt className="text-ink-600">Deck height z</dt>
-            <dd className="num">{sig(wind.deckHeight)} m</dd>
-            <dt className="text-ink-600">Orography c_o</dt>
-            <dd className="num">{sig(wind.orographyFactor)}</dd>
-          </dl>
-        </section>
-        <section aria-label="Design wind at deck level">
-          <DesignWindDerivation wind={designWind} />
-        </section>
-      </div>
-      <section aria-labelledby="required-speeds-heading" className="space-y-1">
-        <h3 id="required-speeds-heading" className="text-sm font-semibold tracking-wide text-ink-600 uppercase">
-          Required speeds
-        </h3>
-        <RequiredSpeedsTable required={required} meanSpeedMps={designWind.meanSpeedMps} />
-      </section>
-      {notes ? (
-        <section aria-label="Notes on the criteria">
-          <h3 className="text-sm font-semibold tracking-wide text-ink-600 uppercase">Notes</h3>
-          <p className="max-w-prose whitespace-pre-line text-ink-800">{notes}</p>
-        </section>
-      ) : null}
-      <details className="text-sm">
-        <summary className="w-fit cursor-pointer font-semibold text-tide-700 hover:underline">
-          Sources of the wind profile
-        </summary>
-        <SourceList sources={designWind.sources} className="mt-1" />
-      </details>
-    </div>
-  );
-}
-
 /**
  * The project's design wind at deck level and acceptance criteria: every factor with its clause, the required
- * speed per phenomenon with its basis, the saved versions, and the editor for analysts.
+ * speed per phenomenon with its basis and who stands behind it, the saved versions, and the editor for the criteria
+ * owners (reviewers and administrators).
  */
 export function DesignWindPanel({ projectId, canEdit, className }: DesignWindPanelProps) {
   const criteria = useCriteria(projectId);
@@ -177,15 +110,19 @@ export function DesignWindPanel({ projectId, canEdit, className }: DesignWindPan
               onReload={() => criteria.refetch()}
             />
           ) : criteria.data.criteria && criteria.data.evaluated ? (
-            <SavedView dto={{ ...criteria.data, criteria: criteria.data.criteria, evaluated: criteria.data.evaluated }} />
+            <SavedView
+              projectId={projectId}
+              canEdit={canEdit}
+              dto={{ ...criteria.data, criteria: criteria.data.criteria, evaluated: criteria.data.evaluated }}
+            />
           ) : (
             <p className="text-ink-700">
               No design wind recorded for this project yet
-              {canEdit ? "." : ": an analyst of the project sets it."} Without it no required speeds or margins can be shown.
+              {canEdit ? "." : ": a reviewer of the project or an administrator sets it."} Without it no required speeds or margins can be shown.
             </p>
           )}
           {!canEdit && criteria.data.version ? (
-            <p className="text-sm text-ink-600">Read-only: the project's analysts edit the criteria.</p>
+            <p className="text-sm text-ink-600">Read-only: the project's reviewers and administrators own the criteria.</p>
           ) : null}
           {showHistory ? (
             <section aria-labelledby="criteria-history-heading" className="space-y-1 border-t border-ink-100 pt-3">

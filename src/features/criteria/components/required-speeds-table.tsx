@@ -1,11 +1,26 @@
 import type { RequiredSpeeds } from "@shared/criteria/required-speeds";
-import { PHENOMENA } from "@shared/schemas/criteria";
+import { PHENOMENA, type BasisStatus, type Phenomenon } from "@shared/schemas/criteria";
+import { Button } from "@/components/ui/button";
+import { BasisStatusNote } from "@/features/criteria/components/basis-status-note";
 import { PHENOMENON_LABEL } from "@/features/criteria/components/phenomenon-labels";
 import { SourceBadge } from "@/features/criteria/components/source-badge";
 import { fixed, sig } from "@/features/criteria/utils/format";
 
-/** The speed each critical speed must reach: factor × gust × angle × v_m, with the basis of every factor. */
-export function RequiredSpeedsTable({ required, meanSpeedMps }: { required: RequiredSpeeds; meanSpeedMps: number }) {
+interface RequiredSpeedsTableProps {
+  required: RequiredSpeeds;
+  meanSpeedMps: number;
+  /** The saved version's basis states (who confirmed each); absent in the editor's preview. */
+  bases?: Record<Phenomenon, BasisStatus> | null;
+  /** Criteria owners confirm an unconfirmed basis as it stands (a new criteria version). */
+  onConfirm?: (phenomenon: Phenomenon) => void;
+  confirming?: Phenomenon | null;
+}
+
+/**
+ * The speed each critical speed must reach: factor × gust × angle × v_m, with the basis of every factor and, for a
+ * saved version, who stands behind it.
+ */
+export function RequiredSpeedsTable({ required, meanSpeedMps, bases, onConfirm, confirming = null }: RequiredSpeedsTableProps) {
   return (
     <div className="relative overflow-x-auto">
       <table className="w-full text-sm">
@@ -48,6 +63,22 @@ export function RequiredSpeedsTable({ required, meanSpeedMps }: { required: Requ
                       </li>
                     ))}
                   </ul>
+                  {bases ? (
+                    <div className="mt-1 flex flex-wrap items-center gap-2" data-testid={`basis-state-${phenomenon}`}>
+                      <BasisStatusNote status={bases[phenomenon]} />
+                      {onConfirm && !bases[phenomenon].confirmation ? (
+                        <Button
+                          size="sm"
+                          variant="secondary"
+                          isLoading={confirming === phenomenon}
+                          disabled={confirming !== null}
+                          onClick={() => onConfirm(phenomenon)}
+                        >
+                          Confirm the {PHENOMENON_LABEL[phenomenon].toLowerCase()} basis
+                        </Button>
+                      ) : null}
+                    </div>
+                  ) : null}
                 </td>
               </tr>
             );

@@ -10,6 +10,6 @@ export function addComment(revisionId: string, body: { body: string }): Promise<
 }
 
 export function useAddComment(revisionId: string) {
-  const invalidate = useInvalidateReview(revisionId);
+  const invalidate = useInvalidateReview();
   return useMutation({ mutationFn: (body: { body: string }) => addComment(revisionId, body), onSuccess: invalidate });
 }

@@ -15,6 +15,6 @@ export function reassignReviewer(revisionId: string, body: ReassignReviewerInput
 }
 
 export function useReassignReviewer(revisionId: string) {
-  const invalidate = useInvalidateReview(revisionId);
+  const invalidate = useInvalidateReview();
   return useMutation({ mutationFn: (body: ReassignReviewerInput) => reassignReviewer(revisionId, body), onSuccess: invalidate });
 }

@@ -10,6 +10,6 @@ export function returnRevision(revisionId: string, body: { comments: string }): 
 }
 
 export function useReturnRevision(revisionId: string) {
-  const invalidate = useInvalidateReview(revisionId);
+  const invalidate = useInvalidateReview();
   return useMutation({ mutationFn: (body: { comments: string }) => returnRevision(revisionId, body), onSuccess: invalidate });
 }

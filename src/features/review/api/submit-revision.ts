@@ -10,6 +10,6 @@ export function submitRevision(revisionId: string, body: { reviewerId: string; n
 }
 
 export function useSubmitRevision(revisionId: string) {
-  const invalidate = useInvalidateReview(revisionId);
+  const invalidate = useInvalidateReview();
   return useMutation({ mutationFn: (body: { reviewerId: string; note?: string }) => submitRevision(revisionId, body), onSuccess: invalidate });
 }

@@ -3,24 +3,33 @@ import { Link } from "react-router-dom";
 import { Button } from "@/components/ui/button";
 import { TextAreaField } from "@/components/ui/textarea-field";
 import { paths } from "@/config/paths";
+import { ApiError } from "@/lib/api-client";
 import { useReturnRevision } from "@/features/review/api/return-revision";
 import { useSignRevision } from "@/features/review/api/sign-revision";
 
 /**
- * A reviewer's decision on one revision: sign the stability summary with a statement, or return it with
- * comments. Both texts are required by the server; the form says so before sending.
+ * A reviewer's decision on one revision, below its summary preview: sign the stability summary with a statement, or
+ * return it with comments. Both texts are required by the server; the form says so before sending. The signature
+ * carries the hash of the preview shown above it, so the server signs exactly that or refuses.
  */
-export type ReviewDecision = { kind: "signed"; summaryId: string } | { kind: "returned" };
-
 export function ReviewDecisionForm({
   revisionId,
   revisionNumber,
-  onDecided,
+  previewSha256,
+  signBlocker,
+  onOutdated,
+  onSigned,
 }: {
   revisionId: string;
   revisionNumber: number;
-  /** Called after a successful decision (the queue shows it after the item has left the refreshed list). */
-  onDecided?: (decision: ReviewDecision) => void;
+  /** Hash of the summary preview on the page (sent with the signature). */
+  previewSha256: string;
+  /** Why signing is not possible now (unconfirmed criteria, not assigned, not in review); null when it is. */
+  signBlocker: string | null;
+  /** The server found the summary changed since the preview was loaded: load it again. */
+  onOutdated: () => void;
+  /** Called with the new summary's id once signed (the page then leaves the preview, which no longer exists). */
+  onSigned?: (summaryId: string) => void;
 }) {
   const [statement, setStatement] = useState("");
   const [comments, setComments] = useState("");
@@ -64,7 +73,16 @@ export function ReviewDecisionForm({
       statementRef.current?.focus();
       return;
     }
-    sign.mutate({ statement }, { onError: (e) => setProblem(e.message), onSuccess: (data) => onDecided?.({ kind: "signed", summaryId: data.summaryId }) });
+    sign.mutate(
+      { statement, previewSha256 },
+      {
+        onError: (e) => {
+          setProblem(e.message);
+          if (e instanceof ApiError && e.code === "preview_outdated") onOutdated();
+        },
+        onSuccess: (data) => onSigned?.(data.summaryId),
+      },
+    );
   };
   const onReturn = () => {
     clear();
@@ -73,7 +91,7 @@ export function ReviewDecisionForm({
       commentsRef.current?.focus();
       return;
     }
-    ret.mutate({ comments }, { onError: (e) => setProblem(e.message), onSuccess: () => onDecided?.({ kind: "returned" }) });
+    ret.mutate({ comments }, { onError: (e) => setProblem(e.message) });
   };
 
   return (
@@ -81,17 +99,23 @@ export function ReviewDecisionForm({
       <div className="space-y-2">
         <TextAreaField
           label="Reviewer's statement"
-          hint="Signed with the summary, word for word; the owner's representative reads it."
+          hint="Signed with the summary above, word for word; the owner's representative reads it."
           rows={4}
           maxLength={4000}
           ref={statementRef}
           error={statementError}
           value={statement}
+          disabled={signBlocker !== null}
           onChange={(e) => setStatement(e.target.value)}
         />
-        <Button variant="accent" onClick={onSign} isLoading={sign.isPending} disabled={busy}>
+        <Button variant="accent" onClick={onSign} isLoading={sign.isPending} disabled={busy || signBlocker !== null}>
           Sign the summary
         </Button>
+        {signBlocker ? (
+          <p className="text-sm font-semibold text-caution-700" data-testid="sign-blocker">
+            Cannot be signed now: {signBlocker}
+          </p>
+        ) : null}
       </div>
       <div className="space-y-2">
         <TextAreaField

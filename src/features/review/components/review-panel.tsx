@@ -14,7 +14,6 @@ import { useRevisionReview } from "@/features/review/api/get-revision-review";
 import { useProjectReviewers } from "@/features/review/api/get-project-reviewers";
 import { useSubmitRevision } from "@/features/review/api/submit-revision";
 import { ReassignForm } from "@/features/review/components/reassign-form";
-import { ReviewDecisionForm } from "@/features/review/components/review-decision-form";
 import { ReviewerSelect } from "@/features/review/components/reviewer-select";
 import { ReviewStateBadge } from "@/features/review/components/review-state-badge";
 
@@ -89,7 +88,8 @@ function CommentForm({ revisionId }: { revisionId: string }) {
 
 /**
  * The review of one revision, for the workspace: its state, who reviews it, the comments, and the actions the
- * caller's role allows (analysts submit; the assigned reviewer signs or returns; administrators reassign). Self-contained: it loads its
+ * caller's role allows (analysts submit; the assigned reviewer opens the summary preview to sign or return it;
+ * administrators reassign). Self-contained: it loads its
  * own data and can be mounted beside any revision.
  */
 export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = false }: ReviewPanelProps) {
@@ -107,7 +107,10 @@ export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = fal
     );
   }
   const review = query.data;
-  const canSubmit = (role === "analyst" || (isAdmin && role === null)) && (review.state === "draft" || review.state === "returned");
+  // A returned revision that a newer one supersedes is answered by the newer one, not submitted again.
+  const supersededReturn = review.state === "returned" && review.latestNumber > review.revisionNumber;
+  const canSubmit =
+    (role === "analyst" || (isAdmin && role === null)) && (review.state === "draft" || (review.state === "returned" && !supersededReturn));
   const inReview = review.state === "in-review";
   // Only the assigned reviewer decides; another reviewer of the project reads and comments.
   const assignedToMe = review.request?.reviewer.id === userId;
@@ -158,7 +161,20 @@ export function ReviewPanel({ revisionId, projectId, userId, role, isAdmin = fal
             </ol>
           )}
         </section>
-        {canDecide ? <ReviewDecisionForm revisionId={revisionId} revisionNumber={review.revisionNumber} /> : null}
+        {canDecide ? (
+          <p className="rounded-md border border-tide-600 bg-tide-50 px-3 py-2 text-ink-900">
+            You review this revision. Read its stability summary as it will be signed, then sign it or return it with comments:{" "}
+            <Link className="font-semibold text-tide-700 underline" to={paths.app.summaryPreview.getHref(revisionId)}>
+              Read the summary to sign or return
+            </Link>
+          </p>
+        ) : null}
+        {supersededReturn ? (
+          <p className="rounded-md bg-ink-100 px-3 py-2 text-sm text-ink-800">
+            Returned, and revision {review.latestNumber} supersedes it: revision {review.revisionNumber} is not submitted again. Submit
+            revision {review.latestNumber} from its page.
+          </p>
+        ) : null}
         {role === "reviewer" && inReview && !assignedToMe ? (
           <p className="text-sm text-ink-700">
             This revision is assigned to {review.request?.reviewer.name}: only they can sign or return it. An administrator can reassign the review.

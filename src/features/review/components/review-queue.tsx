@@ -8,8 +8,6 @@ import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { formatDateTime } from "@/lib/format";
 import { useReviewQueue } from "@/features/review/api/get-review-queue";
-import { useState } from "react";
-import { ReviewDecisionForm, type ReviewDecision } from "@/features/review/components/review-decision-form";
 
 const mps = (v: number | null) => (v === null ? "none found" : `${v.toFixed(1)} m/s`);
 
@@ -34,7 +32,7 @@ function MarginLine({ margin }: { margin: ComparisonMargin | undefined }) {
   );
 }
 
-function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (d: ReviewDecision) => void }) {
+function QueueItem({ item }: { item: ReviewQueueItemDto }) {
   const newer = item.latestNumber > item.revisionNumber;
   return (
     <Card
@@ -97,41 +95,22 @@ function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (
           Revision {item.latestNumber} of this study already exists; you are reviewing revision {item.revisionNumber}.
         </p>
       ) : null}
-      <ReviewDecisionForm revisionId={item.revisionId} revisionNumber={item.revisionNumber} onDecided={onDecided} />
+      <Link
+        className="inline-flex h-9 items-center rounded-md bg-tide-700 px-3.5 font-semibold text-white hover:bg-tide-600"
+        to={paths.app.summaryPreview.getHref(item.revisionId)}
+      >
+        Read the summary to sign or return
+      </Link>
     </Card>
   );
 }
 
-/** What was just decided here; it stays on the page after the refreshed queue no longer lists the revision. */
-function DecidedNotice({ item, decision }: { item: ReviewQueueItemDto; decision: ReviewDecision }) {
-  return (
-    <p
-      role="status"
-      className={
-        decision.kind === "signed"
-          ? "rounded-md border border-steady-100 bg-steady-100 px-3 py-2 text-steady-700"
-          : "rounded-md border border-ink-200 bg-ink-50 px-3 py-2 text-ink-700"
-      }
-    >
-      {item.studyName}: revision {item.revisionNumber}{" "}
-      {decision.kind === "signed" ? (
-        <>
-          is signed.{" "}
-          <Link className="font-semibold underline" to={paths.app.summary.getHref(decision.summaryId)}>
-            Open the signed summary
-          </Link>
-        </>
-      ) : (
-        "was returned to the analyst with your comments."
-      )}
-    </p>
-  );
-}
-
-/** The reviewer's queue: every revision waiting for their review, each with its decision form. */
+/**
+ * The reviewer's queue: every revision waiting for their review. A revision is signed (or returned) from its summary
+ * preview — the summary exactly as it will be signed — which each row links to.
+ */
 export function ReviewQueue() {
   const queue = useReviewQueue();
-  const [decided, setDecided] = useState<{ item: ReviewQueueItemDto; decision: ReviewDecision }[]>([]);
   if (queue.isPending) return <LoadingBlock label="Loading the revisions waiting for you…" />;
   if (queue.isError) {
     return (
@@ -144,21 +123,15 @@ export function ReviewQueue() {
       />
     );
   }
-  const decidedIds = new Set(decided.map((d) => d.item.revisionId));
-  const waiting = queue.data.filter((item) => !decidedIds.has(item.revisionId));
+  const waiting = queue.data;
   return (
     <div className="space-y-4">
-      {decided.map((d) => (
-        <DecidedNotice key={d.item.revisionId} {...d} />
-      ))}
       {waiting.length === 0 ? (
         <Card title="Nothing waiting">
           <p className="text-ink-700">No revision is waiting for your review. Analysts' submissions to you appear here.</p>
         </Card>
       ) : (
-        waiting.map((item) => (
-          <QueueItem key={item.revisionId} item={item} onDecided={(decision) => setDecided((list) => [{ item, decision }, ...list])} />
-        ))
+        waiting.map((item) => <QueueItem key={item.revisionId} item={item} />)
       )}
     </div>
   );

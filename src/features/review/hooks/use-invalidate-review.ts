@@ -1,15 +1,18 @@
-import { useQueryClient } from "@tanstack/react-query";
+import { useQueryClient, type QueryKey } from "@tanstack/react-query";
 import { queryKeys } from "@/lib/query-keys";
-import { getRevisionReviewQueryOptions } from "@/features/review/api/get-revision-review";
-import { getReviewQueueQueryOptions } from "@/features/review/api/get-review-queue";
 
-/** After a review write: the revision's review, the reviewer's queue and the summaries list are refetched. */
-export function useInvalidateReview(revisionId: string) {
+const sameKey = (a: QueryKey, b: QueryKey) => a.length === b.length && a.every((part, i) => part === b[i]);
+
+/**
+ * After a review write: every review query (the revision's review, the reviewer's queue, the summary previews, the
+ * review states of studies and projects) and the summaries list are refetched — except `keep`, a query the write
+ * has ended (the preview of a revision just signed no longer exists: asking again would only be refused).
+ */
+export function useInvalidateReview(keep?: QueryKey) {
   const queryClient = useQueryClient();
   return async () => {
     await Promise.all([
-      queryClient.invalidateQueries({ queryKey: getRevisionReviewQueryOptions(revisionId).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getReviewQueueQueryOptions().queryKey }),
+      queryClient.invalidateQueries({ queryKey: queryKeys.reviews.all(), predicate: (query) => !keep || !sameKey(query.queryKey, keep) }),
       queryClient.invalidateQueries({ queryKey: queryKeys.summaries.all() }),
     ]);
   };

@@ -1,11 +1,8 @@
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useMutation } from "@tanstack/react-query";
 import type { CreateRevisionInput, RevisionDto } from "@shared/schemas/revisions";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
-import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison";
-import { getRevisionQueryOptions } from "@/features/studies/api/get-revision";
-import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
-import { getStudyQueryOptions } from "@/features/studies/api/get-study";
+import { useRevisionSaved } from "@/features/studies/hooks/use-revision-saved";
 
 /**
  * Saves the edited document as the study's next revision; the server runs the sweep and stores the result. A
@@ -16,14 +13,9 @@ export function createRevision(studyId: string, input: CreateRevisionInput): Pro
 }
 
 export function useCreateRevision(studyId: string, projectId: string) {
-  const queryClient = useQueryClient();
+  const onSaved = useRevisionSaved(studyId, projectId);
   return useMutation({
     mutationFn: (input: CreateRevisionInput) => createRevision(studyId, input),
-    onSuccess: (revision) => {
-      queryClient.setQueryData(getRevisionQueryOptions(revision.id).queryKey, revision);
-      void queryClient.invalidateQueries({ queryKey: getStudyQueryOptions(studyId).queryKey });
-      void queryClient.invalidateQueries({ queryKey: getRevisionsQueryOptions(studyId).queryKey });
-      void queryClient.invalidateQueries({ queryKey: getComparisonQueryOptions(projectId).queryKey });
-    },
+    onSuccess: onSaved,
   });
 }

@@ -1,11 +1,8 @@
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useMutation } from "@tanstack/react-query";
 import type { RevisionDto } from "@shared/schemas/revisions";
 import { apiPaths } from "@/config/paths";
 import { api } from "@/lib/api-client";
-import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison";
-import { getRevisionQueryOptions } from "@/features/studies/api/get-revision";
-import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
-import { getStudyQueryOptions } from "@/features/studies/api/get-study";
+import { useRevisionSaved } from "@/features/studies/hooks/use-revision-saved";
 
 export interface ImportRevisionInput {
   file: File;
@@ -24,14 +21,9 @@ export function importRevision(studyId: string, input: ImportRevisionInput): Pro
 }
 
 export function useImportRevision(studyId: string, projectId: string) {
-  const queryClient = useQueryClient();
+  const onSaved = useRevisionSaved(studyId, projectId);
   return useMutation({
     mutationFn: (input: ImportRevisionInput) => importRevision(studyId, input),
-    onSuccess: (revision) => {
-      queryClient.setQueryData(getRevisionQueryOptions(revision.id).queryKey, revision);
-      void queryClient.invalidateQueries({ queryKey: getStudyQueryOptions(studyId).queryKey });
-      void queryClient.invalidateQueries({ queryKey: getRevisionsQueryOptions(studyId).queryKey });
-      void queryClient.invalidateQueries({ queryKey: getComparisonQueryOptions(projectId).queryKey });
-    },
+    onSuccess: onSaved,
   });
 }

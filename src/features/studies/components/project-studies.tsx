@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
 import type { AlternativeDto } from "@shared/schemas/alternatives";
 import type { ComparisonDto, ComparisonRow } from "@shared/schemas/comparison";
@@ -19,7 +20,12 @@ import { queryErrorPanel } from "@/features/studies/components/study-workspace";
  * The project's deck alternatives, each with its studies (latest critical speeds and margins against the
  * required speeds) and its aerodynamic data sets; the required speeds once the project has criteria.
  */
-export function ProjectStudies({ projectId, canEdit }: { projectId: string; canEdit: boolean }) {
+export function ProjectStudies({ projectId, canEdit, renderReviewState }: {
+  projectId: string;
+  canEdit: boolean;
+  /** The review state of a study's newest revision, in its row (the review feature's, composed in src/app). */
+  renderReviewState?: (studyId: string) => ReactNode;
+}) {
   const alternatives = useAlternatives(projectId);
   const comparison = useComparison(projectId);
 
@@ -40,7 +46,7 @@ export function ProjectStudies({ projectId, canEdit }: { projectId: string; canE
           <Card><p className="text-ink-700">No deck alternative yet.</p></Card>
         ) : (
           alternatives.data.map((alternative) => (
-            <AlternativeCard key={alternative.id} projectId={projectId} alternative={alternative} canEdit={canEdit}
+            <AlternativeCard key={alternative.id} projectId={projectId} alternative={alternative} canEdit={canEdit} renderReviewState={renderReviewState}
               rows={comparison.data?.rows.filter((r) => r.alternativeId === alternative.id) ?? null}
               comparisonError={comparison.isError ? comparison.error : null} />
           ))
@@ -77,8 +83,9 @@ function MarginText({ margin }: { margin: NonNullable<ComparisonRow["margins"]>[
   );
 }
 
-function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonError }: {
+function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonError, renderReviewState }: {
   projectId: string; alternative: AlternativeDto; canEdit: boolean; rows: ComparisonRow[] | null; comparisonError: Error | null;
+  renderReviewState?: (studyId: string) => ReactNode;
 }) {
   const datasets = useDatasets(alternative.id);
   return (
@@ -105,6 +112,7 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
                 <th scope="col" className="px-2 py-1.5 text-right font-semibold">Divergence</th>
                 <th scope="col" className="px-2 py-1.5 font-semibold">Flutter margin</th>
                 <th scope="col" className="px-2 py-1.5 font-semibold">Div. margin</th>
+                {renderReviewState ? <th scope="col" className="px-2 py-1.5 font-semibold">Review</th> : null}
               </tr>
             </thead>
             <tbody>
@@ -126,6 +134,7 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
                     </td>
                     <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.flutter} /></td>
                     <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.divergence} /></td>
+                    {renderReviewState ? <td className="px-2 py-1.5">{renderReviewState(row.studyId)}</td> : null}
                   </tr>
                 );
               })}

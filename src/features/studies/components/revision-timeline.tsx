@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
 import type { RevisionSummaryDto } from "@shared/schemas/revisions";
 import { paths } from "@/config/paths";
@@ -13,10 +14,12 @@ interface RevisionTimelineProps {
   fromId: string | null;
   toId: string | null;
   onPick: (side: "from" | "to", revisionId: string) => void;
+  /** Each revision's review state (the review feature's, composed in src/app). */
+  renderReviewState?: (revision: RevisionSummaryDto) => ReactNode;
 }
 
-/** Newest first: who saved what and why, with the critical speeds the server found; pick two to diff. */
-export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, onPick }: RevisionTimelineProps) {
+/** Newest first: who saved what and why, its review state, the critical speeds the server found; pick two to diff. */
+export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, onPick, renderReviewState }: RevisionTimelineProps) {
   return (
     <ol aria-label="Revisions, newest first" className="divide-y divide-ink-100">
       {revisions.map((revision) => {
@@ -33,6 +36,7 @@ export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, 
                 {" · "}
                 <time dateTime={revision.createdAt}>{formatDateTime(revision.createdAt)}</time>
               </p>
+              {renderReviewState ? <div>{renderReviewState(revision)}</div> : null}
               <p className="text-[0.95rem] text-ink-950">{revision.changeNote || <span className="text-ink-600 italic">No change note (first revision)</span>}</p>
               <p className="num text-sm">
                 <span className={critical.flutter ? "font-semibold text-signal-700" : "font-semibold text-steady-700"}>

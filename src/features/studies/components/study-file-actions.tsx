@@ -1,13 +1,16 @@
-import { useRef, type ChangeEvent } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { useRef, useState, type ChangeEvent } from "react";
 import { useNavigate } from "react-router-dom";
 import type { RevisionDto } from "@shared/schemas/revisions";
 import { ENGINE_VERSION } from "@shared/engine/version";
 import { Button } from "@/components/ui/button";
 import { apiPaths, paths } from "@/config/paths";
-import { ApiError } from "@/lib/api-client";
-import { useImportRevision } from "@/features/studies/api/import-revision";
+import { getRevisionQueryOptions } from "@/features/studies/api/get-revision";
+import { getRevisionsQueryOptions } from "@/features/studies/api/get-revisions";
 import { useRerunRevision } from "@/features/studies/api/rerun-revision";
-import { fieldLabel } from "@/features/studies/utils/format-value";
+import { ImportPreview } from "@/features/studies/components/import-preview";
+import { issuesOf, StudyIssueList } from "@/features/studies/components/study-issue-list";
+import { readStudyFile, type StudyFileReading } from "@/features/studies/utils/read-study-file";
 
 interface StudyFileActionsProps {
   projectId: string;
@@ -16,36 +19,44 @@ interface StudyFileActionsProps {
   canEdit: boolean;
 }
 
+/** A chosen study file: read in the browser, with the study's newest revision it would go on top of. */
+type Picked = { file: File } & ({ state: "reading" } | { state: "read"; reading: StudyFileReading; current: RevisionDto } | { state: "failed"; message: string });
+
 /**
  * The study as a file and the engine behind the stored result: download the revision's document, import a study
- * file as the next revision, and re-run a revision stored by an older engine.
+ * file as the next revision (after seeing what it changes and writing the change note), and re-run a revision stored
+ * by an older engine.
  */
 export function StudyFileActions({ projectId, studyId, revision, canEdit }: StudyFileActionsProps) {
   const fileInput = useRef<HTMLInputElement>(null);
   const navigate = useNavigate();
-  const importRevision = useImportRevision(studyId, projectId);
+  const queryClient = useQueryClient();
   const rerun = useRerunRevision(studyId, projectId);
-  const toRevision = (saved: RevisionDto) => navigate(paths.app.study.getHref(projectId, studyId, saved.number), { replace: true });
+  const [picked, setPicked] = useState<Picked | null>(null);
   const olderEngine = revision.engineVersion !== ENGINE_VERSION;
 
-  const onFile = (event: ChangeEvent<HTMLInputElement>) => {
+  /** The newest revision of the study (the one shown, or the newest of its list). */
+  const newestRevision = async (): Promise<RevisionDto> => {
+    if (revision.number === revision.latestNumber) return revision;
+    const list = await queryClient.fetchQuery(getRevisionsQueryOptions(studyId));
+    const newest = list.reduce((a, b) => (b.number > a.number ? b : a));
+    return queryClient.fetchQuery(getRevisionQueryOptions(newest.id));
+  };
+
+  const onFile = async (event: ChangeEvent<HTMLInputElement>) => {
     const file = event.target.files?.[0];
     event.target.value = "";
     if (!file) return;
-    importRevision.mutate(
-      { file, parentRevision: revision.latestNumber, changeNote: `Imported from the study file ${file.name}` },
-      { onSuccess: toRevision },
-    );
+    setPicked({ file, state: "reading" });
+    try {
+      const [reading, current] = await Promise.all([readStudyFile(file), newestRevision()]);
+      setPicked({ file, state: "read", reading, current });
+    } catch (error) {
+      setPicked({ file, state: "failed", message: error instanceof Error ? error.message : String(error) });
+    }
   };
 
-  const error = importRevision.error ?? rerun.error;
-  // The server lists each bad value of a study file with its JSON path; show each once, by the field's name.
-  const studyIssues =
-    error instanceof ApiError && Array.isArray(error.details)
-      ? (error.details as Array<{ path?: unknown; message?: unknown }>).flatMap((d) =>
-          typeof d?.path === "string" && d.path.startsWith("$") ? [{ path: d.path, message: String(d.message ?? "") }] : [],
-        )
-      : [];
+  const rerunIssues = issuesOf(rerun.error);
   return (
     <div className="space-y-2 text-sm">
       <div className="flex flex-wrap items-center gap-2">
@@ -56,8 +67,8 @@ export function StudyFileActions({ projectId, studyId, revision, canEdit }: Stud
         {canEdit ? (
           <>
             <input ref={fileInput} type="file" accept=".json,application/json" className="sr-only" tabIndex={-1}
-              aria-label="Study file to import" onChange={onFile} />
-            <Button size="sm" variant="secondary" isLoading={importRevision.isPending} onClick={() => fileInput.current?.click()}>
+              aria-label="Study file to import" onChange={(e) => void onFile(e)} />
+            <Button size="sm" variant="secondary" isLoading={picked?.state === "reading"} onClick={() => fileInput.current?.click()}>
               Import a study file…
             </Button>
           </>
@@ -67,31 +78,37 @@ export function StudyFileActions({ projectId, studyId, revision, canEdit }: Stud
         <p className="flex flex-wrap items-center gap-2 rounded-sm bg-caution-100 px-2 py-1 text-caution-700">
           Stored with engine {revision.engineVersion}; this release computes with engine {ENGINE_VERSION}.
           {canEdit ? (
-            <Button size="sm" variant="secondary" isLoading={rerun.isPending} onClick={() => rerun.mutate({ revisionId: revision.id, parentRevision: revision.latestNumber }, { onSuccess: toRevision })}>
+            <Button size="sm" variant="secondary" isLoading={rerun.isPending}
+              onClick={() => rerun.mutate({ revisionId: revision.id, parentRevision: revision.latestNumber }, {
+                onSuccess: (saved) => navigate(paths.app.study.getHref(projectId, studyId, saved.number), { replace: true }),
+              })}>
               Re-run as a new revision
             </Button>
           ) : null}
         </p>
       ) : null}
-      {error ? (
+      {picked?.state === "read" && picked.reading.ok ? (
+        <ImportPreview projectId={projectId} studyId={studyId} current={picked.current} file={picked.file}
+          study={picked.reading.study} onClose={() => setPicked(null)} />
+      ) : picked?.state === "read" || picked?.state === "failed" ? (
+        <div role="alert" className="space-y-1 rounded-md border border-signal-100 bg-signal-50 px-3 py-2 font-semibold text-signal-700">
+          <p>
+            {picked.file.name} cannot be imported:{" "}
+            {picked.state === "failed" ? picked.message : !picked.reading.ok ? picked.reading.problem : ""}. Nothing was uploaded.
+          </p>
+          {picked.state === "read" && !picked.reading.ok ? <StudyIssueList issues={picked.reading.issues} /> : null}
+          <Button size="sm" variant="secondary" onClick={() => setPicked(null)}>Dismiss</Button>
+        </div>
+      ) : null}
+      {rerun.error ? (
         <div role="alert" className="font-semibold text-signal-700">
-          {studyIssues.length > 0 ? (
+          {rerunIssues.length > 0 ? (
             <>
-              <p>
-                {importRevision.error ? "The study file was not imported" : "The revision was not re-run"} ({studyIssues.length}{" "}
-                problem{studyIssues.length === 1 ? "" : "s"}); nothing was stored.
-              </p>
-              <ul className="list-disc pl-5 font-normal text-ink-900">
-                {studyIssues.slice(0, 10).map((d, i) => (
-                  <li key={i}>
-                    {fieldLabel(d.path)}: {d.message} <code className="text-xs text-ink-600">{d.path}</code>
-                  </li>
-                ))}
-                {studyIssues.length > 10 ? <li>… and {studyIssues.length - 10} more</li> : null}
-              </ul>
+              <p>The revision was not re-run ({rerunIssues.length} problem{rerunIssues.length === 1 ? "" : "s"}); nothing was stored.</p>
+              <StudyIssueList issues={rerunIssues} />
             </>
           ) : (
-            <p>{error.message}</p>
+            <p>{rerun.error.message}</p>
           )}
         </div>
       ) : null}

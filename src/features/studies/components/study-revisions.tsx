@@ -1,4 +1,5 @@
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
+import type { RevisionSummaryDto } from "@shared/schemas/revisions";
 import { Link } from "react-router-dom";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -12,7 +13,12 @@ import { RevisionTrend } from "@/features/studies/components/revision-trend";
 import { queryErrorPanel } from "@/features/studies/components/study-workspace";
 
 /** The study's history: timeline, field-by-field diff of any two revisions, and the trend of critical speeds. */
-export function StudyRevisions({ projectId, studyId }: { projectId: string; studyId: string }) {
+export function StudyRevisions({ projectId, studyId, renderReviewState }: {
+  projectId: string;
+  studyId: string;
+  /** Each revision's review state in the timeline (composed in src/app). */
+  renderReviewState?: (revision: RevisionSummaryDto) => ReactNode;
+}) {
   const study = useStudy(studyId);
   const revisions = useRevisions(studyId);
   const [picked, setPicked] = useState<{ from: string | null; to: string | null }>({ from: null, to: null });
@@ -46,7 +52,8 @@ export function StudyRevisions({ projectId, studyId }: { projectId: string; stud
         <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
           <Card title="Timeline" subtitle="Newest first" flush>
             <RevisionTimeline projectId={projectId} studyId={studyId} revisions={list} fromId={fromId} toId={toId}
-              onPick={(side, id) => setPicked((p) => ({ from: p.from ?? fromId, to: p.to ?? toId, [side]: id }))} />
+              onPick={(side, id) => setPicked((p) => ({ from: p.from ?? fromId, to: p.to ?? toId, [side]: id }))}
+              renderReviewState={renderReviewState} />
           </Card>
           <div className="space-y-4">
             <Card title="Critical speed by revision">

@@ -1,7 +1,8 @@
 import type { UseQueryResult } from "@tanstack/react-query";
-import { useEffect, useState } from "react";
+import { useEffect, useState, type ReactNode } from "react";
 import { Link, useSearchParams } from "react-router-dom";
 import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
+import type { RevisionDto } from "@shared/schemas/revisions";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { PageHeader } from "@/components/ui/page-header";
@@ -25,6 +26,8 @@ interface StudyWorkspaceProps {
   criteria: UseQueryResult<ProjectCriteriaDto>;
   renderChecks?: StudyEditorProps["renderChecks"];
   renderFullWidth?: StudyEditorProps["renderFullWidth"];
+  /** The shown revision's review state, beside its number in the header (the review feature's, composed in src/app). */
+  renderRevisionState?: (revision: RevisionDto) => ReactNode;
 }
 
 export function queryErrorPanel(title: string, error: Error, retry: () => void, isRetrying: boolean) {
@@ -41,7 +44,7 @@ export function queryErrorPanel(title: string, error: Error, retry: () => void, 
 }
 
 /** Loads the study, the revision to start from (the latest, or `?revision=N`) and the data sets. */
-export function StudyWorkspace({ projectId, studyId, readOnly, criteria, renderChecks, renderFullWidth }: StudyWorkspaceProps) {
+export function StudyWorkspace({ projectId, studyId, readOnly, criteria, renderChecks, renderFullWidth, renderRevisionState }: StudyWorkspaceProps) {
   const [search] = useSearchParams();
   const wanted = Number(search.get("revision")) || null;
   const study = useStudy(studyId);
@@ -87,12 +90,15 @@ export function StudyWorkspace({ projectId, studyId, readOnly, criteria, renderC
       title={s.name}
       description={
         revision.data ? (
-          <span className="num">
-            Revision {revision.data.number}
-            {revision.data.number === revision.data.latestNumber ? " (latest)" : ` of ${revision.data.latestNumber} — an older revision`}
-            {" · "}
-            {revision.data.author?.name ?? "unknown author"}, {formatDateTime(revision.data.createdAt)}
-            {revision.data.changeNote ? ` · “${revision.data.changeNote}”` : ""}
+          <span className="inline-flex flex-wrap items-center gap-x-2">
+            <span className="num">
+              Revision {revision.data.number}
+              {revision.data.number === revision.data.latestNumber ? " (latest)" : ` of ${revision.data.latestNumber} — an older revision`}
+              {" · "}
+              {revision.data.author?.name ?? "unknown author"}, {formatDateTime(revision.data.createdAt)}
+              {revision.data.changeNote ? ` · “${revision.data.changeNote}”` : ""}
+            </span>
+            {renderRevisionState?.(revision.data)}
           </span>
         ) : (s.purpose || undefined)
       }

@@ -115,15 +115,12 @@ function Facts({ rows }: { rows: [string, ReactNode][] }) {
   );
 }
 
-/** The signed stability summary as the owner's representative reads it. */
-export function SummaryView({ summary }: { summary: SummaryDto }) {
+/** A signed summary's title, its currency banners and the in-browser check of its signature. */
+function SignedHead({ summary }: { summary: SummaryDto }) {
   const p = summary.payload;
   const verification = useSummaryVerification(summary.id, summary.jws, p);
-  const flutterRequired = p.criteria.find((c) => c.phenomenon === "flutter");
-  const aero = p.aerodynamicData;
-
   return (
-    <div className="space-y-4">
+    <>
       <PageHeader
         eyebrow={
           <>
@@ -147,6 +144,37 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
       />
       <Banners summary={summary} />
       <VerificationStatus verification={verification} code={summary.verificationCode} jwksUrl={summary.jwksUrl} />
+    </>
+  );
+}
+
+/**
+ * What a summary preview shows in place of a signed summary's head (title, currency, signature check) and of the
+ * reviewer's statement (the decision form, whose statement is signed with the summary).
+ */
+export interface SummaryPreviewSlots {
+  head: ReactNode;
+  decision: ReactNode;
+  /** A mark beside a criterion whose basis stands unconfirmed (signing is refused until it is confirmed). */
+  criterionNote?: (phenomenon: SummaryPayload["criteria"][number]["phenomenon"]) => ReactNode;
+}
+
+type SummaryViewProps =
+  | { summary: SummaryDto; preview?: undefined }
+  | { summary: Pick<SummaryDto, "id" | "payload" | "branches" | "branchSampling">; preview: SummaryPreviewSlots };
+
+/**
+ * The signed stability summary as the owner's representative reads it — or, with `preview`, the summary of a revision
+ * exactly as the server would sign it now, as the reviewer reads it before signing.
+ */
+export function SummaryView({ summary, preview }: SummaryViewProps) {
+  const p = summary.payload;
+  const flutterRequired = p.criteria.find((c) => c.phenomenon === "flutter");
+  const aero = p.aerodynamicData;
+
+  return (
+    <div className="space-y-4">
+      {preview ? preview.head : <SignedHead summary={summary} />}
 
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Figure
@@ -203,7 +231,8 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
                     = {c.factor}
                     {c.gustFactor ? ` × ${c.gustFactor}` : ""}
                     {c.angleFactor ? ` × ${c.angleFactor}` : ""} × v_m
-                  </span>
+                  </span>{" "}
+                  {preview?.criterionNote?.(c.phenomenon)}
                 </p>
                 <ul className="list-disc pl-5 text-sm text-ink-700">
                   {c.basis.map((b) => (
@@ -248,9 +277,13 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
         </Card>
       ) : null}
 
-      <Card title="Reviewer's statement" subtitle={`${p.signer.name} <${p.signer.email}> · signed ${formatDateTime(p.signedAt)}`}>
-        <p className="whitespace-pre-wrap text-ink-900">{p.statement}</p>
-      </Card>
+      {preview ? (
+        preview.decision
+      ) : (
+        <Card title="Reviewer's statement" subtitle={`${p.signer.name} <${p.signer.email}> · signed ${formatDateTime(p.signedAt)}`}>
+          <p className="whitespace-pre-wrap text-ink-900">{p.statement}</p>
+        </Card>
+      )}
     </div>
   );
 }

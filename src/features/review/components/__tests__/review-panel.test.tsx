@@ -16,6 +16,7 @@ function review(overrides: Partial<RevisionReviewDto> = {}): RevisionReviewDto {
   return {
     revisionId: "41",
     revisionNumber: 3,
+    latestNumber: 3,
     studyId: "7",
     projectId: "1",
     author: ANALYST,
@@ -73,7 +74,6 @@ describe("ReviewPanel", () => {
         current = review({ ...current, request: { ...current.request!, reviewer } });
         return json(200, current);
       }
-      if (url.endsWith("/sign")) return json(403, { error: { code: "forbidden", message: "nobody may sign their own revision" } });
       return json(404, { error: { code: "not_found", message: `unexpected ${url}` } });
     });
     vi.stubGlobal("fetch", fetchMock);
@@ -100,7 +100,7 @@ describe("ReviewPanel", () => {
     expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
   });
 
-  it("offers the reviewer sign and return on a revision in review, and shows the comments", async () => {
+  it("sends the assigned reviewer to the summary preview to sign or return, and shows the comments", async () => {
     current = review({
       state: "in-review",
       request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: null },
@@ -108,22 +108,26 @@ describe("ReviewPanel", () => {
     });
     renderPanel({ userId: REVIEWER.id, role: "reviewer" });
     expect(await screen.findByText("State the tested range.")).toBeInTheDocument();
-    expect(screen.getByRole("button", { name: "Sign the summary" })).toBeInTheDocument();
-    expect(screen.getByRole("button", { name: "Return with comments" })).toBeInTheDocument();
+    // Signing happens after reading the summary as it will be signed, never from this panel.
+    expect(screen.getByRole("link", { name: "Read the summary to sign or return" })).toHaveAttribute("href", "/reviews/41/summary");
+    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
     expect(screen.queryByRole("button", { name: "Submit for review" })).not.toBeInTheDocument();
+  });
 
-    // A statement is required before anything is sent; the server's refusal is shown as it comes.
-    fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
-    // Told on the statement field itself (its accessible description), not under the buttons.
-    const statementField = screen.getByLabelText("Reviewer's statement");
-    await waitFor(() => expect(statementField).toHaveAccessibleDescription(/Write your statement before signing/));
-    expect(statementField).toHaveAttribute("aria-invalid", "true");
-    expect(statementField).toHaveFocus();
-    expect(screen.queryByRole("alert")).not.toBeInTheDocument();
-    expect(fetchMock.mock.calls.some(([url]) => String(url).endsWith("/sign"))).toBe(false);
-    fireEvent.change(screen.getByLabelText("Reviewer's statement"), { target: { value: "Fine." } });
-    fireEvent.click(screen.getByRole("button", { name: "Sign the summary" }));
-    expect(await screen.findByText("nobody may sign their own revision")).toBeInTheDocument();
+  it("offers no resubmission of a returned revision that a newer revision supersedes, and says which to submit", async () => {
+    current = review({
+      state: "returned",
+      latestNumber: 5,
+      request: { reviewer: REVIEWER, requestedBy: ANALYST, note: "", submittedAt: "2026-12-02T09:00:00Z", decidedAt: "2026-12-03T09:00:00Z" },
+    });
+    renderPanel();
+    expect(await screen.findByText(/revision 5 supersedes it: revision 3 is not submitted again/)).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: /Submit/ })).not.toBeInTheDocument();
+    cleanup();
+
+    current = review({ ...current, latestNumber: 3 });
+    renderPanel();
+    expect(await screen.findByRole("button", { name: "Submit again for review" })).toBeInTheDocument();
   });
 
   it("gives a reviewer of the project who is not the assigned one no sign or return, and says who decides", async () => {
@@ -135,6 +139,7 @@ describe("ReviewPanel", () => {
     expect(await screen.findByText(/assigned to Mira Holloway: only they can sign or return it/)).toBeInTheDocument();
     expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
     expect(screen.queryByRole("button", { name: "Return with comments" })).not.toBeInTheDocument();
+    expect(screen.queryByRole("link", { name: "Read the summary to sign or return" })).not.toBeInTheDocument();
     expect(screen.queryByRole("button", { name: "Reassign the review" })).not.toBeInTheDocument();
     // Comments stay open to them.
     expect(screen.getByLabelText("Add a comment")).toBeInTheDocument();
@@ -163,7 +168,7 @@ describe("ReviewPanel", () => {
     });
     renderPanel({ userId: ANALYST.id, role: "reviewer" });
     expect(await screen.findByText("In review")).toBeInTheDocument();
-    expect(screen.queryByRole("button", { name: "Sign the summary" })).not.toBeInTheDocument();
+    expect(screen.queryByRole("link", { name: "Read the summary to sign or return" })).not.toBeInTheDocument();
     cleanup();
 
     current = review({

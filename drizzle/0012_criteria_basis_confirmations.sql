@@ -1,0 +1,1 @@
+ALTER TABLE "project_criteria" ADD COLUMN "basis_confirmations" jsonb DEFAULT '{}'::jsonb NOT NULL;
