@@ -8,6 +8,7 @@ export const WARNING_CODES = [
   "extrapolated-derivatives",
   "quasi-steady-flutter",
   "unstable-at-start",
+  "pk-fold",
   "static-instability",
   "tracking-ambiguous",
   "no-convergence",
