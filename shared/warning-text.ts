@@ -8,6 +8,8 @@ export const WARNING_EXPLANATIONS: Record<SweepWarningCode, string> = {
     "Quasi-steady aerodynamics give no torsional aerodynamic damping, so this flutter speed is likely far too low; use measured derivatives.",
   "unstable-at-start":
     "A pole is already undamped at the first speed, so the true critical speed lies at or below the start of the sweep; start lower.",
+  "pk-fold":
+    "The critical branch's damping jumps from positive to negative without passing through zero (a fold of the p-k solution), so the flutter point shown is the undamped point of the harmonic flutter determinant next to the jump.",
   "static-instability":
     "A real pole crosses zero: the deck loses its static stiffness (divergence-type instability) within the sweep, and above that speed it is statically unstable.",
   "tracking-ambiguous":
@@ -20,6 +22,7 @@ export const WARNING_TITLES: Record<SweepWarningCode, string> = {
   "extrapolated-derivatives": "Outside the tested range",
   "quasi-steady-flutter": "Flutter from quasi-steady data",
   "unstable-at-start": "Unstable at the first speed",
+  "pk-fold": "Fold of the p-k solution",
   "static-instability": "Static instability",
   "tracking-ambiguous": "Pole tracking ambiguous",
   "no-convergence": "Iteration not converged",

@@ -130,5 +130,6 @@ export function generalizedSystem(input: GeneralizedInput): GeneralizedSystem {
       }
     },
     isExtrapolated: (k) => input.aero.isExtrapolated(k),
+    reducedFrequencyKnots: input.aero.reducedVelocityKnots?.map((ur) => (2 * Math.PI) / ur),
   };
 }

@@ -68,5 +68,6 @@ export function sectionSystem(study: StudyDocument, aero: AeroModel): ModalSyste
       cae[aa] = c * b * b * p.kA2;
     },
     isExtrapolated: (k) => aero.isExtrapolated(k),
+    reducedFrequencyKnots: aero.reducedVelocityKnots?.map((ur) => (2 * Math.PI) / ur),
   };
 }

@@ -13,9 +13,10 @@ export interface WarningInputs {
 }
 
 const fmt = (speed: number) => `${Number(speed.toFixed(3))} m/s`;
+const pct = (ratio: number) => `${ratio >= 0 ? "+" : "−"}${Math.abs(100 * ratio).toFixed(2)} %`;
 
 /**
- * The warnings of a sweep result, in a fixed order: unstable-at-start, quasi-steady-flutter,
+ * The warnings of a sweep result, in a fixed order: unstable-at-start, pk-fold, quasi-steady-flutter,
  * static-instability (one warning for every physical static crossing, lowest first in `speeds`), extrapolated-derivatives (one per contiguous speed range, `speeds` = [first, last]),
  * tracking-ambiguous, no-convergence.
  *
@@ -30,6 +31,17 @@ export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
     warnings.push({
       code: "unstable-at-start",
       message: `Branch ${ids[flutter.branch]} is already unstable at the first speed ${fmt(flutter.speedMps)}; the flutter speed is at or below the start of the sweep. Start the sweep lower.`,
+      speeds: [flutter.speedMps],
+    });
+  }
+  if (flutter?.fold) {
+    const { fold } = flutter;
+    const jump = `On the branch that started as mode ${ids[flutter.branch]} the p-k solution folds at ${fmt(fold.speedMps)}: its damping ratio jumps from ${pct(fold.dampingBefore)} to ${pct(fold.dampingAfter)} without passing through zero.`;
+    warnings.push({
+      code: "pk-fold",
+      message: fold.located
+        ? `${jump} The flutter point reported is the neutral point of the harmonic flutter determinant det Z(U, ω) = 0 next to the fold, ${fmt(flutter.speedMps)} at ${(flutter.step.im / (2 * Math.PI)).toFixed(4)} Hz.`
+        : `${jump} No neutral point of the harmonic flutter determinant was found next to it, so the speed of the jump is reported; treat it as approximate.`,
       speeds: [flutter.speedMps],
     });
   }

@@ -9,6 +9,7 @@ export const WARNING_CODES = [
   "extrapolated-derivatives",
   "quasi-steady-flutter",
   "unstable-at-start",
+  "pk-fold",
   "static-instability",
   "tracking-ambiguous",
   "no-convergence",

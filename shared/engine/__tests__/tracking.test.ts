@@ -56,8 +56,10 @@ describe("pole tracking through a veering pair (f_α/f_h = 1.05)", () => {
   });
 
   it("does not swap branches: a 2 m/s grid follows the same branches as a 0.1 m/s grid", () => {
+    // compared at the 2 m/s grid speeds (the speeds where a branch passes a table row are visited too, on each grid)
+    const onGrid = (speed: number) => Math.abs((speed - 1) / 2 - Math.round((speed - 1) / 2)) < 1e-9;
     coarse.modes.forEach((mode, j) => {
-      for (const s of mode.steps) {
+      for (const s of mode.steps.filter((step) => onGrid(step.speed))) {
         const ref = fine.modes[j].steps.find((r) => Math.abs(r.speed - s.speed) < 1e-9)!;
         expect(ref, `speed ${s.speed} in the fine grid`).toBeDefined();
         expect(Math.hypot(ref.re - s.re, ref.im - s.im), `${mode.id} at ${s.speed} m/s`).toBeLessThan(1e-7 * Math.hypot(s.re, s.im));

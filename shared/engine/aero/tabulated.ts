@@ -77,7 +77,8 @@ export function createTabulatedModel(table: TabulatedAerodynamics): AeroModel {
     return out;
   }
 
-  const tolerance = 1e-12;
+  // a branch sitting on an end row (to the 1e-9 the tracker locates rows with) is not extrapolating
+  const tolerance = 1e-9;
   return {
     kind: "tabulated",
     products,
@@ -88,6 +89,7 @@ export function createTabulatedModel(table: TabulatedAerodynamics): AeroModel {
     },
     staticMomentSlope: table.staticMomentSlope ?? high.k2A3,
     reducedVelocityRange: [ur[0], ur[n - 1]],
+    reducedVelocityKnots: Array.from(ur),
   };
 }
 

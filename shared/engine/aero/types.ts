@@ -47,4 +47,6 @@ export interface AeroModel {
   readonly staticMomentSlope: number | null;
   /** Reduced-velocity range [min, max] of tabulated data; null for theoretical models. */
   readonly reducedVelocityRange: [number, number] | null;
+  /** Reduced velocities at which the model changes character (a table's rows); absent for closed-form models. */
+  readonly reducedVelocityKnots?: readonly number[];
 }

@@ -7,6 +7,8 @@
  *   A = [[0, I], [−M⁻¹(K_s − K_ae), −M⁻¹(C_s − C_ae)]];
  * a pole λ gives the frequency Im λ / 2π and the damping ratio ζ = −Re λ / |λ|.
  * Matrices are n×n, row-major, in consistent SI units (kg, N·s/m, N/m or their generalized equivalents).
+ * The self-excited forces have Scanlan's form: at fixed K, K_ae scales with U² and C_ae with U (the static and the
+ * harmonic determinants rely on it; `aeroPerUnitSpeed` checks it).
  */
 export interface ModalSystem {
   /** Number of structural degrees of freedom n. */
@@ -33,6 +35,11 @@ export interface ModalSystem {
   readonly hasAero: boolean;
   /** True when the aerodynamic data at K are held from the end of a table (extrapolated). Optional. */
   isExtrapolated?(reducedFrequency: number): boolean;
+  /**
+   * Reduced frequencies K at which the aerodynamic data change character (the rows of a table); the tracker visits
+   * the speed at which each branch passes each of them. Optional (none for closed-form models).
+   */
+  readonly reducedFrequencyKnots?: readonly number[];
 }
 
 /**

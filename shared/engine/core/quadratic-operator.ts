@@ -9,6 +9,7 @@ export interface PoleWorkspace {
   readonly stiffTot: Float64Array;
   /** C_s − C_ae at the last assembled (U, K). */
   readonly dampTot: Float64Array;
+  /** Spare real buffers of (n+1)² entries (scratch for determinant signs). */
   readonly jRe: Float64Array;
   readonly jIm: Float64Array;
   readonly rRe: Float64Array;

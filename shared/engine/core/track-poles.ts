@@ -6,9 +6,10 @@ import { normalizeModeVector } from "./mode-vector";
 import { createPkOutcome, solveBranchPk, type PkOutcome } from "./pk-branch";
 import { createPoleWorkspace } from "./quadratic-operator";
 import type { Pole } from "./refine-pole";
-import { settleStaticTransition } from "./static-transition";
 import { SweepStepLimitError } from "./step-limit-error";
-import { assessStep } from "./tracking-confidence";
+import { judgeStep, type JudgeContext, type StepJudgement } from "./judge-step";
+import { mustVisit } from "./must-visit";
+import { predict } from "./predict-pole";
 
 /** One solved speed of one tracked branch. */
 export interface TrackedStep {
@@ -56,10 +57,6 @@ export interface TrackOptions {
   readonly stepLimit?: number;
 }
 
-/** A step is accepted without refinement when every branch has at least this MAC and confidence. */
-const MIN_STEP_MAC = 0.9;
-const MIN_STEP_CONFIDENCE = 0.5;
-
 /**
  * Tracks every pole of an n-mode aeroelastic system through a sweep of wind speeds by the p-k method.
  *
@@ -73,7 +70,12 @@ const MIN_STEP_CONFIDENCE = 0.5;
  * pole that an optimal assignment (cost 1 − MAC + normalised predictor distance) gives it; the speed is then
  * reported as ambiguous if the verdict stays poor. Branches are never sorted by frequency. A branch whose pole
  * pair reaches the real axis (static branch) continues on the larger of the two real roots it splits into —
- * the root that can cross zero — and is then followed by continuity.
+ * the root that can cross zero — and is then kept on its own real root by the side of that root
+ * (`keepStaticContinuity`); close pairs with similar shapes are assigned by their discriminant (`resolveClosePairs`);
+ * both in `judgeStep`. So that no grid can hide what the data contain, a good step is not accepted while some branch
+ * passes a table row inside it (the row's speed is solved first, `nextKnotPassage`/`knotSpeed`) or the quadratic
+ * model of a branch's damping through its last two steps and the new one dips below zero inside it (the model's
+ * minimum is solved first, `dampingDip`) — docs/method-and-validation.md §3.
  * Notes: references for the strategy — Desforges, Cooper & Wright 1996 (Proc. IMechE G 210), Eldred, Venkayya
  * & Anderson 1995 (AIAA J. 33(7)), from memory. Refinement speeds are solved for every branch, so all
  * branches share the same list of speeds.
@@ -133,27 +135,21 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
     converged: o.converged,
     extrapolated: system.hasAero && speed > 0 && (system.isExtrapolated?.(o.reducedFrequency) ?? false),
   });
-  const accept = (steps: TrackedStep[], prev: Pole[], pred: Pole[], forced: boolean): boolean => {
-    settleStaticTransition(system, work, fullPoles, steps, prev);
-    const verdict = assessStep(n, mass, prev, pred, steps);
-    let good = verdict.identity;
-    for (let j = 0; j < n; j++) {
-      steps[j].mac = verdict.mac[j];
-      steps[j].confidence = verdict.confidence[j];
-      if (verdict.mac[j] < MIN_STEP_MAC || verdict.confidence[j] < MIN_STEP_CONFIDENCE || !steps[j].converged) {
-        good = false;
-      }
-    }
-    if (!good && !forced) return false;
+  const context: JudgeContext = { system, work, fullPoles, branches, sides: new Int8Array(n), nextSides: new Int8Array(n) };
+  const commit = (steps: TrackedStep[], judged: StepJudgement, forced: boolean) => {
     for (let j = 0; j < n; j++) branches[j].push(steps[j]);
-    if (forced && !good) {
-      const speed = steps[0].speedMps;
-      if (!verdict.identity || steps.some((s) => s.mac < MIN_STEP_MAC || s.confidence < MIN_STEP_CONFIDENCE)) {
-        ambiguousSpeeds.push(speed);
-      }
-      if (steps.some((s) => !s.converged)) noConvergenceSpeeds.push(speed);
+    context.sides.set(context.nextSides);
+    if (forced && !judged.good) {
+      if (judged.ambiguous) ambiguousSpeeds.push(steps[0].speedMps);
+      if (judged.notConverged) noConvergenceSpeeds.push(steps[0].speedMps);
     }
-    return true;
+  };
+  // one branch solved alone between two of its steps (locating a table row's speed, `mustVisit`)
+  const spare = createPkOutcome(n);
+  const solveBetween = (a: TrackedStep, b: TrackedStep, speed: number): TrackedStep => {
+    const t = (speed - a.speedMps) / (b.speedMps - a.speedMps);
+    const start = { re: a.re + t * (b.re - a.re), im: a.im + t * (b.im - a.im), vecRe: a.vecRe, vecIm: a.vecIm };
+    return toStep(solveBranchPk(system, work, speed, start, spare), speed);
   };
 
   // The sweep is entered from still air: a hidden lead-in from U = 0 up to the first speed, so that each branch
@@ -163,7 +159,7 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
   const stepLimit = options.stepLimit ?? Infinity;
   if (grid.length > stepLimit) throw new SweepStepLimitError(stepLimit, grid[0]);
   const first = solveRobust(grid[0], references, references);
-  accept(first, references, references, true);
+  commit(first, judgeStep(context, first, references, references, true), true);
 
   const maxSteps = options.maxSteps ?? 4 * grid.length + 2000;
   for (let g = 1; g < grid.length; g++) {
@@ -175,17 +171,29 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
       if (branches[0].length >= stepLimit) throw new SweepStepLimitError(stepLimit, last);
       const prev = branches.map((b) => b[b.length - 1]);
       const pred = branches.map((b) => predict(b, target));
-      if (accept(solveFast(target, prev, pred), prev, pred, false)) {
+      const steps = solveFast(target, prev, pred);
+      const judged = judgeStep(context, steps, prev, pred, false);
+      // Refine only while the budget keeps room for the pending targets and the rest of the grid.
+      const room = maxSteps - branches[0].length - targets.length - (grid.length - 1 - g);
+      const refinable = target - last > floor * 1.0000001 && room > 0;
+      if (judged.good) {
+        const visit = refinable ? mustVisit(system, branches, steps, solveBetween) : null;
+        // a visit right next to either end adds nothing (and would crowd the predictor's nodes)
+        const margin = 1e-4 * (target - last) + 1e-9 * Math.max(1, target);
+        if (visit !== null && visit - last > margin && target - visit > margin) {
+          targets.push(visit);
+          continue;
+        }
+        commit(steps, judged, false);
         targets.pop();
         continue;
       }
-      // Halve only while the budget keeps room for the pending targets and the rest of the grid.
-      const room = maxSteps - branches[0].length - targets.length - (grid.length - 1 - g);
-      if (target - last > floor * 1.0000001 && room > 0) {
+      if (refinable) {
         targets.push(last + (target - last) / 2);
         continue;
       }
-      accept(solveRobust(target, prev, pred), prev, pred, true);
+      const robust = solveRobust(target, prev, pred);
+      commit(robust, judgeStep(context, robust, prev, pred, true), true);
       targets.pop();
     }
   }
@@ -193,7 +201,6 @@ export function trackPoles(system: ModalSystem, speedsMps: readonly number[], op
   const visible = branches.map((b) => b.filter((s) => s.speedMps >= from));
   const atStart = (list: number[]) => [...new Set(list.map((u) => Math.max(u, from)))];
   return { branches: visible, ambiguousSpeeds: atStart(ambiguousSpeeds), noConvergenceSpeeds: atStart(noConvergenceSpeeds) };
-  return { branches, ambiguousSpeeds, noConvergenceSpeeds };
 }
 
 /**
@@ -206,25 +213,6 @@ function leadIn(speeds: readonly number[]): number[] {
   const gridStep = speeds.length > 1 ? speeds[1] - speeds[0] : from;
   const count = Math.min(200, Math.max(1, Math.ceil(from / gridStep)));
   return Array.from({ length: count }, (_, i) => (i * from) / count);
-}
-
-/** Quadratic (Lagrange) extrapolation of a branch's pole in U from its last three steps. */
-function predict(steps: TrackedStep[], speed: number): Pole {
-  const count = Math.min(3, steps.length);
-  const pts = steps.slice(steps.length - count);
-  let re = 0;
-  let im = 0;
-  for (let a = 0; a < count; a++) {
-    let w = 1;
-    for (let c = 0; c < count; c++) {
-      if (c !== a) w *= (speed - pts[c].speedMps) / (pts[a].speedMps - pts[c].speedMps);
-    }
-    re += w * pts[a].re;
-    im += w * pts[a].im;
-  }
-  const last = steps[steps.length - 1];
-  if (last.im === 0) im = 0;
-  return { re, im, vecRe: last.vecRe, vecIm: last.vecIm };
 }
 
 function copyPole(p: Pole, n: number): Pole {

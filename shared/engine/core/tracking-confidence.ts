@@ -16,6 +16,10 @@ export interface StepAssessment {
   readonly confidence: Float64Array;
   /** True when the optimal assignment of new to previous vectors is the identity (no branch swapped). */
   readonly identity: boolean;
+  /** The optimal assignment: the new pole assigned to each previous branch. */
+  readonly assignment: Int32Array;
+  /** Shape separation s_mac of each branch (1: its new shape is clearly distinct from every other new shape). */
+  readonly separation: Float64Array;
 }
 
 /**
@@ -56,6 +60,7 @@ export function assessStep(
   for (let i = 0; i < b; i++) if (assign[i] !== i) identity = false;
   const mac = new Float64Array(b);
   const confidence = new Float64Array(b);
+  const separation = new Float64Array(b);
   for (let j = 0; j < b; j++) {
     const self = macs[j * b + j];
     let other = 0;
@@ -79,9 +84,10 @@ export function assessStep(
       sPred = nearest ? 1 : 0;
     }
     mac[j] = self;
+    separation[j] = sMac;
     confidence[j] = self * Math.max(sMac, sPred);
   }
-  return { mac, confidence, identity };
+  return { mac, confidence, identity, assignment: assign, separation };
 }
 
 function clamp01(x: number): number {

@@ -21,6 +21,15 @@ const div = (a: C, b: C): C => {
  * imaginary part changes sign (Theodorsen's classical approach of solving the determinant for real (U, ω)).
  */
 export function determinantFlutterSpeed(study: StudyDocument, aero: AeroModel, kRange: [number, number]): number | null {
+  return determinantFlutterPoint(study, aero, kRange)?.speed ?? null;
+}
+
+/** As `determinantFlutterSpeed`, with the frequency ω/2π = K U/(2πB) of the lowest neutral point (Hz). */
+export function determinantFlutterPoint(
+  study: StudyDocument,
+  aero: AeroModel,
+  kRange: [number, number],
+): { speed: number; frequency: number } | null {
   const B = study.deck.width;
   const rho = study.air.density;
   const heave = study.structure.modes.find((m) => m.dof === "heave")!;
@@ -45,7 +54,7 @@ export function determinantFlutterSpeed(study: StudyDocument, aero: AeroModel, k
   };
   const ks: number[] = [];
   for (let i = 0; i <= 400; i++) ks.push(kRange[0] * (kRange[1] / kRange[0]) ** (i / 400));
-  let best: number | null = null;
+  let best: { speed: number; frequency: number } | null = null;
   let previous = roots(ks[0]);
   for (let i = 1; i < ks.length; i++) {
     const current = matchRoots(previous, roots(ks[i]));
@@ -67,7 +76,7 @@ export function determinantFlutterSpeed(study: StudyDocument, aero: AeroModel, k
         } else hi = mid;
       }
       const speed = rootLo[0];
-      if (best === null || speed < best) best = speed;
+      if (best === null || speed < best.speed) best = { speed, frequency: (lo * speed) / (2 * Math.PI * B) };
     }
     previous = current;
   }
