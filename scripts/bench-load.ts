@@ -7,9 +7,9 @@
  *
  * Signs in as the demo analyst (--email, --password), then:
  *   1. /api/health latency at rest (20 calls);
- *   2. a sweep that reaches the server's limit on solved speeds (an extreme but valid deck, 20,001 grid speeds),
+ *   2. a sweep that reaches the server's limit on solved speeds (a 10,000-row table, 20,001 grid speeds),
  *      with /api/health polled every 50 ms while it runs: every latency, the answer's status, size and time;
- *   3. the largest sweep under the limit (8,001 grid speeds, about 34,000 solved): answer size plain and gzip;
+ *   3. the largest sweep under the limit (10,001 grid speeds, about 26,000 solved): answer size plain and gzip;
  *   4. with --write: that study saved as a revision in a new invented alternative of the first project the
  *      analyst may write, then read back (size, time) while /api/health is polled, and its full step table
  *      downloaded as CSV;
@@ -19,7 +19,7 @@
  */
 import { request } from "node:http";
 import { gzipSync } from "node:zlib";
-import { extremeDeck } from "../shared/engine/__tests__/support/extreme-deck";
+import { denseTableDeck } from "../shared/engine/__tests__/support/extreme-deck";
 import { runSweep } from "../shared/engine/run-sweep";
 import { decimateResult } from "../server/lib/decimate-result";
 
@@ -93,12 +93,12 @@ async function main(): Promise<void> {
   for (let i = 0; i < 20; i++) rest.push((await call("/api/health")).ms);
   report("health at rest", latencyFigures(rest));
 
-  const atLimit = extremeDeck({ step: 0.025 });
+  const atLimit = denseTableDeck(0.025);
   const heavy = await underLoad(() => call("/api/sweep", { body: atLimit, cookie }));
   report("sweep at the limit", { status: heavy.answer.status, seconds: round(heavy.answer.ms / 1000), answerBytes: heavy.answer.bytes.byteLength });
   report("health during that sweep", latencyFigures(heavy.health));
 
-  const largest = extremeDeck({ step: 0.0625 });
+  const largest = denseTableDeck(0.05);
   const plain = await call("/api/sweep", { body: largest, cookie });
   const packed = await call("/api/sweep", { body: largest, cookie, gzip: true });
   const solved = plain.status === 200 ? (JSON.parse(plain.bytes.toString()) as { sampling?: { solvedSteps: number } }).sampling?.solvedSteps : undefined;
@@ -125,7 +125,7 @@ async function main(): Promise<void> {
 }
 
 /** Saves `study` as a revision in a new invented alternative, reads it back under load, downloads its table. */
-async function revisionFigures(cookie: string, study: ReturnType<typeof extremeDeck>): Promise<void> {
+async function revisionFigures(cookie: string, study: ReturnType<typeof denseTableDeck>): Promise<void> {
   const projects = JSON.parse((await call("/api/projects", { cookie })).bytes.toString()) as { id: string }[];
   if (projects.length === 0) throw new Error("--write: the analyst is in no project");
   const alternative = await call(`/api/projects/${projects[0].id}/alternatives`, {

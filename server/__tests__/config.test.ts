@@ -58,7 +58,7 @@ describe("sweep pool and request limits", () => {
 
   it("reads the sweep pool's settings and the request timeouts, with their defaults", () => {
     const config = loadConfig(base);
-    expect(config.sweeps).toEqual({ workers: 2, computeLimitMs: 20_000, queueLimit: 8, queuePerUser: 3, maxWaitMs: 30_000, maxSolvedSteps: 40_000 });
+    expect(config.sweeps).toEqual({ workers: 2, computeLimitMs: 20_000, queueLimit: 8, queuePerUser: 3, maxWaitMs: 30_000, maxSolvedSteps: 30_000 });
     expect(config.http).toEqual({ headersTimeoutMs: 20_000, requestTimeoutMs: 60_000 });
     const tuned = loadConfig({ ...base, STILLSPAN_SWEEP_WORKERS: "4", STILLSPAN_SWEEP_QUEUE: "0", STILLSPAN_SWEEP_MAX_SOLVED_STEPS: "90000", STILLSPAN_REQUEST_TIMEOUT_MS: "5000", STILLSPAN_HEADERS_TIMEOUT_MS: "" });
     expect(tuned.sweeps).toMatchObject({ workers: 4, queueLimit: 0, maxSolvedSteps: 90_000 });

@@ -5,7 +5,7 @@
 import { gunzipSync } from "node:zlib";
 import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { extremeDeck } from "../../shared/engine/__tests__/support/extreme-deck.js";
+import { denseTableDeck } from "../../shared/engine/__tests__/support/extreme-deck.js";
 import { runSweep } from "../../shared/engine/run-sweep.js";
 import { parseStudy } from "../../shared/schemas/study.js";
 import { canonicalSha256Hex } from "../../server/lib/hash.js";
@@ -22,7 +22,7 @@ let projectId: number;
 let analyst: string;
 let reviewer: string;
 let viewer: string;
-/** A revision of a long sweep (about 34,000 solved speeds per branch) and its answer. */
+/** A revision of a long sweep (about 26,000 solved speeds per branch) and its answer. */
 let long: { id: string; body: any; bytes: number };
 
 beforeAll(async () => {
@@ -33,7 +33,7 @@ beforeAll(async () => {
   });
   [analyst, reviewer, viewer] = await Promise.all(["analyst", "reviewer", "viewer"].map((r) => signIn(base(), `${r}@stillspan.test`)));
   const { studyId } = await createAlternativeAndStudy(base(), analyst, projectId);
-  const study = { ...extremeDeck({ step: 0.0625 }), name: "Long sweep (invented)" };
+  const study = { ...denseTableDeck(0.05), name: "Long sweep (test only)" };
   const saved = await api(base(), `/api/studies/${studyId}/revisions`, { cookie: analyst, body: { parentRevision: 1, changeNote: "long sweep", study } });
   if (saved.status !== 201) throw new Error(`save: ${saved.status} ${JSON.stringify(saved.body)}`);
   const read = await rawRequest(base(), `/api/revisions/${saved.body.id}`, { cookie: reviewer });

@@ -1,7 +1,7 @@
 import { gunzipSync } from "node:zlib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { benchmarkDeck as benchmarkDeckInputs } from "../../shared/engine/__tests__/support/benchmark-deck.js";
-import { extremeDeck } from "../../shared/engine/__tests__/support/extreme-deck.js";
+import { denseTableDeck } from "../../shared/engine/__tests__/support/extreme-deck.js";
 import { runSweep } from "../../shared/engine/run-sweep.js";
 import { ENGINE_VERSION } from "../../shared/engine/version.js";
 import { sweepResultSchema } from "../../shared/schemas/result.js";
@@ -124,18 +124,18 @@ describe("POST /api/sweep", () => {
 
 describe("POST /api/sweep: bounded work and answers", () => {
   it("ends a sweep past the limit on solved speeds with 422 naming the limit and $.sweep.step", async () => {
-    // 20,001 grid speeds refining to about 82,000 solved speeds: over the default limit of 40,000.
-    const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: extremeDeck({ step: 0.025 }) });
+    // 20,001 grid speeds and the rows of a 10,000-row table: about 36,000 solved speeds, over the default limit of 30,000.
+    const res = await api(base(), "/api/sweep", { cookie: cookies.analyst, body: denseTableDeck(0.025) });
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe("sweep_too_large");
-    expect(res.body.error.message).toContain("more than 40,000 solved speeds");
+    expect(res.body.error.message).toContain("more than 30,000 solved speeds");
     expect(res.body.error.message).toContain("$.sweep.step");
-    expect(res.body.error.details).toEqual([expect.objectContaining({ path: "$.sweep.step", rule: "max_solved_steps", limit: 40_000 })]);
+    expect(res.body.error.details).toEqual([expect.objectContaining({ path: "$.sweep.step", rule: "max_solved_steps", limit: 30_000 })]);
   });
 
   it("answers a long sweep under 2 MB: thinned branches, the numbers of solved and shown steps, compressed on the wire", async () => {
-    // 8,001 grid speeds refined to about 34,000 solved speeds per branch (about 13 MB of JSON inline).
-    const study = extremeDeck({ step: 0.0625 });
+    // 10,001 grid speeds and the table rows: about 26,000 solved speeds per branch (about 10 MB of JSON inline).
+    const study = denseTableDeck(0.05);
     const res = await rawRequest(base(), "/api/sweep", { cookie: cookies.analyst, body: study, headers: { "Accept-Encoding": "gzip" } });
     expect(res.status).toBe(200);
     expect(res.headers["content-encoding"]).toBe("gzip");
@@ -165,7 +165,7 @@ describe("POST /api/sweep: bounded work and answers", () => {
 
   it("answers /api/health promptly every time while a sweep at the limit on solved speeds runs", async () => {
     let done = false;
-    const sweep = api(base(), "/api/sweep", { cookie: cookies.analyst, body: extremeDeck({ step: 0.025 }) }).finally(() => (done = true));
+    const sweep = api(base(), "/api/sweep", { cookie: cookies.analyst, body: denseTableDeck(0.025) }).finally(() => (done = true));
     const latenciesMs: number[] = [];
     while (!done) {
       const started = performance.now();

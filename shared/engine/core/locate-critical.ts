@@ -7,7 +7,6 @@ import { createPkOutcome, solveBranchPk } from "./pk-branch";
 import { createPoleWorkspace } from "./quadratic-operator";
 import type { TrackResult, TrackedStep } from "./track-poles";
 
-export { DAMPING_TOLERANCE } from "./damping";
 export { locateStaticCrossing, locateStaticCrossings } from "./static-crossings";
 
 /** Absolute tolerance of the critical-speed search, m/s (ten times finer than the 0.001 m/s reported). */

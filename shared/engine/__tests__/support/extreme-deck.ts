@@ -1,8 +1,10 @@
 import type { StudyDocument } from "../../../schemas/study";
+import { createFlatPlateModel } from "../../aero/flat-plate";
+import { benchmarkDeck } from "./benchmark-deck";
 
 /**
  * Extreme but valid inputs (mass ratio m/(ρB²) ≈ 2e-10, radius of gyration 1e-6 m on a 1,000 m deck) that make
- * the tracker refine at most intervals: about 10,000 solved speeds over this 2,001-speed grid, about 82,000 at
+ * the tracker refine at many intervals: about 3,100 solved speeds over this 2,001-speed grid, about 26,000 at
  * the format's finest grid (`sweep.step` 0.025 m/s over 0–500 m/s). Derivatives of the invented demo twin box
  * (the demo seed's table; invented data, used only to drive the tracker and the server's limits).
  */
@@ -41,3 +43,32 @@ const EXTREME: StudyDocument = {
   },
   sweep: { from: 0, to: 500, step: 0.25 },
 };
+
+/**
+ * The heaviest kind of valid study for the server's limits: the benchmark deck (docs/conventions.md §Benchmark deck)
+ * with Theodorsen's thin-plate derivatives tabulated at 10,000 rows (Ur 1–60, linear interpolation, 4 decimals).
+ * The tracker visits every table row each branch passes (docs/method-and-validation.md), so over 0–500 m/s each
+ * branch adds about 8,000 speeds to the grid: about 36,000 solved speeds at step 0.025 m/s (over the API's limit of
+ * 30,000) and about 26,000 at 0.05 m/s (under it), some seconds of computing either way. The document is ~0.7 MB.
+ */
+export function denseTableDeck(step: number): StudyDocument {
+  const rows = 10_000;
+  const plate = createFlatPlateModel();
+  const reducedVelocity: number[] = [];
+  const columns = { H1: [], H2: [], H3: [], H4: [], A1: [], A2: [], A3: [], A4: [] } as Record<
+    "H1" | "H2" | "H3" | "H4" | "A1" | "A2" | "A3" | "A4",
+    number[]
+  >;
+  const round = (v: number) => Math.round(v * 1e4) / 1e4;
+  for (let i = 0; i < rows; i++) {
+    const ur = round(1 + (59 * i) / (rows - 1));
+    reducedVelocity.push(ur);
+    const d = plate.derivatives((2 * Math.PI) / ur);
+    for (const key of Object.keys(columns) as (keyof typeof columns)[]) columns[key].push(round(d[key]));
+  }
+  return {
+    ...benchmarkDeck({ from: 0, to: 500, step }),
+    name: "Benchmark deck, thin plate tabulated at 10,000 rows (test only)",
+    aerodynamics: { model: "tabulated", interpolation: "linear", reducedVelocity, ...columns },
+  };
+}
