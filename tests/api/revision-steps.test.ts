@@ -69,7 +69,7 @@ describe("a stored revision of a long sweep", () => {
     const text = gunzipSync(gz.body).toString();
     const lines = text.trimEnd().split("\r\n");
     expect(lines).toHaveLength(2 * long.body.result.sampling.solvedSteps + 1);
-    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_VS1,participation_TS1,mac,confidence");
+    expect(lines[0]).toBe("branch,speed_m_s,frequency_hz,damping_ratio,re_rad_s,im_rad_s,participation_V1,participation_T1,mac,confidence");
     const plain = await rawRequest(base(), `/api/revisions/${long.id}/steps.csv`, { cookie: analyst });
     expect(plain.headers["content-encoding"]).toBeUndefined();
     expect(plain.body.toString()).toBe(text);
@@ -79,7 +79,7 @@ describe("a stored revision of a long sweep", () => {
     const res = await api(base(), `/api/revisions/${long.id}/steps.json`, { cookie: reviewer });
     expect(res.status).toBe(200);
     expect(res.body.engine).toBe(long.body.engineVersion);
-    expect(res.body.modes.map((m: { id: string }) => m.id)).toEqual(["VS1", "TS1"]);
+    expect(res.body.modes.map((m: { id: string }) => m.id)).toEqual(["V1", "T1"]);
     for (const [j, mode] of res.body.modes.entries()) {
       expect(mode.steps).toHaveLength(long.body.result.sampling.solvedSteps);
       const bySpeed = new Map(mode.steps.map((s: { speed: number }) => [s.speed, s]));
