@@ -56,6 +56,7 @@ export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
         "term of the static balance included (H3*, H4*, A4* as well as A3*), so it can differ from the closed-form divergence speed." +
         (more.length > 0 ? ` Further real poles cross zero at ${more.map(where).join(", ")}; the lowest speed governs.` : ""),
       speeds: staticCrossings.map((c) => c.speedMps),
+      branches: staticCrossings.map((c) => ids[c.branch]),
     });
   }
   for (const warning of extrapolatedRanges(track, ids, inputs.testedRange)) warnings.push(warning);

@@ -57,6 +57,10 @@ export const sweepWarningSchema = z.object({
     .string()
     .optional()
     .describe("extrapolated-derivatives: the structural mode id of the branch that left the tested range"),
+  branches: z
+    .array(z.string())
+    .optional()
+    .describe("static-instability: the structural mode id of the branch of each crossing in `speeds`, in the same order"),
   reducedVelocities: z
     .tuple([z.number(), z.number()])
     .optional()
