@@ -3,8 +3,8 @@
  * revision of the same study has been signed; it also tells when later revisions exist that are not signed.
  * Viewers (owner's representatives) read the summaries of their projects and nothing else.
  */
-import type { ProjectCriteria } from "../../shared/schemas/criteria.js";
 import type { SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
+import type { SignedSummaryPayload } from "../../shared/schemas/summary.js";
 import type { AppContext } from "../app-context.js";
 import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
@@ -24,19 +24,16 @@ import { verificationCode } from "../signing/verification-code.js";
 import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
-import { notifySigned } from "./review-mail.js";
+import { appLinks, notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
 import { buildSummaryPayload } from "./summary-payload.js";
 
-export const JWKS_PATH = "/.well-known/jwks.json";
-
 export interface RecordSignatureInput {
   revision: RevisionRow;
-  /** The revision's review request (in review), set to signed. */
-  requestId: number;
+  /** The revision's review request (in review), set to signed, and when it was submitted. */
+  request: { id: number; submittedAt: Date };
   projectName: string;
   alternativeName: string;
-  criteria: { version: number; criteria: ProjectCriteria };
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
@@ -44,18 +41,19 @@ export interface RecordSignatureInput {
 }
 
 /**
- * Inside the caller's transaction: builds the summary of the stored revision, signs it, stores the signature
- * (JWS, key id, payload, payload hash), marks the review signed, and records the history and audit events.
- * Used by the sign route and by the demo seed. Returns the summary id.
+ * Inside the caller's transaction: builds the summary of the stored revision (its current assessment, which the
+ * signature row names), signs it, stores the signature (JWS, key id, payload, payload hash, assessment), marks the
+ * review signed, and records the history and audit events. Used by the sign route and by the demo seed. Returns the
+ * summary id.
  */
 export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
   const { revision, signer, signedAt } = input;
-  const payload = await buildSummaryPayload(tx, {
+  const { payload, assessmentId } = await buildSummaryPayload(tx, {
     revision,
     projectName: input.projectName,
     alternativeName: input.alternativeName,
-    criteria: input.criteria.criteria,
-    signer: { name: signer.name, email: signer.email },
+    signer,
+    submittedAt: input.request.submittedAt,
     signedAt,
     statement: input.statement,
   });
@@ -69,8 +67,9 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     payload: signed.summary,
     payloadSha256,
     signedAt,
+    assessmentId,
   });
-  await decideReviewRequest(tx, input.requestId, "signed", signer.id, signedAt);
+  await decideReviewRequest(tx, input.request.id, "signed", signer.id, signedAt);
   await insertReviewEvent(tx, { revisionId: revision.id, kind: "signed", actorId: signer.id, note: input.statement, at: signedAt });
   await writeAudit(tx, {
     actorId: signer.id,
@@ -78,7 +77,7 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     objectType: "revision",
     objectId: revision.id,
     ip: input.ip,
-    details: { summaryId: id, kid: signed.kid, criteriaVersion: input.criteria.version, payloadSha256 },
+    details: { summaryId: id, kid: signed.kid, assessmentId, criteriaVersion: payload.assessment.computedFrom.criteriaVersion, payloadSha256 },
   });
   return id;
 }
@@ -125,10 +124,9 @@ export async function signRevision(
       assertAssignedReviewer(request, user, revision, "sign it");
       return recordSignature(tx, config, {
         revision: full,
-        requestId: request.id,
+        request,
         projectName: project.name,
         alternativeName: alternative.name,
-        criteria,
         signer,
         signedAt,
         statement,
@@ -144,12 +142,25 @@ export async function signRevision(
   return { summaryId: String(summaryId) };
 }
 
-function outcome(row: SignatureRow): SummaryListItemDto["outcome"] {
-  const statuses = row.payload.margins.map((m) => m.status);
+/** The checks of a signed summary with their status, in its order: format 2 from its assessment, format 1 as signed. */
+function checksOf(payload: SignedSummaryPayload): { phenomenon: string; status: string }[] {
+  if (payload.format === "stillspan.summary/1") return payload.margins;
+  const a = payload.assessment;
+  const margins = a.margins ? Object.entries(a.margins).map(([phenomenon, m]) => ({ phenomenon, status: m.status as string })) : [];
+  return [...margins, { phenomenon: "vortexOnset", status: a.vortexShedding.status }];
+}
+
+function outcome(payload: SignedSummaryPayload): SummaryListItemDto["outcome"] {
+  const statuses = checksOf(payload).map((m) => m.status);
   if (statuses.includes("fail")) return "fail";
   if (statuses.includes("undetermined")) return "undetermined";
   if (statuses.includes("investigate")) return "investigate";
   return "pass";
+}
+
+function flutterSpeedOf(payload: SignedSummaryPayload): number | null {
+  if (payload.format === "stillspan.summary/1") return payload.flutter?.speedMps ?? null;
+  return payload.assessment.flutter.found ? payload.assessment.flutter.speedMps : null;
 }
 
 /** GET /api/summaries — signed summaries of the caller's projects (every project for administrators). */
@@ -166,11 +177,11 @@ export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<Summ
     revisionNumber: r.revisionNumber,
     signer: { id: String(r.signerId), name: r.signerName },
     signedAt: r.signedAt.toISOString(),
-    flutterSpeedMps: r.payload.flutter?.speedMps ?? null,
-    outcome: outcome(r),
-    attention: r.payload.margins.flatMap((m) =>
+    flutterSpeedMps: flutterSpeedOf(r.payload),
+    outcome: outcome(r.payload),
+    attention: checksOf(r.payload).flatMap((m) =>
       m.status === "fail" || m.status === "undetermined" || m.status === "investigate" || m.status === "not-evaluated"
-        ? [{ phenomenon: m.phenomenon, status: m.status }]
+        ? [{ phenomenon: m.phenomenon, status: m.status as "fail" | "undetermined" | "investigate" | "not-evaluated" }]
         : [],
     ),
     current: r.currentSignatureId === r.id,
@@ -191,8 +202,11 @@ async function currentOf(db: DbOrTx, row: SignatureRow): Promise<SummaryDto["cur
   return current ? { id: String(current.id), revisionNumber: current.revisionNumber, signedAt: current.signedAt.toISOString() } : null;
 }
 
-/** GET /api/summaries/:id — the payload as signed, its JWS, and whether it is still current. */
-export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Promise<SummaryDto> {
+/**
+ * GET /api/summaries/:id — the payload as signed, its JWS, whether it is still current, and the absolute addresses
+ * of the public verification page and the keys.
+ */
+export async function getSummary(db: DbOrTx, config: Pick<Config, "publicUrl">, user: SessionUser, id: number): Promise<SummaryDto> {
   const row = await readableSignature(db, user, id);
   const revision = await findRevision(db, row.revisionId);
   return {
@@ -214,12 +228,18 @@ export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Pro
       steps: m.steps.map((s) => ({ speed: s.speed, frequency: s.frequency, damping: s.damping, re: s.re, im: s.im })),
     })),
     branchSampling: revision?.result.sampling ?? null,
-    jwksUrl: JWKS_PATH,
+    jwksUrl: appLinks.jwks(config.publicUrl),
+    verificationUrl: appLinks.verify(config.publicUrl, verificationCode(row.jws)),
   };
 }
 
-/** GET /api/summaries/:id/pdf — the PDF copy with the JWS and its verification code. */
-export async function getSummaryPdf(db: DbOrTx, user: SessionUser, id: number): Promise<{ pdf: Buffer; fileName: string }> {
+/** GET /api/summaries/:id/pdf — the PDF copy with its verification code, the page that checks it, and the JWS in an appendix. */
+export async function getSummaryPdf(
+  db: DbOrTx,
+  config: Pick<Config, "publicUrl">,
+  user: SessionUser,
+  id: number,
+): Promise<{ pdf: Buffer; fileName: string }> {
   const row = await readableSignature(db, user, id);
   const revision = await findRevision(db, row.revisionId);
   const current = await currentOf(db, row);
@@ -228,6 +248,8 @@ export async function getSummaryPdf(db: DbOrTx, user: SessionUser, id: number): 
     jws: row.jws,
     branches: revision?.result.modes ?? [],
     supersededBy: current ? { revisionNumber: current.revisionNumber } : null,
+    verificationUrl: appLinks.verify(config.publicUrl, verificationCode(row.jws)),
+    jwksUrl: appLinks.jwks(config.publicUrl),
   });
   const safe = `${row.studyName}-rev${row.revisionNumber}`.replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80);
   return { pdf, fileName: `stability-summary-${safe || row.id}.pdf` };

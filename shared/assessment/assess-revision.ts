@@ -18,6 +18,12 @@ import { assessVortexShedding } from "./assess-vortex-shedding";
 import { speedText, urText } from "./format";
 
 /**
+ * Version of the assessment's rules and wording. Raise it when they change: stored assessments stay as they are
+ * (a signed summary keeps the one it signed), and the next reader of a revision gets a new one.
+ */
+export const ASSESSOR_VERSION = "1";
+
+/**
  * What an assessment is computed from. Results stored for a revision besides its sweep (an angle-of-attack envelope,
  * amplitudes, a sensitivity study) join as further optional members, each listed in `computedFrom.results`, so that
  * a new result gives a new assessment.
@@ -127,6 +133,7 @@ export function assessRevision(input: AssessmentInput): Assessment {
   return {
     format: ASSESSMENT_FORMAT,
     computedFrom: {
+      assessor: ASSESSOR_VERSION,
       criteriaVersion: criteria?.version ?? null,
       results: [{ kind: "sweep", engineVersion: result.engine }],
     },

@@ -16,6 +16,7 @@ const statement = text(2000).describe("The figure in words, as every screen and 
 
 /** What an assessment was computed from; its key in storage (with the revision it belongs to). */
 export const assessmentSourceSchema = z.strictObject({
+  assessor: text(40).describe("Version of the assessment's own rules and wording (a new one assesses stored revisions again)"),
   criteriaVersion: z.number().int().positive().nullable().describe("Version of the project's criteria used; null: none saved yet"),
   results: z
     .array(

@@ -157,7 +157,6 @@ export async function listReviewQueue(db: DbOrTx, reviewerId: number) {
       note: reviewRequests.note,
       submittedAt: reviewRequests.submittedAt,
       changeNote: studyRevisions.changeNote,
-      critical: studyRevisions.critical,
       engineVersion: studyRevisions.engineVersion,
       documentSha256: studyRevisions.documentSha256,
     })

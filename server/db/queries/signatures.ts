@@ -1,4 +1,4 @@
-import { desc, eq, inArray, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, lt, sql } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
 import { alternatives, projects, signatures, studies, studyRevisions, users, type Signature } from "../schema/index.js";
 
@@ -28,6 +28,7 @@ const columns = {
   payload: signatures.payload,
   payloadSha256: signatures.payloadSha256,
   signedAt: signatures.signedAt,
+  assessmentId: signatures.assessmentId,
   revisionNumber: studyRevisions.number,
   studyId: studyRevisions.studyId,
   studyName: studies.name,
@@ -59,6 +60,27 @@ export async function findSignature(db: DbOrTx, id: number) {
 
 export async function findSignatureOfRevision(db: DbOrTx, revisionId: number) {
   const [row] = await selectSignatures(db).where(eq(signatures.revisionId, revisionId)).limit(1);
+  return row;
+}
+
+/** The signature of the study's newest signed revision numbered below `number` (what changed since it). */
+export async function findPreviousSignature(db: DbOrTx, studyId: number, number: number) {
+  const [row] = await selectSignatures(db)
+    .where(and(eq(studyRevisions.studyId, studyId), lt(studyRevisions.number, number)))
+    .orderBy(desc(studyRevisions.number))
+    .limit(1);
+  return row;
+}
+
+/**
+ * The signature whose verification code (the first 12 hex digits of SHA-256 over the JWS text) is `hex12`. Codes are
+ * not stored: PostgreSQL hashes each JWS (signatures are few: one per signed revision).
+ */
+export async function findSignatureByCode(db: DbOrTx, hex12: string) {
+  const [row] = await selectSignatures(db)
+    .where(sql`substr(encode(sha256(convert_to(${signatures.jws}, 'UTF8')), 'hex'), 1, 12) = ${hex12}`)
+    .orderBy(signatures.id)
+    .limit(1);
   return row;
 }
 

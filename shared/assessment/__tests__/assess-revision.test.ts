@@ -40,7 +40,7 @@ describe("assessRevision on the invented deck B", () => {
 
   it("is a valid stillspan.assessment/1 keyed by the criteria version and the sweep's engine", () => {
     expect(assessmentSchema.safeParse(a).success).toBe(true);
-    expect(a.computedFrom).toEqual({ criteriaVersion: 3, results: [{ kind: "sweep", engineVersion: resultB.engine }] });
+    expect(a.computedFrom).toEqual({ assessor: "1", criteriaVersion: 3, results: [{ kind: "sweep", engineVersion: resultB.engine }] });
   });
 
   it("states the engine's flutter point, within the tested range", () => {
