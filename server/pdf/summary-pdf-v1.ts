@@ -3,7 +3,6 @@
  * revision's assessment), printed exactly as it was signed: its critical speeds, margins, criteria, data provenance
  * and warnings.
  */
-import type { FigureMarker } from "../../shared/figures/figure-data.js";
 import type { SummaryPayloadV1 } from "../../shared/schemas/summary-v1.js";
 import { SUMMARY_CAUTIONS } from "../../shared/schemas/summary.js";
 import { explainWarningCode } from "../../shared/warning-text.js";
@@ -20,16 +19,6 @@ export function writeBodyV1(w: PdfWriter, s: SummaryPayloadV1): void {
   writeRequiredSpeeds(w, s.designWind, s.criteria);
   writeProvenance(w, s);
   writeWarnings(w, s);
-}
-
-/** The speeds format 1 marked on its plots: the flutter speed and the divergence speed inside the sweep. */
-export function markersV1(s: SummaryPayloadV1): FigureMarker[] {
-  return [
-    ...(s.flutter ? [{ kind: "flutter" as const, x: s.flutter.speedMps, run: 0, label: `flutter ${mps(s.flutter.speedMps)}` }] : []),
-    ...(s.divergence && s.divergence.speedMps <= s.sweep.toMps
-      ? [{ kind: "divergence-closed-form" as const, x: s.divergence.speedMps, run: 0, label: `divergence ${mps(s.divergence.speedMps)}` }]
-      : []),
-  ];
 }
 
 function writeCriticalSpeeds(w: PdfWriter, s: SummaryPayloadV1): void {

@@ -10,13 +10,13 @@
 import path from "node:path";
 import { decodeProtectedHeader } from "jose";
 import PDFDocument from "pdfkit";
-import { dampingFigureData, frequencyFigureData, type FigureMarker, type FigureRun, type LineFigureData } from "../../shared/figures/figure-data.js";
+import { dampingFigureData, frequencyFigureData, markersOfSummaryV1, type FigureMarker, type FigureRun, type LineFigureData } from "../../shared/figures/figure-data.js";
 import type { SignedSummaryPayload } from "../../shared/schemas/summary.js";
 import { projectRoot } from "../config.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { drawLineChart } from "./line-chart.js";
 import { PdfWriter, COLORS, FONTS } from "./pdf-writer.js";
-import { markersV1, writeBodyV1 } from "./summary-pdf-v1.js";
+import { writeBodyV1 } from "./summary-pdf-v1.js";
 import { writeBodyV2 } from "./summary-pdf-v2.js";
 
 export interface PdfBranch {
@@ -107,7 +107,7 @@ function writeHeader(w: PdfWriter, input: SummaryPdfInput, code: string): void {
 function writeCharts(w: PdfWriter, input: SummaryPdfInput): void {
   const s = input.summary;
   const runs: FigureRun[] = [{ name: "Result", branches: input.branches, assessment: s.format === "stillspan.summary/1" ? null : s.assessment }];
-  const legacy = s.format === "stillspan.summary/1" ? markersV1(s) : undefined;
+  const legacy = s.format === "stillspan.summary/1" ? markersOfSummaryV1(s) : undefined;
   const damping = dampingFigureData(runs, legacy);
   const frequency = frequencyFigureData(runs, legacy);
   const flutterFails = s.format !== "stillspan.summary/1" && s.assessment.margins?.flutter.status === "fail";

@@ -11,8 +11,7 @@ import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
 import { findCurrentCriteria } from "../db/queries/criteria.js";
-import { findAlternative } from "../db/queries/alternatives.js";
-import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
+import { listProjectsOfMember } from "../db/queries/projects.js";
 import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
 import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignature, findSignatureByJws, insertSignature, listSignatures, type SignatureRow } from "../db/queries/signatures.js";
@@ -26,14 +25,12 @@ import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
 import { appLinks, notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
-import { buildSummaryPayload } from "./summary-payload.js";
+import { summaryPayloadOfRevision } from "./summary-payload.js";
 
 export interface RecordSignatureInput {
-  revision: RevisionRow;
-  /** The revision's review request (in review), set to signed, and when it was submitted. */
-  request: { id: number; submittedAt: Date };
-  projectName: string;
-  alternativeName: string;
+  revision: Pick<RevisionRow, "id">;
+  /** The revision's review request (in review), set to signed. */
+  request: { id: number };
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
@@ -48,15 +45,7 @@ export interface RecordSignatureInput {
  */
 export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
   const { revision, signer, signedAt } = input;
-  const { payload, assessmentId } = await buildSummaryPayload(tx, {
-    revision,
-    projectName: input.projectName,
-    alternativeName: input.alternativeName,
-    signer,
-    submittedAt: input.request.submittedAt,
-    signedAt,
-    statement: input.statement,
-  });
+  const { payload, assessmentId } = await summaryPayloadOfRevision(tx, revision.id, signer, { signedAt, statement: input.statement });
   const signed = await signStabilitySummary(config, payload);
   const payloadSha256 = canonicalSha256Hex(signed.summary);
   const id = await insertSignature(tx, {
@@ -98,13 +87,8 @@ export async function signRevision(
   const revision = await revisionFor(db, user, revisionId, ["reviewer"]);
   await assertReviewer(db, user, revision, "sign a revision");
   const full = await findRevision(db, revisionId);
-  const [project, alternative, criteria, signer] = await Promise.all([
-    findProjectById(db, revision.projectId, user.id),
-    findAlternative(db, revision.alternativeId),
-    findCurrentCriteria(db, revision.projectId),
-    findUserById(db, user.id),
-  ]);
-  if (!full || !project || !alternative || !signer) throw AppError.notFound("Revision");
+  const [criteria, signer] = await Promise.all([findCurrentCriteria(db, revision.projectId), findUserById(db, user.id)]);
+  if (!full || !signer) throw AppError.notFound("Revision");
   if (!criteria) {
     throw AppError.conflict(
       "The project has no design wind and criteria yet: the summary states the required speeds and margins, so an analyst must save the criteria first.",
@@ -125,8 +109,6 @@ export async function signRevision(
       return recordSignature(tx, config, {
         revision: full,
         request,
-        projectName: project.name,
-        alternativeName: alternative.name,
         signer,
         signedAt,
         statement,

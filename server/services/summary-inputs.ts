@@ -6,6 +6,7 @@
 import type { DerivativeConventionInput } from "../../shared/schemas/datasets.js";
 import type { StudyAerodynamics, StudyDocument } from "../../shared/schemas/study.js";
 import { STUDY_CONVENTIONS, type SummaryInputs } from "../../shared/schemas/summary.js";
+import { derivedQuantities } from "../../shared/study-derived-quantities.js";
 import type { listDatasets } from "../db/queries/datasets.js";
 
 type Dataset = Awaited<ReturnType<typeof listDatasets>>[number];
@@ -90,22 +91,20 @@ function aerodynamics(aero: StudyAerodynamics, dataset: Dataset | undefined): Su
 
 /** Every input the result depends on, with the section model's dimensionless ratios. */
 export function summaryInputs(document: StudyDocument, dataset: Dataset | undefined): SummaryInputs {
-  const rho = document.air.density;
-  const B = document.deck.width;
   const { mass, inertia, modes } = document.structure;
-  const heave = modes.find((m) => m.dof === "heave")!;
-  const torsion = modes.find((m) => m.dof === "torsion")!;
+  // The quantities the study form shows beside the structure, from the same routine.
+  const derived = derivedQuantities(document);
   return {
-    airDensityKgM3: rho,
-    deck: { widthM: B, depthM: document.deck.depth },
+    airDensityKgM3: document.air.density,
+    deck: { widthM: document.deck.width, depthM: document.deck.depth },
     structure: {
       massKgPerM: mass,
       inertiaKgM2PerM: inertia,
       modes: modes.map((m) => ({ id: m.id, dof: m.dof, frequencyHz: m.frequency, dampingRatio: m.damping })),
-      massRatio: rho > 0 ? mass / (rho * B * B) : null,
-      inertiaRatio: rho > 0 ? inertia / (rho * B ** 4) : null,
-      frequencyRatio: torsion.frequency / heave.frequency,
-      radiusOfGyrationM: Math.sqrt(inertia / mass),
+      massRatio: derived.massRatio,
+      inertiaRatio: derived.inertiaRatio,
+      frequencyRatio: derived.frequencyRatio!,
+      radiusOfGyrationM: derived.radiusOfGyrationM!,
     },
     aerodynamics: aerodynamics(document.aerodynamics, dataset),
     sweep: { fromMps: document.sweep.from, toMps: document.sweep.to, stepMps: document.sweep.step },

@@ -1,8 +1,8 @@
 /**
  * Builds the signed stability summary (`stillspan.summary/2`) of one stored revision: its inputs, the revision's
  * current stored assessment (every figure, margin and warning — never recomputed here), what changed since the
- * study's previously signed revision, and who prepared, checked and approved it. The sign route and the demo seed
- * use it inside the signing transaction; the summary preview builds the exact payload the reviewer will sign with it.
+ * study's previously signed revision, and who prepared, checked and approved it. One function, `summaryPayloadOfRevision`,
+ * builds it for the signature (inside the signing transaction) and for a preview of what the reviewer will sign.
  */
 import { diffJson } from "../../shared/diff-json.js";
 import { SUMMARY_FORMAT, type SummaryChanges, type SummaryPayload } from "../../shared/schemas/summary.js";
@@ -21,7 +21,7 @@ import { matchingDataset, summaryInputs } from "./summary-inputs.js";
 /** Most changed fields a summary lists one by one (a re-measured derivative table changes hundreds). */
 const MAX_CHANGES = 50;
 
-export interface SummaryInput {
+interface SummaryInput {
   revision: RevisionRow;
   projectName: string;
   alternativeName: string;
@@ -71,7 +71,7 @@ async function changesSincePreviousSignature(db: DbOrTx, revision: RevisionRow):
  * The summary payload of a revision, ready to be signed (validated by the signer against the schema), and the id of
  * the stored assessment it states (the signature row keeps it).
  */
-export async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Promise<{ payload: SummaryPayload; assessmentId: number }> {
+async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Promise<{ payload: SummaryPayload; assessmentId: number }> {
   const { revision, signer } = input;
   const { document } = revision;
   const stored = await currentAssessment(db, revision, signer.id);
@@ -106,10 +106,10 @@ export async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Prom
 }
 
 /**
- * The exact summary payload a reviewer would sign for a revision now, with their statement: everything loaded from
- * the database by the revision's id. For the summary preview (the payload the reviewer reads before signing) and
- * anything else that needs the payload outside the signing transaction. 404 when the revision is gone; 409 when it
- * was never submitted for review (a summary names when it was submitted for checking).
+ * The summary payload a reviewer signs for a revision, with their statement: everything loaded from the database by
+ * the revision's id. The signature builds it with this function inside its transaction; a preview built with it for
+ * the same revision, signer and statement is the same payload but for the signing time. 404 when the revision is
+ * gone; 409 when it was never submitted for review (a summary names when it was submitted for checking).
  */
 export async function summaryPayloadOfRevision(
   db: DbOrTx,

@@ -5,6 +5,7 @@
  * the workspace, the comparison, the summary page and the PDF mark the same speeds with the same words.
  */
 import type { Assessment } from "../schemas/assessment";
+import type { SummaryPayloadV1 } from "../schemas/summary-v1";
 import { speedText } from "../assessment/format";
 
 export interface FigureStep {
@@ -108,6 +109,16 @@ export function speedMarkers(runs: readonly FigureRun[]): FigureMarker[] {
     }
   });
   return markers;
+}
+
+/** The speeds a summary signed in format 1 marked on its plots, as it states them: its flutter speed and its divergence inside the sweep. */
+export function markersOfSummaryV1(s: SummaryPayloadV1): FigureMarker[] {
+  return [
+    ...(s.flutter ? [{ kind: "flutter" as const, x: s.flutter.speedMps, run: 0, label: `flutter ${speedText(s.flutter.speedMps)}` }] : []),
+    ...(s.divergence && s.divergence.speedMps <= s.sweep.toMps
+      ? [{ kind: "divergence-closed-form" as const, x: s.divergence.speedMps, run: 0, label: `divergence ${speedText(s.divergence.speedMps)}` }]
+      : []),
+  ];
 }
 
 function versusSpeed(runs: readonly FigureRun[], pick: (s: FigureStep) => number | null): FigureSeries[] {

@@ -52,6 +52,8 @@ export const queryKeys = {
   signatures: {
     jwks: () => ["signatures", "jwks"] as const,
     verify: (summaryId: string, jws: string) => ["signatures", "verify", summaryId, jws] as const,
+    /** The public check of a summary by the verification code on its PDF. */
+    byCode: (code: string) => ["signatures", "by-code", code] as const,
   },
   devMailbox: {
     list: (filter: { to: string | null; limit: number }) => ["dev-mailbox", "list", filter] as const,

@@ -8,10 +8,15 @@ export async function insertSignature(db: DbOrTx, values: Omit<Signature, "id">)
   return row.id;
 }
 
+/**
+ * Revisions newer than the study's newest signed one exist (work after the current summary). An unsigned revision
+ * between this summary and a later signed one is not "newer work": the later signature covers the study.
+ */
 const newerUnsigned = sql<boolean>`exists (
   select 1 from ${studyRevisions} r2
-  where r2.study_id = ${studyRevisions.studyId} and r2.number > ${studyRevisions.number}
-    and not exists (select 1 from ${signatures} s2 where s2.revision_id = r2.id))`;
+  where r2.study_id = ${studyRevisions.studyId}
+    and r2.number > (select max(r3.number) from ${studyRevisions} r3 join ${signatures} s3 on s3.revision_id = r3.id
+                     where r3.study_id = ${studyRevisions.studyId}))`;
 
 /** The newest signed revision's signature id of the row's study. */
 const currentSignatureId = sql<number>`(

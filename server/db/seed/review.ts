@@ -6,7 +6,6 @@ import { runSweepInProcess } from "../../services/sweep-compute.js";
 import { recordSignature } from "../../services/summaries.js";
 import { currentAssessment } from "../../services/assessments.js";
 import type { Assessment, StabilityCheck, StabilityMargin } from "../../../shared/schemas/assessment.js";
-import { findAlternative } from "../queries/alternatives.js";
 import { findCurrentCriteria } from "../queries/criteria.js";
 import { findReviewRequest } from "../queries/review.js";
 import { findRevision, listRevisions } from "../queries/revisions.js";
@@ -115,10 +114,8 @@ export const demoReview: SeedStep = {
     const inReview = revisions[revisions.length - 1];
     // One after the other: a transaction is one connection, which runs one query at a time.
     const criteria = await findCurrentCriteria(tx, toSign.projectId);
-    const alternative = await findAlternative(tx, toSign.alternativeId);
     const reviewer = await findUserById(tx, reviewerId);
-    if (!criteria || !alternative || !reviewer) throw new Error("seed: demo review needs the criteria, the alternative and the reviewer");
-    const [{ name: projectName }] = await tx.select({ name: projects.name }).from(projects).where(eq(projects.id, toSign.projectId));
+    if (!criteria || !reviewer) throw new Error("seed: demo review needs the criteria and the reviewer");
 
     const signedAt = new Date();
     const submittedAt = new Date(signedAt.getTime() - 26 * 3600_000);
@@ -135,8 +132,6 @@ export const demoReview: SeedStep = {
     const summaryId = await recordSignature(tx, config, {
       revision: toSign,
       request,
-      projectName,
-      alternativeName: alternative.name,
       signer: reviewer,
       signedAt,
       statement: demoReviewerStatement(assessment),
