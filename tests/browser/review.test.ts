@@ -110,6 +110,17 @@ describe("review and signed summary in the browser", () => {
     expect(flat).toContain(`${flutterSpeed} m/s`);
     expect(flat).toContain(SUMMARY_CAUTIONS[0]);
     expect(flat).toContain("wind-tunnel verification");
+
+    // The PDF points to the public page that checks it by its code: it finds the summary and verifies it.
+    const code = /Verification code ([0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4})/.exec(flat)?.[1];
+    expect(code, "verification code in the PDF").toBeDefined();
+    expect(flat).toContain(`/verify/${code}`);
+    await page.goto(browser.url(`/verify/${code}`));
+    await page.getByTestId("server-check").waitFor();
+    expect(await page.getByTestId("server-check").textContent()).toMatch(/^On record here, and the server's check of its signature succeeds/);
+    await page.getByText("✓ Verified").waitFor();
+    expect(await page.getByTestId("code-check").textContent()).toContain(`${flutterSpeed} m/s`);
+    await browser.screenshot("summary-checked-by-code");
   });
 
   it("the summary of the earlier signed revision shows it is superseded, with a link to the current one", async () => {
