@@ -32,6 +32,15 @@ export interface AssessmentTarget {
   result?: SweepResult;
 }
 
+/**
+ * Who asks for an assessment (recorded in the audit event of one computed now), and whether computing it is a write of
+ * its own (a read that finds none) or part of the caller's write (a revision saved, whose audit event names it).
+ */
+export interface AssessmentActor {
+  id: number | null;
+  audit: boolean;
+}
+
 const resultsKeyOf = (engineVersion: string) => `sweep@${engineVersion}`;
 
 const stored = (row: RevisionAssessmentRow): StoredAssessment => ({
@@ -50,7 +59,7 @@ async function computeAndStore(
   db: DbOrTx,
   revision: { id: number; document: StudyDocument; result: SweepResult },
   criteria: CriteriaVersionRow | undefined,
-  actorId: number | null,
+  actor: AssessmentActor,
 ): Promise<StoredAssessment> {
   const assessment = assessRevision({
     document: revision.document,
@@ -66,13 +75,17 @@ async function computeAndStore(
   return db.transaction(async (tx) => {
     const id = await insertAssessment(tx, { ...key, source: assessment.computedFrom, assessment });
     if (id !== undefined) {
-      await writeAudit(tx, {
-        actorId,
+      // Saved with the revision, the assessment belongs to that write (its audit event names it); computed on a
+      // read, it is a write of its own.
+      if (actor.audit) {
+        await writeAudit(tx, {
+          actorId: actor.id,
         action: "assessment.create",
         objectType: "revision",
         objectId: revision.id,
-        details: { assessmentId: id, criteriaVersion: key.criteriaVersion, results: key.resultsKey, assessor: key.assessor },
-      });
+          details: { assessmentId: id, criteriaVersion: key.criteriaVersion, results: key.resultsKey, assessor: key.assessor },
+        });
+      }
       return stored((await findAssessmentById(tx, id))!);
     }
     const rows = await listAssessmentsOfRevisions(tx, [revision.id], ASSESSOR_VERSION);
@@ -88,13 +101,14 @@ async function computeAndStore(
  *
  * @param db - the pool or the caller's transaction
  * @param revisions - the revisions, with their project and their result's engine version
- * @param actorId - who asks (recorded in the audit event of an assessment computed now); null for the system
+ * @param actor - who asks; a reader by default (an assessment computed now is audited as its own write)
  */
 export async function currentAssessments(
   db: DbOrTx,
   revisions: readonly AssessmentTarget[],
-  actorId: number | null,
+  actor: AssessmentActor | number | null,
 ): Promise<Map<number, StoredAssessment>> {
+  const who = typeof actor === "object" && actor !== null ? actor : { id: actor, audit: true };
   const criteria = new Map<number, CriteriaVersionRow | undefined>();
   for (const r of revisions) if (!criteria.has(r.projectId)) criteria.set(r.projectId, await findCurrentCriteria(db, r.projectId));
   const rows = await listAssessmentsOfRevisions(db, [...new Set(revisions.map((r) => r.id))], ASSESSOR_VERSION);
@@ -109,12 +123,12 @@ export async function currentAssessments(
     }
     const full = r.document && r.result ? { document: r.document, result: r.result } : await findRevision(db, r.id);
     if (!full) throw new Error(`revision ${r.id} not found`);
-    out.set(r.id, await computeAndStore(db, { id: r.id, document: full.document, result: full.result }, criteria.get(r.projectId), actorId));
+    out.set(r.id, await computeAndStore(db, { id: r.id, document: full.document, result: full.result }, criteria.get(r.projectId), who));
   }
   return out;
 }
 
 /** The current assessment of one revision. */
-export async function currentAssessment(db: DbOrTx, revision: AssessmentTarget, actorId: number | null): Promise<StoredAssessment> {
-  return (await currentAssessments(db, [revision], actorId)).get(revision.id)!;
+export async function currentAssessment(db: DbOrTx, revision: AssessmentTarget, actor: AssessmentActor | number | null): Promise<StoredAssessment> {
+  return (await currentAssessments(db, [revision], actor)).get(revision.id)!;
 }

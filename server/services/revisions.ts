@@ -124,7 +124,15 @@ export async function saveRevision(
         objectType: "revision",
         objectId: inserted.id,
         ip,
-        details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: computed.result.engine, source },
+        details: {
+          studyId,
+          number: inserted.number,
+          parentNumber: input.parentRevision,
+          documentSha256: sha256,
+          engineVersion: computed.result.engine,
+          assessmentId: inserted.assessmentId,
+          source,
+        },
       });
       return inserted.id;
     })
@@ -182,7 +190,7 @@ export async function appendRevision(
   input: { parentRevision: number | null; changeNote: string; study: StudyDocument },
   computed: ComputedSweep,
   sha256: string,
-): Promise<{ id: number; number: number }> {
+): Promise<{ id: number; number: number; assessmentId: number }> {
   const { result, table } = computed;
   if (!(await lockStudy(tx, studyId))) throw AppError.notFound("Study");
   const latest = await findLatestRevision(tx, studyId);
@@ -209,10 +217,11 @@ export async function appendRevision(
   if (table) {
     await insertRevisionTable(tx, { revisionId: id, branchIds: [...table.branchIds], rowCount: table.rows, csvGzip: Buffer.from(table.gzip) });
   }
-  // Assessed once, in the same transaction, against the project's current criteria.
+  // Assessed once, in the same transaction, against the project's current criteria (part of this write: the
+  // caller's audit event names the assessment).
   const saved = (await findRevision(tx, id))!;
-  await currentAssessment(tx, { ...saved, document: input.study, result }, user.id);
-  return { id, number };
+  const assessment = await currentAssessment(tx, { ...saved, document: input.study, result }, { id: user.id, audit: false });
+  return { id, number, assessmentId: assessment.id };
 }
 
 /** Computes and appends revision 1 of a study created in the same transaction (study creation with a document). */

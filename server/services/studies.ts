@@ -72,7 +72,7 @@ export async function createStudy(
       details: {
         alternativeId,
         name: input.name,
-        firstRevision: first && { id: first.id, number: 1, documentSha256: first.sha256, engineVersion: first.engineVersion },
+        firstRevision: first && { id: first.id, number: 1, documentSha256: first.sha256, engineVersion: first.engineVersion, assessmentId: first.assessmentId },
       },
     });
     return studyId;

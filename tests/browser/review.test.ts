@@ -112,7 +112,7 @@ describe("review and signed summary in the browser", () => {
     expect(flat).toContain("wind-tunnel verification");
 
     // The PDF points to the public page that checks it by its code: it finds the summary and verifies it.
-    const code = /Verification code ([0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4})/.exec(flat)?.[1];
+    const code = /Verification code\s*([0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4})/.exec(flat)?.[1];
     expect(code, "verification code in the PDF").toBeDefined();
     expect(flat).toContain(`/verify/${code}`);
     await page.goto(browser.url(`/verify/${code}`));
