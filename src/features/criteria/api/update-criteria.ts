@@ -22,7 +22,7 @@ export function updateCriteria(projectId: string, input: UpdateCriteriaInput): P
 
 /**
  * On success the answer becomes the cached current version; the history, the screenings (they read the
- * required speeds) and the project's comparison (its margins) are refetched.
+ * required speeds), the project's comparison, the revisions and the review queue (their assessments) are refetched.
  */
 export function useUpdateCriteria(projectId: string, options: { onSuccess?: (saved: ProjectCriteriaDto) => void } = {}) {
   const queryClient = useQueryClient();
@@ -35,6 +35,11 @@ export function useUpdateCriteria(projectId: string, options: { onSuccess?: (sav
         queryClient.invalidateQueries({ queryKey: queryKeys.criteria.screenings() }),
         // The project's comparison carries margins computed against the criteria (studies feature's key).
         queryClient.invalidateQueries({ queryKey: queryKeys.comparison(projectId) }),
+        // So do the revisions, the studies' latest revisions and the review queue: each carries the assessment
+        // against the current criteria, and a new criteria version gives a new one.
+        queryClient.invalidateQueries({ queryKey: queryKeys.revisions.all() }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.studies.all() }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.reviews.queue() }),
       ]);
       options.onSuccess?.(saved);
     },

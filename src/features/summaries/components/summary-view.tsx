@@ -1,3 +1,4 @@
+import { useMemo } from "react";
 import { Link } from "react-router-dom";
 import type { SummaryDto } from "@shared/schemas/review";
 import { SUMMARY_CAUTIONS } from "@shared/schemas/summary";
@@ -45,6 +46,11 @@ function Banners({ summary }: { summary: SummaryDto }) {
 export function SummaryView({ summary }: { summary: SummaryDto }) {
   const p = summary.payload;
   const verification = useSummaryVerification(summary.id, summary.jws, p);
+  // Stable between renders (the signature check re-renders the page): plotly redraws only for new data.
+  const figures = useMemo(
+    () => ({ damping: dampingFigure(p, summary.branches), frequency: frequencyFigure(p, summary.branches), poles: polePathFigure(p, summary.branches) }),
+    [p, summary.branches],
+  );
 
   return (
     <div className="space-y-4">
@@ -85,13 +91,13 @@ export function SummaryView({ summary }: { summary: SummaryDto }) {
 
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Damping of each branch" subtitle="Damping ratio ζ against wind speed; flutter where a branch crosses zero">
-          <Plot height={300} label="Damping ratio of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-damping-ratio`} {...dampingFigure(p, summary.branches)} />
+          <Plot height={300} label="Damping ratio of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-damping-ratio`} {...figures.damping} />
         </Card>
         <Card title="Frequency of each branch" subtitle="Frequency against wind speed">
-          <Plot height={300} label="Frequency of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-frequency`} {...frequencyFigure(p, summary.branches)} />
+          <Plot height={300} label="Frequency of each pole branch against mean wind speed" downloadName={`summary-${summary.id}-frequency`} {...figures.frequency} />
         </Card>
         <Card title="Pole paths" subtitle="λ through the sweep; right of the axis is unstable" className="lg:col-span-2">
-          <Plot height={320} label="Pole paths in the complex plane" downloadName={`summary-${summary.id}-pole-paths`} {...polePathFigure(p, summary.branches)} />
+          <Plot height={320} label="Pole paths in the complex plane" downloadName={`summary-${summary.id}-pole-paths`} {...figures.poles} />
         </Card>
         {samplingNote(summary.branchSampling) ? (
           <p className="text-sm text-ink-600 lg:col-span-2">{samplingNote(summary.branchSampling)}</p>
