@@ -99,6 +99,7 @@ function writeHeader(w: PdfWriter, input: SummaryPdfInput, code: string): void {
     ["Signed on", utc(s.signedAt)],
     ["Verification code", code],
     ["Verify at", input.verificationUrl],
+    ["Signing key id", decodeProtectedHeader(input.jws).kid ?? "unknown"],
     ["Revision content hash", s.revision.contentHash],
     ["Engine", s.engineVersion],
   ]);

@@ -263,3 +263,18 @@ describe("key rotation", () => {
     expect(await verifiesWithJwks(afterSummary.body.jws, jwks)).toBe(true);
   });
 });
+
+describe("newer work after a superseded summary", () => {
+  it("is not claimed when the unsigned revision lies below the study's newest signed one", async () => {
+    // Revisions 1–4 exist (1, 2, 3 and 4 signed above); 5 stays unsigned, 6 is signed.
+    const fifth = await addRevision(base(), cookies.analyst, arranged.studyId, 4, 0.0046);
+    const sixth = await addRevision(base(), cookies.analyst, arranged.studyId, 5, 0.0047);
+    const unsignedBelow = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    expect(unsignedBelow.body).toMatchObject({ current: false, newerUnsigned: true, newestRevisionNumber: 6 });
+    expect(fifth).not.toBe(sixth);
+    const sixthSummaryId = await submitAndSign(base(), sixth, "Revision 6 checked.");
+    const old = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    // Superseded by revision 6; revision 5 (unsigned, below it) is not "newer work".
+    expect(old.body).toMatchObject({ current: false, newerUnsigned: false, currentSummary: { id: sixthSummaryId, revisionNumber: 6 } });
+  });
+});

@@ -59,7 +59,8 @@ function QueueItem({ item, onDecided }: { item: ReviewQueueItemDto; onDecided: (
         </div>
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Divergence</dt>
-          <dd className="num font-semibold" data-testid="queue-divergence" title={a.divergence.marginBasis}>{divergenceFigure(a)}</dd>
+          <dd className="num font-semibold" data-testid="queue-divergence">{divergenceFigure(a)}</dd>
+          <dd className="text-xs text-ink-600">{a.divergence.marginBasis}</dd>
           <dd>
             <MarginLine margin={a.margins?.divergence} />
           </dd>

@@ -169,7 +169,15 @@ function ComparisonTable({ revisions, comparison }: { revisions: RevisionDto[]; 
         return st.speedMps !== null ? `${st.speedMps.toFixed(2)} m/s${st.branch ? ` (${st.branch})` : ""}` : "none";
       },
     },
-    { label: "Divergence margin uses", cell: ({ a }) => divergenceFigure(a) },
+    {
+      label: "Divergence margin uses",
+      cell: ({ a }) => (
+        <>
+          {divergenceFigure(a)}
+          <span className="block max-w-64 text-xs font-normal whitespace-normal text-ink-600">{a.divergence.marginBasis}</span>
+        </>
+      ),
+    },
     { label: "Selberg estimate", cell: ({ a }) => (a.selberg.speedMps !== null ? `${a.selberg.speedMps.toFixed(2)} m/s` : "n/a") },
     { label: "Flutter margin", cell: ({ a }) => <MarginCell margin={a.margins?.flutter ?? null} /> },
     { label: "Divergence margin", cell: ({ a }) => <MarginCell margin={a.margins?.divergence ?? null} /> },
