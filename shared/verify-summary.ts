@@ -4,7 +4,8 @@
  *
  * Valid means all of: each of the three parts is canonical base64url; the compact JWS verifies with EdDSA under the
  * key its `kid` names in the JWKS; the `typ` is a Stillspan summary; the payload is UTF-8 JSON in RFC 8785
- * canonical form; it matches the summary schema.
+ * canonical form; it matches the summary schema of its format (the current one, or format 1 for summaries signed
+ * before summaries carried their inputs and assessment).
  */
 import { base64url, compactVerify, createLocalJWKSet, decodeProtectedHeader, errors, type JSONWebKeySet } from "jose";
 import { canonicalJson } from "./canonical-json";
@@ -12,12 +13,13 @@ import {
   SUMMARY_FORMAT,
   SUMMARY_JWS_ALG as SIGNING_ALG,
   SUMMARY_JWS_TYP,
-  summaryPayloadSchema,
-  type SummaryPayload,
+  signedSummaryPayloadSchema,
+  type SignedSummaryPayload,
 } from "./schemas/summary";
+import { SUMMARY_FORMAT_V1 } from "./schemas/summary-v1";
 
 export type SummaryVerification =
-  | { valid: true; kid: string; summary: SummaryPayload }
+  | { valid: true; kid: string; summary: SignedSummaryPayload }
   | { valid: false; kid: string | null; summary: null; reason: string };
 
 function headerKid(jws: string): string | null {
@@ -86,10 +88,12 @@ export async function verifySummary(jws: string, jwks: JSONWebKeySet): Promise<S
     return invalid("the payload is not UTF-8 JSON");
   }
   if (!isCanonical(decoded, text)) return invalid("the payload is not in RFC 8785 canonical form");
-  const parsed = summaryPayloadSchema.safeParse(decoded);
+  const parsed = signedSummaryPayloadSchema.safeParse(decoded);
   if (!parsed.success) {
     const first = parsed.error.issues[0];
-    return invalid(`the payload is not a ${SUMMARY_FORMAT} document (${first.path.join(".")}: ${first.message})`);
+    return invalid(
+      `the payload is not a ${SUMMARY_FORMAT} (or ${SUMMARY_FORMAT_V1}) document (${first.path.join(".") || "format"}: ${first.message})`,
+    );
   }
   return { valid: true, kid, summary: parsed.data };
 }

@@ -3,7 +3,7 @@ import type { SweepWarningCode } from "./schemas/result";
 /** One plain sentence per engine warning code: what it means for the number on the screen. */
 export const WARNING_EXPLANATIONS: Record<SweepWarningCode, string> = {
   "extrapolated-derivatives":
-    "Here the reduced velocity lies outside the tested range: the derivatives were held at the table's end values, so results at these speeds are extrapolated and unreliable.",
+    "On the named branch the reduced velocity lies outside the tested range: its derivatives were held at the table's end values, so that branch's results at these speeds are extrapolated and unreliable. A critical point whose own Ur lies inside the table is not affected.",
   "quasi-steady-flutter":
     "Quasi-steady aerodynamics give no torsional aerodynamic damping, so this flutter speed is likely far too low; use measured derivatives.",
   "unstable-at-start":

@@ -48,10 +48,14 @@ function formatTable(result: SweepResult): string {
   const f = result.flutter;
   lines.push(
     f
-      ? `Flutter      ${f.speed.toFixed(3)} m/s at ${f.frequency.toFixed(4)} Hz, branch ${f.mode}, ${f.kind}, Ur = ${f.reducedVelocity.toFixed(2)}`
+      ? `Flutter      ${f.speed.toFixed(3)} m/s at ${f.frequency.toFixed(4)} Hz, branch ${f.mode}, ${f.kind}, Ur = ${f.reducedVelocity.toFixed(2)}` +
+          (f.insideTestedRange === true ? ", within the tested range" : f.insideTestedRange === false ? ", beyond the tested range" : "")
       : "Flutter      none in the range",
   );
-  lines.push(`Divergence   ${result.divergence ? `${result.divergence.speed.toFixed(2)} m/s (closed form)` : "none in the range"}`);
+  const outside = result.divergenceOutsideSweep;
+  lines.push(
+    `Divergence   ${result.divergence ? `${result.divergence.speed.toFixed(2)} m/s (closed form)` : outside ? `${outside.speed.toFixed(2)} m/s (closed form, outside the sweep)` : "none (closed form)"}`,
+  );
   lines.push(`Selberg      ${result.selberg === null ? "n/a" : `${result.selberg.toFixed(2)} m/s`}`);
   for (const w of result.warnings) lines.push(`Warning      [${w.code}] ${w.message}`);
   lines.push("");

@@ -1,24 +1,14 @@
 /**
- * A small vector line chart drawn with pdfkit primitives: frame, grid, ticks with "nice" steps, an optional
- * zero line, one polyline per series clipped to the plot area, vertical markers (critical speeds) and a legend.
- * Vector lines keep the PDF small and sharp at any zoom.
+ * A small vector line chart drawn with pdfkit primitives from the same figure data the browser's plots draw
+ * (shared/figures/figure-data.ts): frame, grid, ticks with "nice" steps, an optional zero line, one polyline per
+ * series clipped to the plot area (broken where a value is missing), vertical markers (critical speeds, each
+ * labelled by what it is) and a legend. Vector lines keep the PDF small and sharp at any zoom.
  */
 import type PDFDocument from "pdfkit";
 import { extent } from "../../shared/extent.js";
+import type { FigureMarker, FigureSeries, LineFigureData } from "../../shared/figures/figure-data.js";
 
 type Doc = InstanceType<typeof PDFDocument>;
-
-export interface ChartSeries {
-  label: string;
-  color: string;
-  points: [x: number, y: number][];
-}
-
-export interface ChartMarker {
-  x: number;
-  label: string;
-  color: string;
-}
 
 export interface LineChartSpec {
   x: number;
@@ -26,13 +16,9 @@ export interface LineChartSpec {
   width: number;
   height: number;
   title: string;
-  xLabel: string;
-  yLabel: string;
-  series: ChartSeries[];
-  markers?: ChartMarker[];
-  zeroLine?: boolean;
-  /** Limits of the y axis; data outside is clipped (default: the data's range). */
-  yRange?: [number, number];
+  figure: LineFigureData;
+  seriesColor: (series: FigureSeries) => string;
+  markerColor: (marker: FigureMarker) => string;
   fonts: { regular: string; bold: string };
 }
 
@@ -69,16 +55,16 @@ function tickLabel(value: number, step: number): string {
 }
 
 export function drawLineChart(doc: Doc, spec: LineChartSpec): void {
-  const { x, y, width, height, fonts } = spec;
+  const { x, y, width, height, fonts, figure } = spec;
   const plot = { left: x + 46, top: y + 18, right: x + width - 8, bottom: y + height - 46 };
-  const all = spec.series.flatMap((s) => s.points);
-  const xs = [...all.map((p) => p[0]), ...(spec.markers ?? []).map((m) => m.x)];
-  const ys = all.map((p) => p[1]);
+  const all = figure.series.flatMap((s) => s.points);
+  const xs = [...all.map((p) => p[0]), ...figure.markers.map((m) => m.x)];
+  const ys = all.flatMap((p) => (p[1] === null ? [] : [p[1]]));
   const xRange = extent(xs);
   const yData = extent(ys);
   const xAxis = niceAxis(xs.length ? xRange.min : 0, xs.length ? xRange.max : 1, 6);
-  const yAxis = spec.yRange
-    ? niceAxis(spec.yRange[0], spec.yRange[1], 5)
+  const yAxis = figure.yRange
+    ? niceAxis(figure.yRange[0], figure.yRange[1], 5)
     : niceAxis(ys.length ? yData.min : 0, ys.length ? yData.max : 1, 5);
   const px = (v: number) => plot.left + ((v - xAxis.min) / (xAxis.max - xAxis.min)) * (plot.right - plot.left);
   const py = (v: number) => plot.bottom - ((v - yAxis.min) / (yAxis.max - yAxis.min)) * (plot.bottom - plot.top);
@@ -107,37 +93,55 @@ export function drawLineChart(doc: Doc, spec: LineChartSpec): void {
   // Axis titles
   doc.fontSize(8).fillColor(AXIS);
   const centred = { align: "center", lineBreak: false } as const;
-  doc.text(spec.xLabel, plot.left, plot.bottom + 14, { ...centred, width: plot.right - plot.left });
+  doc.text(figure.xLabel, plot.left, plot.bottom + 14, { ...centred, width: plot.right - plot.left });
   doc.save();
   doc.rotate(-90, { origin: [x + 6, (plot.top + plot.bottom) / 2] });
-  doc.text(spec.yLabel, x + 6 - 80, (plot.top + plot.bottom) / 2 - 4, { ...centred, width: 160 });
+  doc.text(figure.yLabel, x + 6 - 80, (plot.top + plot.bottom) / 2 - 4, { ...centred, width: 160 });
   doc.restore();
 
   // Data, clipped to the plot
   doc.save();
   doc.rect(plot.left, plot.top, plot.right - plot.left, plot.bottom - plot.top).clip();
-  if (spec.zeroLine && yAxis.min < 0 && yAxis.max > 0) {
+  if (figure.zeroLine && yAxis.min < 0 && yAxis.max > 0) {
     doc.lineWidth(0.8).strokeColor(AXIS).moveTo(plot.left, py(0)).lineTo(plot.right, py(0)).stroke();
   }
-  for (const s of spec.series) {
-    if (s.points.length < 2) continue;
-    doc.lineWidth(1.1).strokeColor(s.color).lineJoin("round");
-    doc.moveTo(px(s.points[0][0]), py(s.points[0][1]));
-    for (const [vx, vy] of s.points.slice(1)) doc.lineTo(px(vx), py(vy));
-    doc.stroke();
+  for (const s of figure.series) {
+    doc.lineWidth(1.1).strokeColor(spec.seriesColor(s)).lineJoin("round");
+    let drawing = false;
+    let segment = 0;
+    for (const [vx, vy] of s.points) {
+      if (vy === null) {
+        if (drawing && segment > 1) doc.stroke();
+        drawing = false;
+        continue;
+      }
+      if (!drawing) {
+        doc.moveTo(px(vx), py(vy));
+        drawing = true;
+        segment = 1;
+      } else {
+        doc.lineTo(px(vx), py(vy));
+        segment++;
+      }
+    }
+    if (drawing && segment > 1) doc.stroke();
   }
-  for (const m of spec.markers ?? []) {
-    doc.lineWidth(0.9).strokeColor(m.color).dash(3, { space: 2 });
+  for (const m of figure.markers) {
+    doc.lineWidth(0.9).strokeColor(spec.markerColor(m)).dash(3, { space: 2 });
     doc.moveTo(px(m.x), plot.top).lineTo(px(m.x), plot.bottom).stroke();
     doc.undash();
   }
   doc.restore();
-  (spec.markers ?? []).forEach((m, i) => {
+  figure.markers.forEach((m, i) => {
     const right = px(m.x) > (plot.left + plot.right) / 2;
-    doc.font(fonts.bold).fontSize(7).fillColor(m.color);
-    // one label row per marker, so labels of close critical speeds never overlap
-    doc.text(m.label, right ? px(m.x) - 104 : px(m.x) + 4, plot.top + 3 + 9 * i, {
-      width: 100,
+    doc.font(fonts.bold).fontSize(7);
+    // one label row per marker, so labels of close critical speeds never overlap; a light box keeps them legible
+    const labelWidth = doc.widthOfString(m.label);
+    const labelX = right ? px(m.x) - 4 - labelWidth : px(m.x) + 4;
+    doc.rect(labelX - 1.5, plot.top + 2 + 9 * i, labelWidth + 3, 9).fillOpacity(0.85).fill("#ffffff").fillOpacity(1);
+    doc.fillColor(spec.markerColor(m));
+    doc.text(m.label, right ? px(m.x) - 164 : px(m.x) + 4, plot.top + 3 + 9 * i, {
+      width: 160,
       align: right ? "right" : "left",
       lineBreak: false,
     });
@@ -146,10 +150,10 @@ export function drawLineChart(doc: Doc, spec: LineChartSpec): void {
   // Legend under the axis title
   let lx = plot.left;
   doc.font(fonts.regular).fontSize(7);
-  for (const s of spec.series) {
-    doc.lineWidth(1.4).strokeColor(s.color).moveTo(lx, plot.bottom + 33).lineTo(lx + 14, plot.bottom + 33).stroke();
-    doc.fillColor(AXIS).text(s.label, lx + 17, plot.bottom + 29.5, { lineBreak: false });
-    lx += 17 + doc.widthOfString(s.label) + 12;
+  for (const s of figure.series) {
+    doc.lineWidth(1.4).strokeColor(spec.seriesColor(s)).moveTo(lx, plot.bottom + 33).lineTo(lx + 14, plot.bottom + 33).stroke();
+    doc.fillColor(AXIS).text(s.name, lx + 17, plot.bottom + 29.5, { lineBreak: false });
+    lx += 17 + doc.widthOfString(s.name) + 12;
   }
   doc.restore();
 }

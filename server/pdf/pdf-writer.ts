@@ -149,13 +149,13 @@ export class PdfWriter {
   }
 
   /** Fixed-width block, cut into equal lines (a JWS has no spaces to wrap at). */
-  mono(text: string, charsPerLine = 96): void {
+  mono(text: string, charsPerLine = 96, size = 7): void {
     const lines = text.match(new RegExp(`.{1,${charsPerLine}}`, "g")) ?? [];
-    this.doc.font(FONTS.mono).fontSize(7);
+    this.doc.font(FONTS.mono).fontSize(size);
     for (const line of lines) {
-      this.ensureSpace(9);
+      this.ensureSpace(size + 2);
       this.doc.fillColor(COLORS.ink).text(line, this.left, this.y, { lineBreak: false });
-      this.y += 8.6;
+      this.y += size * 1.23;
     }
     this.y += 4;
   }

@@ -31,7 +31,7 @@ import { sha256Hex } from "../lib/hash.js";
 import { requireFile } from "../lib/uploads.js";
 import { loadWithAccess, person, type Access } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
-import { matchingDataset } from "./summary-payload.js";
+import { matchingDataset } from "./summary-inputs.js";
 import type { SessionUser } from "./auth.js";
 
 export function toDatasetDto(row: DatasetRow): DatasetDto {

@@ -27,6 +27,9 @@ export const appLinks = {
   summary: (base: string, summaryId: number) => `${base}/summaries/${summaryId}`,
   acceptInvitation: (base: string, token: string) => `${base}/accept-invite?token=${encodeURIComponent(token)}`,
   resetPassword: (base: string, token: string) => `${base}/reset-password?token=${encodeURIComponent(token)}`,
+  /** The public page that verifies a signed summary by its code (no sign-in). */
+  verify: (base: string, code: string) => `${base}/verify/${encodeURIComponent(code)}`,
+  jwks: (base: string) => `${base}/.well-known/jwks.json`,
 };
 
 /** Runs a notification in the background; its outcome is logged. Returns the promise for tests and callers who wait. */

@@ -1,13 +1,11 @@
 /**
  * The summary preview a reviewer reads and signs from: the payload the server would sign for the revision now,
- * built by the signature's own builder (buildSummaryPayload), with the hash the sign request must carry back
+ * built by the signature's own builder (summaryPayloadOfRevision), with the hash the sign request must carry back
  * (review-sign-checks.ts). Analysts and reviewers of the project read it; only the assigned reviewer signs.
  */
 import type { SummaryPreviewDto } from "../../shared/schemas/review.js";
 import type { Db } from "../db/client.js";
-import { findAlternative } from "../db/queries/alternatives.js";
 import { findCurrentCriteria, type CriteriaVersionRow } from "../db/queries/criteria.js";
-import { findProjectById } from "../db/queries/projects.js";
 import { findReviewRequest, type ReviewRequestRow } from "../db/queries/review.js";
 import type { RevisionRow } from "../db/queries/revisions.js";
 import { findSignatureOfRevision } from "../db/queries/signatures.js";
@@ -18,7 +16,7 @@ import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
 import { assertBasesConfirmed, previewSha256, unconfirmedBasesOf } from "./review-sign-checks.js";
 import { summaryBranches } from "./summaries.js";
-import { buildSummaryPayload } from "./summary-payload.js";
+import { summaryPayloadOfRevision } from "./summary-payload.js";
 
 /**
  * Why `user` cannot decide on the revision now — not its assigned reviewer, its author, or not in review — with the
@@ -61,17 +59,14 @@ function criteriaBlocker(criteria: CriteriaVersionRow): string | null {
  */
 export async function getSummaryPreview(db: Db, user: SessionUser, revisionId: number): Promise<SummaryPreviewDto> {
   const revision = await revisionFor(db, user, revisionId, ["analyst", "reviewer"]);
-  const [request, signature, project, alternative, criteria] = await Promise.all([
+  const [request, signature, criteria] = await Promise.all([
     findReviewRequest(db, revisionId),
     findSignatureOfRevision(db, revisionId),
-    findProjectById(db, revision.projectId, user.id),
-    findAlternative(db, revision.alternativeId),
     findCurrentCriteria(db, revision.projectId),
   ]);
   if (signature) {
     throw AppError.conflict(`Revision ${revision.number} is already signed: read its signed summary.`, { summaryId: String(signature.id) });
   }
-  if (!project || !alternative) throw AppError.notFound("Revision");
   if (!criteria) {
     throw AppError.conflict(
       "The project has no design wind and criteria yet: the summary states the required speeds and margins, so a reviewer or administrator must save the criteria first.",
@@ -79,15 +74,7 @@ export async function getSummaryPreview(db: Db, user: SessionUser, revisionId: n
   }
   // The summary names its signer: the assigned reviewer once there is one, else the reader.
   const signer = request ? await findUserById(db, request.reviewerId) : undefined;
-  const payload = await buildSummaryPayload(db, {
-    revision,
-    projectName: project.name,
-    alternativeName: alternative.name,
-    criteria: criteria.criteria,
-    signer: signer ? { name: signer.name, email: signer.email } : { name: user.name, email: user.email },
-    signedAt: new Date(),
-    statement: "",
-  });
+  const { payload } = await summaryPayloadOfRevision(db, revision.id, signer ?? { id: user.id, name: user.name, email: user.email }, { statement: "" });
   const decision = await decisionBlocker(db, user, revision, request);
   return {
     revisionId: String(revision.id),

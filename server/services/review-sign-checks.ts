@@ -23,13 +23,15 @@ export function assertBasesConfirmed(criteria: Pick<CriteriaVersionRow, "version
 }
 
 /**
- * The hash a sign request carries: SHA-256 over the RFC 8785 canonical JSON of the summary payload without the two
- * members set at the moment of signing (`signedAt`, `statement`). Equal hashes: the reviewer signs exactly what the
- * preview showed them.
+ * The hash a sign request carries: SHA-256 over the RFC 8785 canonical JSON of the summary payload without what is
+ * set at the moment of signing — `signedAt`, `statement`, and the times of checking and approval in the sign-off
+ * block (both the signing time). Equal hashes: the reviewer signs exactly what the preview showed them.
  */
 export function previewSha256(payload: SummaryPayload): string {
-  const { signedAt: _signedAt, statement: _statement, ...content } = payload;
-  return canonicalSha256Hex(content);
+  const { signedAt: _signedAt, statement: _statement, signoff, ...content } = payload;
+  const { at: _checkedAt, ...checked } = signoff.checked;
+  const { at: _approvedAt, ...approved } = signoff.approved;
+  return canonicalSha256Hex({ ...content, signoff: { ...signoff, checked, approved } });
 }
 
 /** 409 `preview_outdated` when the summary about to be signed is not the one previewed. */

@@ -3,15 +3,12 @@
  * comments or sign (reviewers only, never the revision's author), comments, the reviewer's queue. Every write
  * and its audit event share one transaction; e-mail goes out after the commit and never undoes the action.
  */
-import { computeMargins } from "../../shared/criteria/margins.js";
-import type { RequiredSpeeds } from "../../shared/criteria/required-speeds.js";
 import type {
   ReviewQueueItemDto,
   RevisionReviewDto,
   SubmitReviewInput,
 } from "../../shared/schemas/review.js";
 import { submitReviewSchema } from "../../shared/schemas/review.js";
-import type { CriticalSpeeds } from "../../shared/schemas/revisions.js";
 import type { AppContext } from "../app-context.js";
 import type { Db, DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
@@ -36,7 +33,7 @@ import { findUserById } from "../db/queries/users.js";
 import { AppError } from "../errors.js";
 import { verificationCode } from "../signing/verification-code.js";
 import { assertRole, person } from "./access.js";
-import { divergenceFound, flutterFound, requiredSpeedsOf, stabilityMargin } from "./comparison.js";
+import { currentAssessments, toAssessmentDto } from "./assessments.js";
 import type { SessionUser } from "./auth.js";
 import { notifyReturned, notifyReviewRequested } from "./review-mail.js";
 
@@ -266,18 +263,11 @@ export async function recordComment(
   await writeAudit(tx, { actorId: m.authorId, action: "review.comment", objectType: "revision", objectId: m.revisionId, ip: m.ip, details: { commentId: id } });
 }
 
-function queueMargins(critical: CriticalSpeeds, required: RequiredSpeeds | null): ReviewQueueItemDto["margins"] {
-  if (!required) return null;
-  const all = computeMargins({ flutter: flutterFound(critical), divergence: divergenceFound(critical) }, required);
-  return { flutter: stabilityMargin(all.flutter), divergence: stabilityMargin(all.divergence) };
-}
-
 /** GET /api/review-queue — revisions in review assigned to the caller. */
 export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<ReviewQueueItemDto[]> {
   const rows = await listReviewQueue(db, user.id);
-  // The margins against each project's current criteria, as the comparison states them.
-  const required = new Map<number, Awaited<ReturnType<typeof requiredSpeedsOf>>>();
-  for (const r of rows) if (!required.has(r.projectId)) required.set(r.projectId, await requiredSpeedsOf(db, r.projectId));
+  // Each revision's current assessment: the same figures, margins and warning count as the study and the comparison.
+  const assessments = await currentAssessments(db, rows.map((r) => ({ id: r.revisionId, projectId: r.projectId, engineVersion: r.engineVersion })), user.id);
   return rows.map((r) => ({
     revisionId: String(r.revisionId),
     revisionNumber: r.revisionNumber,
@@ -292,10 +282,7 @@ export async function reviewQueue(db: DbOrTx, user: SessionUser): Promise<Review
     note: r.note,
     submittedAt: r.submittedAt.toISOString(),
     changeNote: r.changeNote,
-    flutterSpeedMps: r.critical.flutter?.speedMps ?? null,
-    divergenceSpeedMps: r.critical.divergenceSpeedMps ?? null,
-    margins: queueMargins(r.critical, required.get(r.projectId)?.required ?? null),
-    warningCount: r.warningCount,
+    assessment: toAssessmentDto(assessments.get(r.revisionId)!),
     engineVersion: r.engineVersion,
     documentSha256: r.documentSha256,
   }));

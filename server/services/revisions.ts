@@ -24,16 +24,17 @@ import {
 } from "../db/queries/revisions.js";
 import { findStudy, lockStudy } from "../db/queries/studies.js";
 import { AppError } from "../errors.js";
-import { criticalSpeeds } from "../lib/critical-speeds.js";
 import { fileSlug } from "../lib/file-name.js";
 import { canonicalSha256Hex } from "../lib/hash.js";
 import { requireFile } from "../lib/uploads.js";
 import { loadWithAccess, person } from "./access.js";
+import { currentAssessment, currentAssessments, toAssessmentDto, type StoredAssessment } from "./assessments.js";
 import type { SessionUser } from "./auth.js";
 import type { ComputedSweep, RunSweep } from "./sweep-compute.js";
 import { sweepFailure } from "./sweep-pool-errors.js";
 
-export function toRevisionSummary(row: RevisionSummaryRow): RevisionSummaryDto {
+/** A revision for a list, with its current assessment. */
+export function toRevisionSummary(row: RevisionSummaryRow, assessment: StoredAssessment): RevisionSummaryDto {
   return {
     id: String(row.id),
     studyId: String(row.studyId),
@@ -45,13 +46,19 @@ export function toRevisionSummary(row: RevisionSummaryRow): RevisionSummaryDto {
     engineVersion: row.engineVersion,
     createdAt: row.createdAt.toISOString(),
     superseded: row.number < row.latestNumber,
-    critical: row.critical,
+    assessment: toAssessmentDto(assessment),
   };
 }
 
-function toRevisionDto(row: RevisionRow): RevisionDto {
+/** Revision summaries with their current assessments (computed and stored first where there is none yet). */
+export async function withAssessments(db: DbOrTx, rows: readonly RevisionSummaryRow[], actorId: number | null): Promise<RevisionSummaryDto[]> {
+  const assessments = await currentAssessments(db, rows, actorId);
+  return rows.map((row) => toRevisionSummary(row, assessments.get(row.id)!));
+}
+
+async function toRevisionDto(db: DbOrTx, row: RevisionRow, actorId: number | null): Promise<RevisionDto> {
   return {
-    ...toRevisionSummary(row),
+    ...toRevisionSummary(row, await currentAssessment(db, row, actorId)),
     alternativeId: String(row.alternativeId),
     projectId: String(row.projectId),
     studyName: row.studyName,
@@ -117,7 +124,15 @@ export async function saveRevision(
         objectType: "revision",
         objectId: inserted.id,
         ip,
-        details: { studyId, number: inserted.number, parentNumber: input.parentRevision, documentSha256: sha256, engineVersion: computed.result.engine, source },
+        details: {
+          studyId,
+          number: inserted.number,
+          parentNumber: input.parentRevision,
+          documentSha256: sha256,
+          engineVersion: computed.result.engine,
+          assessmentId: inserted.assessmentId,
+          source,
+        },
       });
       return inserted.id;
     })
@@ -128,7 +143,7 @@ export async function saveRevision(
       const latest = await findLatestRevision(db, studyId);
       throw latest ? staleParent(latest, { parentRevision: input.parentRevision, changeNote, study }) : err;
     });
-  return toRevisionDto((await findRevision(db, id))!);
+  return toRevisionDto(db, (await findRevision(db, id))!, user.id);
 }
 
 /**
@@ -175,7 +190,7 @@ export async function appendRevision(
   input: { parentRevision: number | null; changeNote: string; study: StudyDocument },
   computed: ComputedSweep,
   sha256: string,
-): Promise<{ id: number; number: number }> {
+): Promise<{ id: number; number: number; assessmentId: number }> {
   const { result, table } = computed;
   if (!(await lockStudy(tx, studyId))) throw AppError.notFound("Study");
   const latest = await findLatestRevision(tx, studyId);
@@ -197,13 +212,16 @@ export async function appendRevision(
     documentSha256: sha256,
     engineVersion: result.engine,
     result,
-    critical: criticalSpeeds(input.study, result),
     flutterSpeedMps: result.flutter?.speed ?? null,
   });
   if (table) {
     await insertRevisionTable(tx, { revisionId: id, branchIds: [...table.branchIds], rowCount: table.rows, csvGzip: Buffer.from(table.gzip) });
   }
-  return { id, number };
+  // Assessed once, in the same transaction, against the project's current criteria (part of this write: the
+  // caller's audit event names the assessment).
+  const saved = (await findRevision(tx, id))!;
+  const assessment = await currentAssessment(tx, { ...saved, document: input.study, result }, { id: user.id, audit: false });
+  return { id, number, assessmentId: assessment.id };
 }
 
 /** Computes and appends revision 1 of a study created in the same transaction (study creation with a document). */
@@ -215,20 +233,21 @@ export async function appendFirstRevision(tx: DbOrTx, sweeps: RunSweep, user: { 
 
 export async function listStudyRevisions(db: DbOrTx, user: SessionUser, studyId: number): Promise<RevisionSummaryDto[]> {
   await loadWithAccess(db, user, "Study", () => findStudy(db, studyId), "read");
-  return (await listRevisions(db, studyId)).map(toRevisionSummary);
+  return withAssessments(db, await listRevisions(db, studyId), user.id);
 }
 
 export async function getRevision(db: DbOrTx, user: SessionUser, id: number): Promise<RevisionDto> {
-  return toRevisionDto(await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read"));
+  return toRevisionDto(db, await loadWithAccess(db, user, "Revision", () => findRevision(db, id), "read"), user.id);
 }
 
 /** Field-by-field differences of two revisions' documents (each readable by the caller). */
 export async function diffRevisions(db: DbOrTx, user: SessionUser, a: number, b: number): Promise<RevisionDiffDto> {
   const from = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, a), "read");
   const to = await loadWithAccess(db, user, "Revision", () => findRevisionSummary(db, b), "read");
+  const [fromDto, toDto] = await withAssessments(db, [from, to], user.id);
   return {
-    from: toRevisionSummary(from),
-    to: toRevisionSummary(to),
+    from: fromDto,
+    to: toDto,
     identical: from.documentSha256 === to.documentSha256,
     changes: diffJson(from.document, to.document),
   };

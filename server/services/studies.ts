@@ -6,10 +6,11 @@ import { findStudy, insertStudy, listStudies, updateStudy, type StudyRow } from 
 import { loadWithAccess, person } from "./access.js";
 import { loadAlternative } from "./alternatives.js";
 import type { SessionUser } from "./auth.js";
+import { currentAssessments } from "./assessments.js";
 import { appendFirstRevision, parseStudyOrThrow, toRevisionSummary } from "./revisions.js";
 import type { RunSweep } from "./sweep-compute.js";
 
-function toStudyDto(row: StudyRow, latest: RevisionSummaryRow | undefined): StudyDto {
+function toStudyDto(row: StudyRow, latest: StudyDto["latestRevision"]): StudyDto {
   return {
     id: String(row.id),
     alternativeId: String(row.alternativeId),
@@ -18,25 +19,30 @@ function toStudyDto(row: StudyRow, latest: RevisionSummaryRow | undefined): Stud
     name: row.name,
     purpose: row.purpose,
     revisionCount: row.revisionCount,
-    latestRevision: latest ? toRevisionSummary(latest) : null,
+    latestRevision: latest,
     createdAt: row.createdAt.toISOString(),
     createdBy: person(row.createdById, row.createdByName),
   };
 }
 
-async function studyDto(db: DbOrTx, row: StudyRow): Promise<StudyDto> {
-  return toStudyDto(row, (await latestRevisionsOf(db, [row.id])).get(row.id));
+/** The studies with their latest revisions, each with its current assessment. */
+async function studyDtos(db: DbOrTx, rows: StudyRow[], actorId: number): Promise<StudyDto[]> {
+  const latest = await latestRevisionsOf(db, rows.map((r) => r.id));
+  const revisions: RevisionSummaryRow[] = [...latest.values()];
+  const assessments = await currentAssessments(db, revisions, actorId);
+  return rows.map((r) => {
+    const revision = latest.get(r.id);
+    return toStudyDto(r, revision ? toRevisionSummary(revision, assessments.get(revision.id)!) : null);
+  });
 }
 
 export async function listAlternativeStudies(db: DbOrTx, user: SessionUser, alternativeId: number): Promise<StudyDto[]> {
   await loadAlternative(db, user, alternativeId, "read");
-  const rows = await listStudies(db, alternativeId);
-  const latest = await latestRevisionsOf(db, rows.map((r) => r.id));
-  return rows.map((r) => toStudyDto(r, latest.get(r.id)));
+  return studyDtos(db, await listStudies(db, alternativeId), user.id);
 }
 
 export async function getStudy(db: DbOrTx, user: SessionUser, id: number): Promise<StudyDto> {
-  return studyDto(db, await loadWithAccess(db, user, "Study", () => findStudy(db, id), "read"));
+  return (await studyDtos(db, [await loadWithAccess(db, user, "Study", () => findStudy(db, id), "read")], user.id))[0];
 }
 
 /**
@@ -66,12 +72,12 @@ export async function createStudy(
       details: {
         alternativeId,
         name: input.name,
-        firstRevision: first && { id: first.id, number: 1, documentSha256: first.sha256, engineVersion: first.engineVersion },
+        firstRevision: first && { id: first.id, number: 1, documentSha256: first.sha256, engineVersion: first.engineVersion, assessmentId: first.assessmentId },
       },
     });
     return studyId;
   });
-  return studyDto(db, (await findStudy(db, id))!);
+  return (await studyDtos(db, [(await findStudy(db, id))!], user.id))[0];
 }
 
 export async function patchStudy(db: DbOrTx, user: SessionUser, id: number, patch: PatchStudy, ip?: string): Promise<StudyDto> {
@@ -80,5 +86,5 @@ export async function patchStudy(db: DbOrTx, user: SessionUser, id: number, patc
     await updateStudy(tx, id, patch);
     await writeAudit(tx, { actorId: user.id, action: "study.update", objectType: "study", objectId: id, ip, details: { ...patch } });
   });
-  return studyDto(db, (await findStudy(db, id))!);
+  return (await studyDtos(db, [(await findStudy(db, id))!], user.id))[0];
 }

@@ -5,14 +5,14 @@
  */
 import type { SweepResult } from "../../shared/schemas/result.js";
 import type { SignReviewInput, SummaryDto, SummaryListItemDto } from "../../shared/schemas/review.js";
+import type { SignedSummaryPayload } from "../../shared/schemas/summary.js";
 import type { AppContext } from "../app-context.js";
 import type { Config } from "../config.js";
 import type { DbOrTx } from "../db/client.js";
 import { isUniqueViolation } from "../db/pg-errors.js";
 import { writeAudit } from "../db/queries/audit.js";
-import { findCurrentCriteria, type CriteriaVersionRow } from "../db/queries/criteria.js";
-import { findAlternative } from "../db/queries/alternatives.js";
-import { findProjectById, listProjectsOfMember } from "../db/queries/projects.js";
+import { findCurrentCriteria } from "../db/queries/criteria.js";
+import { listProjectsOfMember } from "../db/queries/projects.js";
 import { decideReviewRequest, findReviewRequest, insertReviewEvent } from "../db/queries/review.js";
 import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
 import { findSignature, findSignatureByJws, insertSignature, listSignatures, type SignatureRow } from "../db/queries/signatures.js";
@@ -25,20 +25,14 @@ import { ANY_ROLE, assertRole } from "./access.js";
 import type { SessionUser } from "./auth.js";
 import { assertAssignedReviewer, assertReviewer, revisionFor } from "./review.js";
 import { assertBasesConfirmed, assertSameAsPreview } from "./review-sign-checks.js";
-import { notifySigned } from "./review-mail.js";
+import { appLinks, notifySigned } from "./review-mail.js";
 import { signStabilitySummary } from "./signing.js";
-import { buildSummaryPayload } from "./summary-payload.js";
-
-export const JWKS_PATH = "/.well-known/jwks.json";
+import { summaryPayloadOfRevision } from "./summary-payload.js";
 
 export interface RecordSignatureInput {
-  revision: RevisionRow;
+  revision: Pick<RevisionRow, "id" | "projectId">;
   /** The revision's review request (in review), set to signed. */
-  requestId: number;
-  projectName: string;
-  alternativeName: string;
-  /** The criteria version the summary states: every basis must stand confirmed (409 `criteria_unconfirmed`). */
-  criteria: Pick<CriteriaVersionRow, "version" | "criteria" | "basisConfirmations">;
+  request: { id: number };
   signer: { id: number; name: string; email: string };
   signedAt: Date;
   statement: string;
@@ -48,23 +42,18 @@ export interface RecordSignatureInput {
 }
 
 /**
- * Inside the caller's transaction: refuses criteria whose basis no reviewer confirmed, builds the summary of the
- * stored revision (refused when it is not the preview the signer read), signs it, stores the signature
- * (JWS, key id, payload, payload hash), marks the review signed, and records the history and audit events.
- * Used by the sign route and by the demo seed. Returns the summary id.
+ * Inside the caller's transaction: refuses criteria whose basis no reviewer confirmed (409 `criteria_unconfirmed`),
+ * builds the summary of the stored revision (its current assessment, which the signature row names; refused with
+ * 409 `preview_outdated` when it is not the preview the signer read), signs it, stores the signature (JWS, key id,
+ * payload, payload hash, assessment), marks the review signed, and records the history and audit events. Used by the
+ * sign route and by the demo seed. Returns the summary id.
  */
 export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing">, input: RecordSignatureInput): Promise<number> {
   const { revision, signer, signedAt } = input;
-  assertBasesConfirmed(input.criteria);
-  const payload = await buildSummaryPayload(tx, {
-    revision,
-    projectName: input.projectName,
-    alternativeName: input.alternativeName,
-    criteria: input.criteria.criteria,
-    signer: { name: signer.name, email: signer.email },
-    signedAt,
-    statement: input.statement,
-  });
+  const criteria = await findCurrentCriteria(tx, revision.projectId);
+  if (!criteria) throw AppError.conflict("The project has no design wind and criteria yet: a summary states its margins against them.");
+  assertBasesConfirmed(criteria);
+  const { payload, assessmentId } = await summaryPayloadOfRevision(tx, revision.id, signer, { signedAt, statement: input.statement });
   if (input.previewSha256 !== undefined) assertSameAsPreview(payload, input.previewSha256);
   const signed = await signStabilitySummary(config, payload);
   const payloadSha256 = canonicalSha256Hex(signed.summary);
@@ -76,8 +65,9 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     payload: signed.summary,
     payloadSha256,
     signedAt,
+    assessmentId,
   });
-  await decideReviewRequest(tx, input.requestId, "signed", signer.id, signedAt);
+  await decideReviewRequest(tx, input.request.id, "signed", signer.id, signedAt);
   await insertReviewEvent(tx, { revisionId: revision.id, kind: "signed", actorId: signer.id, note: input.statement, at: signedAt });
   await writeAudit(tx, {
     actorId: signer.id,
@@ -85,7 +75,7 @@ export async function recordSignature(tx: DbOrTx, config: Pick<Config, "signing"
     objectType: "revision",
     objectId: revision.id,
     ip: input.ip,
-    details: { summaryId: id, kid: signed.kid, criteriaVersion: input.criteria.version, payloadSha256 },
+    details: { summaryId: id, kid: signed.kid, assessmentId, criteriaVersion: payload.assessment.computedFrom.criteriaVersion, payloadSha256 },
   });
   return id;
 }
@@ -108,13 +98,8 @@ export async function signRevision(
   const revision = await revisionFor(db, user, revisionId, ["reviewer"]);
   await assertReviewer(db, user, revision, "sign a revision");
   const full = await findRevision(db, revisionId);
-  const [project, alternative, criteria, signer] = await Promise.all([
-    findProjectById(db, revision.projectId, user.id),
-    findAlternative(db, revision.alternativeId),
-    findCurrentCriteria(db, revision.projectId),
-    findUserById(db, user.id),
-  ]);
-  if (!full || !project || !alternative || !signer) throw AppError.notFound("Revision");
+  const [criteria, signer] = await Promise.all([findCurrentCriteria(db, revision.projectId), findUserById(db, user.id)]);
+  if (!full || !signer) throw AppError.notFound("Revision");
   if (!criteria) {
     throw AppError.conflict(
       "The project has no design wind and criteria yet: the summary states the required speeds and margins, so a reviewer or administrator must save the criteria first.",
@@ -134,10 +119,7 @@ export async function signRevision(
       assertAssignedReviewer(request, user, revision, "sign it");
       return recordSignature(tx, config, {
         revision: full,
-        requestId: request.id,
-        projectName: project.name,
-        alternativeName: alternative.name,
-        criteria,
+        request,
         signer,
         signedAt,
         statement,
@@ -154,12 +136,25 @@ export async function signRevision(
   return { summaryId: String(summaryId) };
 }
 
-function outcome(row: SignatureRow): SummaryListItemDto["outcome"] {
-  const statuses = row.payload.margins.map((m) => m.status);
+/** The checks of a signed summary with their status, in its order: format 2 from its assessment, format 1 as signed. */
+function checksOf(payload: SignedSummaryPayload): { phenomenon: string; status: string }[] {
+  if (payload.format === "stillspan.summary/1") return payload.margins;
+  const a = payload.assessment;
+  const margins = a.margins ? Object.entries(a.margins).map(([phenomenon, m]) => ({ phenomenon, status: m.status as string })) : [];
+  return [...margins, { phenomenon: "vortexOnset", status: a.vortexShedding.status }];
+}
+
+function outcome(payload: SignedSummaryPayload): SummaryListItemDto["outcome"] {
+  const statuses = checksOf(payload).map((m) => m.status);
   if (statuses.includes("fail")) return "fail";
   if (statuses.includes("undetermined")) return "undetermined";
   if (statuses.includes("investigate")) return "investigate";
   return "pass";
+}
+
+function flutterSpeedOf(payload: SignedSummaryPayload): number | null {
+  if (payload.format === "stillspan.summary/1") return payload.flutter?.speedMps ?? null;
+  return payload.assessment.flutter.found ? payload.assessment.flutter.speedMps : null;
 }
 
 /** GET /api/summaries — signed summaries of the caller's projects (every project for administrators). */
@@ -176,11 +171,11 @@ export async function listSummaries(db: DbOrTx, user: SessionUser): Promise<Summ
     revisionNumber: r.revisionNumber,
     signer: { id: String(r.signerId), name: r.signerName },
     signedAt: r.signedAt.toISOString(),
-    flutterSpeedMps: r.payload.flutter?.speedMps ?? null,
-    outcome: outcome(r),
-    attention: r.payload.margins.flatMap((m) =>
+    flutterSpeedMps: flutterSpeedOf(r.payload),
+    outcome: outcome(r.payload),
+    attention: checksOf(r.payload).flatMap((m) =>
       m.status === "fail" || m.status === "undetermined" || m.status === "investigate" || m.status === "not-evaluated"
-        ? [{ phenomenon: m.phenomenon, status: m.status }]
+        ? [{ phenomenon: m.phenomenon, status: m.status as "fail" | "undetermined" | "investigate" | "not-evaluated" }]
         : [],
     ),
     current: r.currentSignatureId === r.id,
@@ -209,8 +204,11 @@ export function summaryBranches(result: SweepResult | undefined): SummaryDto["br
   }));
 }
 
-/** GET /api/summaries/:id — the payload as signed, its JWS, and whether it is still current. */
-export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Promise<SummaryDto> {
+/**
+ * GET /api/summaries/:id — the payload as signed, its JWS, whether it is still current, and the absolute addresses
+ * of the public verification page and the keys.
+ */
+export async function getSummary(db: DbOrTx, config: Pick<Config, "publicUrl">, user: SessionUser, id: number): Promise<SummaryDto> {
   const row = await readableSignature(db, user, id);
   const revision = await findRevision(db, row.revisionId);
   return {
@@ -229,12 +227,18 @@ export async function getSummary(db: DbOrTx, user: SessionUser, id: number): Pro
     newestRevisionNumber: row.newestRevisionNumber,
     branches: summaryBranches(revision?.result),
     branchSampling: revision?.result.sampling ?? null,
-    jwksUrl: JWKS_PATH,
+    jwksUrl: appLinks.jwks(config.publicUrl),
+    verificationUrl: appLinks.verify(config.publicUrl, verificationCode(row.jws)),
   };
 }
 
-/** GET /api/summaries/:id/pdf — the PDF copy with the JWS and its verification code. */
-export async function getSummaryPdf(db: DbOrTx, user: SessionUser, id: number): Promise<{ pdf: Buffer; fileName: string }> {
+/** GET /api/summaries/:id/pdf — the PDF copy with its verification code, the page that checks it, and the JWS in an appendix. */
+export async function getSummaryPdf(
+  db: DbOrTx,
+  config: Pick<Config, "publicUrl">,
+  user: SessionUser,
+  id: number,
+): Promise<{ pdf: Buffer; fileName: string }> {
   const row = await readableSignature(db, user, id);
   const revision = await findRevision(db, row.revisionId);
   const current = await currentOf(db, row);
@@ -243,6 +247,8 @@ export async function getSummaryPdf(db: DbOrTx, user: SessionUser, id: number): 
     jws: row.jws,
     branches: revision?.result.modes ?? [],
     supersededBy: current ? { revisionNumber: current.revisionNumber } : null,
+    verificationUrl: appLinks.verify(config.publicUrl, verificationCode(row.jws)),
+    jwksUrl: appLinks.jwks(config.publicUrl),
   });
   const safe = `${row.studyName}-rev${row.revisionNumber}`.replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80);
   return { pdf, fileName: `stability-summary-${safe || row.id}.pdf` };

@@ -1,135 +1,82 @@
 /**
- * Builds the signed stability summary (`stillspan.summary/1`) of one stored revision. Every number is copied from
- * what is stored — the revision's document and sweep result, the project's current criteria evaluated by
- * shared/criteria, the aerodynamic data set the derivatives came from — never recomputed by the engine here.
+ * Builds the signed stability summary (`stillspan.summary/2`) of one stored revision: its inputs, the revision's
+ * current stored assessment (every figure, margin and warning — never recomputed here), what changed since the
+ * study's previously signed revision, and who prepared, checked and approved it. One function, `summaryPayloadOfRevision`,
+ * builds it for the signature (inside the signing transaction) and for a preview of what the reviewer will sign.
  */
-import { evaluateCriteria } from "../../shared/criteria/evaluate-criteria.js";
-import { screenStudy } from "../../shared/criteria/screen-study.js";
-import { sweepMargins } from "../../shared/criteria/sweep-margins.js";
-import { PHENOMENA, type ProjectCriteria } from "../../shared/schemas/criteria.js";
-import type { DerivativeConventionInput } from "../../shared/schemas/datasets.js";
-import type { StudyAerodynamics } from "../../shared/schemas/study.js";
-import { SUMMARY_FORMAT, type SummaryPayload } from "../../shared/schemas/summary.js";
+import { diffJson } from "../../shared/diff-json.js";
+import { SUMMARY_FORMAT, type SummaryChanges, type SummaryPayload } from "../../shared/schemas/summary.js";
+import { fieldLabel } from "../../shared/study-field-label.js";
 import type { DbOrTx } from "../db/client.js";
+import { findAlternative } from "../db/queries/alternatives.js";
 import { listDatasets } from "../db/queries/datasets.js";
-import type { RevisionRow } from "../db/queries/revisions.js";
+import { findProjectById } from "../db/queries/projects.js";
+import { findReviewRequest } from "../db/queries/review.js";
+import { findRevision, type RevisionRow } from "../db/queries/revisions.js";
+import { findPreviousSignature } from "../db/queries/signatures.js";
+import { AppError } from "../errors.js";
+import { currentAssessment } from "./assessments.js";
+import { matchingDataset, summaryInputs } from "./summary-inputs.js";
 
-type Dataset = Awaited<ReturnType<typeof listDatasets>>[number];
+/** Most changed fields a summary lists one by one (a re-measured derivative table changes hundreds). */
+const MAX_CHANGES = 50;
 
-const ABSCISSA: Record<DerivativeConventionInput["abscissa"], string> = {
-  Ur: "U/(fB)",
-  "Ur-half": "U/(fb), b = B/2",
-  K: "K = Bω/U",
-  "k-half": "k = bω/U, b = B/2",
-};
-const NORMALISATION: Record<DerivativeConventionInput["normalisation"], string> = { B: "½ρU²B, ½ρU²B²", "2B": "½ρU²(2B), ½ρU²(2B²)" };
-const SIGN: Record<DerivativeConventionInput["sign"], string> = { "h-down": "h and L downward", "h-up": "h and L upward" };
-const COLUMNS = ["H1", "H2", "H3", "H4", "A1", "A2", "A3", "A4"] as const;
-
-function sameNumbers(a: readonly number[] | undefined, b: readonly number[] | undefined, length: number): boolean {
-  const x = a ?? new Array<number>(length).fill(0);
-  const y = b ?? new Array<number>(length).fill(0);
-  if (x.length !== y.length) return false;
-  return x.every((v, i) => Math.abs(v - y[i]) <= 1e-9 * Math.max(1, Math.abs(v), Math.abs(y[i])));
-}
-
-/**
- * The flutter-derivative data set of the alternative whose converted table is the study's table (the workspace
- * copies a data set's converted table into the study document), or undefined when the table was typed in.
- */
-export function matchingDataset(datasets: Dataset[], aero: StudyAerodynamics): Dataset | undefined {
-  if (aero.model !== "tabulated") return undefined;
-  const n = aero.reducedVelocity.length;
-  return datasets.find((d) => {
-    if (d.kind !== "flutter-derivatives" || !("reducedVelocity" in d.converted)) return false;
-    const c = d.converted as Record<string, number[]>;
-    return sameNumbers(c.reducedVelocity, aero.reducedVelocity, n) && COLUMNS.every((k) => sameNumbers(c[k], aero[k], n));
-  });
-}
-
-function facilityText(d: Dataset): string | null {
-  const p = d.provenance;
-  const parts = [
-    p.facility,
-    p.modelScale ? `1:${p.modelScale} section model` : "",
-    `${p.flow} flow${p.turbulenceIntensityPct !== null ? ` (I_u ${p.turbulenceIntensityPct} %)` : ""}`,
-    p.reynoldsNumber ? `Re ${p.reynoldsNumber.toExponential(2)}` : "",
-    p.testDate ? `tested ${p.testDate}` : "",
-  ].filter(Boolean);
-  return parts.length ? parts.join(", ").slice(0, 500) : null;
-}
-
-function aerodynamicData(aero: StudyAerodynamics, dataset: Dataset | undefined): SummaryPayload["aerodynamicData"] {
-  if (aero.model === "flat-plate") {
-    return {
-      name: "Thin-plate (Theodorsen) flutter derivatives",
-      origin: "theoretical",
-      sha256: null,
-      deliveredConvention: null,
-      testedReducedVelocity: null,
-      facility: null,
-    };
-  }
-  if (aero.model === "quasi-steady") {
-    return {
-      name: `Quasi-steady theory (dC_L/dα ${aero.liftSlope}, C_D ${aero.dragCoefficient}, dC_M/dα ${aero.momentSlope} per rad)`,
-      origin: "theoretical",
-      sha256: null,
-      deliveredConvention: null,
-      testedReducedVelocity: null,
-      facility: null,
-    };
-  }
-  const ur = aero.reducedVelocity;
-  if (!dataset) {
-    return {
-      name: "Flutter derivatives entered in the study (no matching data set on record)",
-      origin: "measured",
-      sha256: null,
-      deliveredConvention: null,
-      testedReducedVelocity: [ur[0], ur[ur.length - 1]],
-      facility: null,
-    };
-  }
-  const convention = dataset.convention;
-  return {
-    name: dataset.name,
-    origin: "measured",
-    sha256: dataset.fileSha256,
-    deliveredConvention: convention
-      ? { abscissa: ABSCISSA[convention.abscissa], normalisation: NORMALISATION[convention.normalisation], signConvention: SIGN[convention.sign] }
-      : null,
-    testedReducedVelocity: [dataset.testedMin, dataset.testedMax],
-    facility: facilityText(dataset),
-  };
-}
-
-export interface SummaryInput {
+interface SummaryInput {
   revision: RevisionRow;
   projectName: string;
   alternativeName: string;
-  criteria: ProjectCriteria;
-  signer: { name: string; email: string };
+  /** The reviewer who signs (the revision's assigned reviewer). */
+  signer: { id: number; name: string; email: string };
+  /** When the revision was submitted for checking (its review request). */
+  submittedAt: Date;
   signedAt: Date;
   statement: string;
 }
 
-/** The summary payload of a revision, ready to be signed (validated by the signer against the schema). */
-export async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Promise<SummaryPayload> {
-  const { revision, criteria } = input;
-  const { document, result } = revision;
-  const evaluated = evaluateCriteria(criteria);
-  let screening: ReturnType<typeof screenStudy> | null;
-  try {
-    screening = document.air.density > 0 ? screenStudy(document, criteria) : null;
-  } catch {
-    screening = null; // screening is optional for the margins; the sweep's own numbers still count
-  }
-  const margins = sweepMargins(result, evaluated.required, screening);
-  const dataset = matchingDataset(await listDatasets(db, revision.alternativeId), document.aerodynamics);
-  const divergenceSpeed = result.divergence?.speed ?? revision.critical.divergenceSpeedMps;
+const dateText = (d: Date) => d.toISOString().slice(0, 10);
 
+/** The field-level differences from the study's previously signed revision (the same diff as the revision diff). */
+async function changesSincePreviousSignature(db: DbOrTx, revision: RevisionRow): Promise<SummaryChanges> {
+  const previous = await findPreviousSignature(db, revision.studyId, revision.number);
+  if (!previous) {
+    return { since: null, items: [], omitted: 0, statement: "The first signed revision of this study: there is no earlier signed revision to compare with." };
+  }
+  const before = await findRevision(db, previous.revisionId);
+  const all = before ? diffJson(before.document, revision.document) : [];
+  const items = all.slice(0, MAX_CHANGES).map((c) => ({
+    path: c.path,
+    label: fieldLabel(c.path),
+    kind: c.kind,
+    ...(c.old !== undefined ? { old: c.old as never } : {}),
+    ...(c.new !== undefined ? { new: c.new as never } : {}),
+  }));
+  const since = `since revision ${previous.revisionNumber} (signed ${dateText(previous.signedAt)})`;
   return {
+    since: {
+      summaryId: String(previous.id),
+      revisionNumber: previous.revisionNumber,
+      contentHash: before?.documentSha256 ?? revision.documentSha256,
+      signedAt: previous.signedAt.toISOString(),
+    },
+    items,
+    omitted: all.length - items.length,
+    statement:
+      all.length === 0
+        ? `No input changed ${since}: the same study document.`
+        : `${all.length} field${all.length === 1 ? "" : "s"} of the study document changed ${since}${all.length > items.length ? `; the first ${items.length} are listed` : ""}.`,
+  };
+}
+
+/**
+ * The summary payload of a revision, ready to be signed (validated by the signer against the schema), and the id of
+ * the stored assessment it states (the signature row keeps it).
+ */
+async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Promise<{ payload: SummaryPayload; assessmentId: number }> {
+  const { revision, signer } = input;
+  const { document } = revision;
+  const stored = await currentAssessment(db, revision, signer.id);
+  const dataset = matchingDataset(await listDatasets(db, revision.alternativeId), document.aerodynamics);
+  const payload: SummaryPayload = {
     format: SUMMARY_FORMAT,
     project: { id: String(revision.projectId), name: input.projectName },
     alternative: { id: String(revision.alternativeId), name: input.alternativeName },
@@ -139,32 +86,53 @@ export async function buildSummaryPayload(db: DbOrTx, input: SummaryInput): Prom
       number: revision.number,
       contentHash: revision.documentSha256,
       createdAt: revision.createdAt.toISOString(),
+      changeNote: revision.changeNote,
     },
     engineVersion: revision.engineVersion,
-    model: { kind: "section-model", degreesOfFreedom: document.structure.modes.length, aerodynamics: document.aerodynamics.model },
-    aerodynamicData: aerodynamicData(document.aerodynamics, dataset),
-    sweep: { fromMps: document.sweep.from, toMps: document.sweep.to, airDensityKgM3: document.air.density },
-    flutter: result.flutter
-      ? {
-          speedMps: result.flutter.speed,
-          frequencyHz: result.flutter.frequency,
-          mode: result.flutter.mode,
-          kind: result.flutter.kind,
-          reducedVelocity: result.flutter.reducedVelocity,
-        }
-      : null,
-    divergence: divergenceSpeed !== null && divergenceSpeed !== undefined ? { speedMps: divergenceSpeed, frequencyHz: 0 } : null,
-    designWind: {
-      meanSpeedMps: evaluated.designWind.meanSpeedMps,
-      basicSpeedMps: evaluated.designWind.basicSpeedMps,
-      deckHeightM: evaluated.designWind.deckHeightM,
-      sources: evaluated.designWind.sources,
+    inputs: summaryInputs(document, dataset),
+    assessmentId: String(stored.id),
+    assessment: stored.assessment,
+    changes: await changesSincePreviousSignature(db, revision),
+    signoff: {
+      prepared: { name: revision.authorName ?? "a former user", role: "analyst", at: revision.createdAt.toISOString() },
+      checked: { name: signer.name, role: "reviewer", submittedAt: input.submittedAt.toISOString(), at: input.signedAt.toISOString() },
+      approved: { name: signer.name, at: input.signedAt.toISOString(), by: "signing this summary (Ed25519 signature)" },
     },
-    criteria: PHENOMENA.map((phenomenon) => ({ phenomenon, ...evaluated.required[phenomenon] })),
-    margins: PHENOMENA.map((phenomenon) => ({ phenomenon, ...margins[phenomenon] })),
-    warnings: result.warnings.map((w) => ({ code: w.code, message: w.message })),
-    signer: input.signer,
+    signer: { name: signer.name, email: signer.email },
     signedAt: input.signedAt.toISOString(),
     statement: input.statement,
   };
+  return { payload, assessmentId: stored.id };
+}
+
+/**
+ * The summary payload a reviewer signs for a revision, with their statement: everything loaded from the database by
+ * the revision's id. The signature builds it with this function inside its transaction; a preview built with it for
+ * the same revision, signer and statement is the same payload but for the signing time. 404 when the revision is
+ * gone; 409 when it was never submitted for review (a summary names when it was submitted for checking).
+ */
+export async function summaryPayloadOfRevision(
+  db: DbOrTx,
+  revisionId: number,
+  signer: { id: number; name: string; email: string },
+  options: { signedAt?: Date; statement: string },
+): Promise<{ payload: SummaryPayload; assessmentId: number }> {
+  const revision = await findRevision(db, revisionId);
+  if (!revision) throw AppError.notFound("Revision");
+  const [project, alternative, request] = [
+    await findProjectById(db, revision.projectId, signer.id),
+    await findAlternative(db, revision.alternativeId),
+    await findReviewRequest(db, revisionId),
+  ];
+  if (!project || !alternative) throw AppError.notFound("Revision");
+  if (!request) throw AppError.conflict(`Revision ${revision.number} has not been submitted for review: there is no summary to sign yet.`);
+  return buildSummaryPayload(db, {
+    revision,
+    projectName: project.name,
+    alternativeName: alternative.name,
+    signer,
+    submittedAt: request.submittedAt,
+    signedAt: options.signedAt ?? new Date(),
+    statement: options.statement,
+  });
 }

@@ -50,8 +50,9 @@ const LABEL: Record<Phenomenon, string> = {
   gallopingOnset: "Galloping onset",
 };
 
-const f1 = (value: number) => value.toFixed(1);
 const f2 = (value: number) => value.toFixed(2);
+/** Speeds to 0.01 m/s, as the assessment prints them everywhere (shared/assessment/format.ts). */
+const speed = (value: number) => value.toFixed(2);
 
 const VORTEX_INVESTIGATE =
   "lock-in is possible within the design wind range: investigate the vortex-induced amplitudes and deck " +
@@ -111,7 +112,7 @@ function marginOf(phenomenon: Phenomenon, found: CriticalSpeed | null, requiredS
   const margin = found.speedMps / requiredSpeedMps;
   const reached = margin >= 1;
   if (found.kind === "above") {
-    const upTo = `${label}: none found up to ${f1(found.speedMps)} m/s`;
+    const upTo = `${label}: none found up to ${speed(found.speedMps)} m/s`;
     return {
       ...base,
       status: reached ? (onset ? "clear" : "pass") : onset ? "investigate" : "undetermined",
@@ -119,13 +120,13 @@ function marginOf(phenomenon: Phenomenon, found: CriticalSpeed | null, requiredS
       marginIsLowerBound: true,
       criticalSpeedMps: null,
       statement: reached
-        ? `${upTo} ≥ required ${f1(requiredSpeedMps)} m/s (margin ≥ ${f2(margin)}).`
+        ? `${upTo} ≥ required ${speed(requiredSpeedMps)} m/s (margin ≥ ${f2(margin)}).`
         : onset
-          ? `${upTo}, below the required ${f1(requiredSpeedMps)} m/s: ${VORTEX_INVESTIGATE}`
-          : `${upTo}, below the required ${f1(requiredSpeedMps)} m/s — extend the range.`,
+          ? `${upTo}, below the required ${speed(requiredSpeedMps)} m/s: ${VORTEX_INVESTIGATE}`
+          : `${upTo}, below the required ${speed(requiredSpeedMps)} m/s — extend the range.`,
     };
   }
-  const comparison = `${label}: ${f1(found.speedMps)} m/s ${reached ? "≥" : "<"} required ${f1(requiredSpeedMps)} m/s`;
+  const comparison = `${label}: ${speed(found.speedMps)} m/s ${reached ? "≥" : "<"} required ${speed(requiredSpeedMps)} m/s`;
   if (onset) {
     return {
       ...base,

@@ -1,7 +1,6 @@
 import type { ProjectCriteriaInput, ScreeningOptions, ScreeningStudy } from "../schemas/criteria";
 import { evaluateCriteria, type EvaluatedCriteria } from "./evaluate-criteria";
 import { computeMargins, type Margins } from "./margins";
-import { screenDivergence, type DivergenceScreening } from "./screen-divergence";
 import { screenGalloping, type GallopingScreening } from "./screen-galloping";
 import { screenVortexShedding, type VortexSheddingScreening } from "./screen-vortex-shedding";
 import { screeningCriticals } from "./screening-criticals";
@@ -14,25 +13,28 @@ export interface ScreeningResult {
   required: EvaluatedCriteria["required"] | null;
   vortexShedding: VortexSheddingScreening;
   galloping: GallopingScreening;
-  divergence: DivergenceScreening;
-  /** Margins of the screening speeds against the project's required speeds (flutter is the sweep's). */
+  /**
+   * Margins of the onsets against the project's required speeds. Flutter and divergence come from the sweep: the
+   * revision's assessment (shared/assessment) states them, so they are not evaluated here.
+   */
   margins: Margins | null;
   cautions: readonly string[];
 }
 
 /**
- * Screening of one deck study for vortex shedding, galloping and torsional divergence.
+ * Screening of one deck study for vortex shedding and galloping.
  *
- * **Method**: {@link screenVortexShedding} (v_crit = D n / St, Scruton numbers, lock-in), {@link screenGalloping}
- * (E.18 and Den Hartog) and {@link screenDivergence} (E.24); each onset against the project's required speed:
- * vortex shedding "investigate" / "clear", galloping and divergence pass / fail, or not evaluated with the reason.
+ * **Method**: {@link screenVortexShedding} (v_crit = D n / St, Scruton numbers, lock-in) and {@link screenGalloping}
+ * (E.18 and Den Hartog); each onset against the project's required speed: vortex shedding "investigate" / "clear",
+ * galloping pass / fail, or not evaluated with the reason. Torsional divergence is the sweep's (the engine reports
+ * the closed form of E.24 and the static instability; shared/assessment names both).
  *
  * **Notes**: EN 1991-1-4:2005 Annex E and Den Hartog; each check lists its assumptions and sources and the
  * result carries the cautions. Results are indicative. Needs ρ > 0.
  *
  * @param study - deck (B, D in m), structure (m kg/m, I kg·m²/m, modes in Hz), air (kg/m³), aerodynamics
  * @param criteria - the project's criteria (optional: without them no required speeds or margins)
- * @param options - measured St, a_G or static coefficients
+ * @param options - measured St, a_G or static lift and drag coefficients
  * @returns the screening result
  */
 export function screenStudy(
@@ -48,12 +50,11 @@ export function screenStudy(
 
   const vortexShedding = screenVortexShedding(study, required?.vortexOnset ?? null, options);
   const galloping = screenGalloping(study, options);
-  const divergence = screenDivergence(study, options);
 
   const criticals = screeningCriticals({ vortexShedding, galloping });
   const margins = required
     ? computeMargins(
-        { vortexOnset: criticals.vortexOnset, gallopingOnset: criticals.gallopingOnset, divergence: divergence.critical },
+        { vortexOnset: criticals.vortexOnset, gallopingOnset: criticals.gallopingOnset },
         required,
         criticals.notes,
       )
@@ -64,7 +65,6 @@ export function screenStudy(
     required,
     vortexShedding,
     galloping,
-    divergence,
     margins,
     cautions: CAUTIONS,
   };

@@ -10,19 +10,16 @@ export interface MomentSlope {
 /**
  * Static moment slope S = dC_M/dα of a study's aerodynamics, in the order of docs/conventions.md §Divergence.
  *
- * **Method**: an explicit value first; else π/2 for the flat plate (Theodorsen's steady limit), the
- * quasi-steady model's momentSlope, a tabulated set's staticMomentSlope, or K²A3* at the table's largest
- * reduced velocity (K = 2π/Ur).
+ * **Method**: π/2 for the flat plate (Theodorsen's steady limit), the quasi-steady model's momentSlope, a
+ * tabulated set's staticMomentSlope, or K²A3* at the table's largest reduced velocity (K = 2π/Ur) — the order the
+ * engine's aerodynamic models follow (shared/engine/aero), so the origin named here is the engine's.
  *
  * **Notes**: K²A3* at finite Ur only approximates the static slope (the K → 0 limit); the origin says so.
  *
- * @param aerodynamics - the study's aerodynamic model, or undefined
- * @param explicitSlope - a slope given with the request, per radian
+ * @param aerodynamics - the study's aerodynamic model
  * @returns the slope with its origin, or null when none can be found
  */
-export function staticMomentSlope(aerodynamics: StudyAerodynamics | undefined, explicitSlope?: number): MomentSlope | null {
-  if (explicitSlope !== undefined) return { value: explicitSlope, origin: "static moment slope given with the screening request" };
-  if (!aerodynamics) return null;
+export function staticMomentSlope(aerodynamics: StudyAerodynamics): MomentSlope | null {
   switch (aerodynamics.model) {
     case "flat-plate":
       return { value: Math.PI / 2, origin: "flat plate: π/2 (steady limit of Theodorsen's theory)" };

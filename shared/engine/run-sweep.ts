@@ -34,7 +34,9 @@ const COUPLED_PARTICIPATION = 0.1;
  * aerodynamic model of `createAeroModel`; `trackPoles` solves and tracks every branch over the grid (with local
  * refinement), `locateFlutter` finds the lowest zero-damping crossing over all oscillatory branches to 1e-4 m/s
  * (Brent), `locateStaticCrossings` the real roots crossing zero (static instability, one warning, lowest first); divergence from its closed
- * form (`divergenceSpeed`) and Selberg's estimate (`selbergSpeed`) complete the result.
+ * form (`divergenceSpeed`: in `divergence` inside [from, to], in `divergenceOutsideSweep` outside it) and Selberg's
+ * estimate (`selbergSpeed`) complete the result. The flutter point says whether its own reduced frequency lies
+ * inside the table's tested range (`insideTestedRange`; null without a table).
  * Notes: deterministic (no randomness, no clocks); results are indicative — critical cases need wind-tunnel
  * verification and review by a licensed engineer under local codes and standards.
  * @param study a study document that passed `studyDocumentSchema`
@@ -75,6 +77,8 @@ export function runSweep(study: StudyDocument, options: SweepOptions = {}): Swee
           : modes[dominant].dof === "torsion"
             ? "torsional"
             : "heave",
+      // The critical pole's own K against the table's tested range (the same test that marks extrapolated steps).
+      insideTestedRange: aero.reducedVelocityRange === null ? null : !aero.isExtrapolated(s.reducedFrequency),
     };
   }
   const heave = modes.find((m) => m.dof === "heave")!;
@@ -95,10 +99,13 @@ export function runSweep(study: StudyDocument, options: SweepOptions = {}): Swee
     flutter: critical,
     staticCrossings: locateStaticCrossings(system, track),
     quasiSteady: aero.kind === "quasi-steady",
+    testedRange: aero.reducedVelocityRange,
   });
+  const divergenceInside = uDiv !== null && uDiv >= from && uDiv <= to;
   return {
     flutter,
-    divergence: uDiv !== null && uDiv >= from && uDiv <= to ? { speed: uDiv } : null,
+    divergence: uDiv !== null && divergenceInside ? { speed: uDiv } : null,
+    divergenceOutsideSweep: uDiv !== null && !divergenceInside ? { speed: uDiv } : null,
     selberg,
     modes: modes.map((mode, j) => ({
       id: mode.id,

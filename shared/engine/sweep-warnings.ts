@@ -10,6 +10,8 @@ export interface WarningInputs {
   /** Physical static crossings, lowest first (`locateStaticCrossings`). */
   readonly staticCrossings: readonly CriticalPoint[];
   readonly quasiSteady: boolean;
+  /** The derivative table's tested Ur range [min, max]; null for models without a table. */
+  readonly testedRange: readonly [number, number] | null;
 }
 
 const fmt = (speed: number) => `${Number(speed.toFixed(3))} m/s`;
@@ -17,11 +19,13 @@ const pct = (ratio: number) => `${ratio >= 0 ? "+" : "−"}${Math.abs(100 * rati
 
 /**
  * The warnings of a sweep result, in a fixed order: unstable-at-start, pk-fold, quasi-steady-flutter,
- * static-instability (one warning for every physical static crossing, lowest first in `speeds`), extrapolated-derivatives (one per contiguous speed range, `speeds` = [first, last]),
- * tracking-ambiguous, no-convergence.
+ * static-instability (one warning for every physical static crossing, lowest first in `speeds`), extrapolated-derivatives
+ * (one per branch and contiguous speed range, by first speed then branch: `branch`, `speeds` = [first, last] and that
+ * branch's `reducedVelocities` [lowest, highest]), tracking-ambiguous, no-convergence.
  *
- * Method: read off the tracked branches and the critical points; a speed range is extrapolated when any
- * tracked branch's reduced frequency at that speed lies outside the data's range.
+ * Method: read off the tracked branches and the critical points; a speed range of a branch is extrapolated when that
+ * branch's reduced frequency lies outside the data's range at each of its steps. Per branch, because the branches
+ * leave the table at different speeds: the heave branch (low frequency, high Ur) usually long before the torsional one.
  * @returns warnings with plain messages (the UI explains each code)
  */
 export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
@@ -64,29 +68,10 @@ export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
         "term of the static balance included (H3*, H4*, A4* as well as A3*), so it can differ from the closed-form divergence speed." +
         (more.length > 0 ? ` Further real poles cross zero at ${more.map(where).join(", ")}; the lowest speed governs.` : ""),
       speeds: staticCrossings.map((c) => c.speedMps),
+      branches: staticCrossings.map((c) => ids[c.branch]),
     });
   }
-  const steps = track.branches[0];
-  let start = -1;
-  const flush = (end: number) => {
-    const used = ids.filter((_, j) => track.branches[j].slice(start, end + 1).some((s) => s.extrapolated));
-    const a = steps[start].speedMps;
-    const b = steps[end].speedMps;
-    warnings.push({
-      code: "extrapolated-derivatives",
-      message: `From ${fmt(a)} to ${fmt(b)} branch${used.length > 1 ? "es" : ""} ${used.join(", ")} used flutter derivatives held from the end of the table (outside the tested reduced velocities): results there are unreliable.`,
-      speeds: [a, b],
-    });
-  };
-  for (let k = 0; k < steps.length; k++) {
-    const any = track.branches.some((b) => b[k].extrapolated);
-    if (any && start < 0) start = k;
-    if (!any && start >= 0) {
-      flush(k - 1);
-      start = -1;
-    }
-  }
-  if (start >= 0) flush(steps.length - 1);
+  for (const warning of extrapolatedRanges(track, ids, inputs.testedRange)) warnings.push(warning);
   if (track.ambiguousSpeeds.length > 0) {
     warnings.push({
       code: "tracking-ambiguous",
@@ -102,4 +87,54 @@ export function collectSweepWarnings(inputs: WarningInputs): SweepWarning[] {
     });
   }
   return warnings;
+}
+
+const ur = (value: number) => String(Number(value.toPrecision(3)));
+
+/**
+ * One extrapolated-derivatives warning per branch and contiguous range of steps whose derivatives were held from an
+ * end of the table, sorted by first speed, then branch order.
+ */
+function extrapolatedRanges(track: TrackResult, ids: readonly string[], tested: readonly [number, number] | null): SweepWarning[] {
+  const found: { warning: SweepWarning; first: number; branch: number }[] = [];
+  track.branches.forEach((steps, j) => {
+    let start = -1;
+    const flush = (end: number) => {
+      const range = steps.slice(start, end + 1);
+      const a = range[0].speedMps;
+      const b = range[range.length - 1].speedMps;
+      // A static pole (Im λ = 0) has no reduced velocity of its own (the solver floors its K).
+      const urs = range.filter((s) => s.im > 0 && s.reducedFrequency > 0).map((s) => (2 * Math.PI) / s.reducedFrequency);
+      const lowUr = urs.length > 0 ? Math.min(...urs) : null;
+      const highUr = urs.length > 0 ? Math.max(...urs) : null;
+      const staticFrom = range.find((s) => !(s.im > 0))?.speedMps;
+      const below = tested !== null && highUr !== null && highUr < tested[0];
+      const side = tested === null ? "outside the tested range" : below ? `below the lowest tested Ur ${ur(tested[0])}` : `above the highest tested Ur ${ur(tested[1])}`;
+      const urText = lowUr !== null && highUr !== null ? `Ur ${ur(lowUr)}–${ur(highUr)}` : "no oscillation";
+      const staticText = staticFrom !== undefined && lowUr !== null ? `; a static pole from ${fmt(staticFrom)}` : "";
+      found.push({
+        first: a,
+        branch: j,
+        warning: {
+          code: "extrapolated-derivatives",
+          message:
+            `Branch ${ids[j]} from ${fmt(a)} to ${fmt(b)} (${urText}${staticText}, ${side}) used flutter derivatives held ` +
+            "from the end of the table: results on this branch there are unreliable.",
+          speeds: [a, b],
+          branch: ids[j],
+          ...(lowUr !== null && highUr !== null ? { reducedVelocities: [lowUr, highUr] as [number, number] } : {}),
+        },
+      });
+    };
+    for (let k = 0; k < steps.length; k++) {
+      if (steps[k].extrapolated && start < 0) start = k;
+      if (!steps[k].extrapolated && start >= 0) {
+        flush(k - 1);
+        start = -1;
+      }
+    }
+    if (start >= 0) flush(steps.length - 1);
+  });
+  found.sort((x, y) => x.first - y.first || x.branch - y.branch);
+  return found.map((f) => f.warning);
 }

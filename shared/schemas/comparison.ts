@@ -1,19 +1,11 @@
 /**
  * Contract of GET /api/projects/:projectId/comparison: the latest revision of every study of every deck
- * alternative side by side, with margins against the project's required speeds, and per-study trends of the
- * critical speeds over all revisions.
+ * alternative side by side with its assessment (margins against the project's required speeds), and per-study
+ * trends of the critical speeds over all revisions — every figure read from the revisions' stored assessments.
  */
 import { z } from "zod";
-import { criticalSpeedsSchema, personSchema } from "./revisions";
-
-export const comparisonMarginSchema = z.object({
-  status: z.enum(["pass", "fail", "undetermined", "not-evaluated"]).describe("Flutter and divergence are stability limits: pass or fail"),
-  margin: z.number().nullable().describe("critical / required speed, dimensionless (lower bound when marginIsLowerBound)"),
-  marginIsLowerBound: z.boolean(),
-  criticalSpeedMps: z.number().nullable(),
-  requiredSpeedMps: z.number(),
-  statement: z.string(),
-});
+import { storedAssessmentSchema } from "./assessment";
+import { personSchema } from "./revisions";
 
 export const comparisonRowSchema = z.object({
   alternativeId: z.string(),
@@ -28,7 +20,8 @@ export const comparisonRowSchema = z.object({
       createdAt: z.string(),
       author: personSchema.nullable(),
       engineVersion: z.string(),
-      critical: criticalSpeedsSchema,
+      /** The revision's current assessment: critical speeds with their basis, margins, warnings. */
+      assessment: storedAssessmentSchema,
       /** What was computed: the revision document's deck and structure. */
       deck: z.object({ widthM: z.number().describe("Deck width B, m"), depthM: z.number().describe("Deck depth D, m") }),
       structure: z.object({
@@ -46,19 +39,20 @@ export const comparisonRowSchema = z.object({
       aerodynamicModel: z.enum(["tabulated", "flat-plate", "quasi-steady"]),
     })
     .nullable(),
-  /** Null when the project has no criteria yet or the study has no revision. */
-  margins: z.object({ flutter: comparisonMarginSchema, divergence: comparisonMarginSchema }).nullable(),
 });
 
+/** One revision's figures in a trend: read from its current assessment. */
 export const trendPointSchema = z.object({
   revisionId: z.string(),
   number: z.number(),
   createdAt: z.string(),
   changeNote: z.string(),
-  flutterSpeedMps: z.number().nullable(),
+  flutterSpeedMps: z.number().nullable().describe("Flutter speed, m/s; null: none up to sweepToMps"),
   flutterFrequencyHz: z.number().nullable(),
-  divergenceSpeedMps: z.number().nullable(),
-  sweepToMps: z.number(),
+  divergenceSpeedMps: z.number().nullable().describe("The divergence figure the margin uses, m/s"),
+  divergenceBasis: z.enum(["closed-form", "static-instability", "none"]),
+  sweepToMps: z.number().describe("Highest speed solved, m/s"),
+  warningCount: z.number(),
 });
 
 export const comparisonSchema = z.object({
@@ -78,4 +72,3 @@ export const comparisonSchema = z.object({
 });
 export type ComparisonDto = z.infer<typeof comparisonSchema>;
 export type ComparisonRow = z.infer<typeof comparisonRowSchema>;
-export type ComparisonMargin = z.infer<typeof comparisonMarginSchema>;

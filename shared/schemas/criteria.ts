@@ -214,7 +214,6 @@ export const screeningOptionsSchema = object({
   dragCoefficient: number("Static drag coefficient C_D on ½ρU²B, dimensionless")
     .min(0, { error: "must be at least 0" })
     .optional(),
-  momentSlope: number("Static moment coefficient slope dC_M/dα, per radian, nose-up, on ½ρU²B²").optional(),
 }).superRefine((options, ctx) => {
   if ((options.liftSlope === undefined) !== (options.dragCoefficient === undefined)) {
     const missing = options.liftSlope === undefined ? "liftSlope" : "dragCoefficient";

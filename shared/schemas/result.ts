@@ -25,6 +25,14 @@ export const flutterSchema = z.object({
   mode: z.string().describe("Id of the structural mode the critical branch started from at the first speed"),
   reducedVelocity: z.number().describe("Ur = U/(fB) at flutter, dimensionless"),
   kind: flutterKindSchema,
+  insideTestedRange: z
+    .boolean()
+    .nullable()
+    .optional()
+    .describe(
+      "Whether the critical pole's own reduced velocity Ur = U/(fB) lies inside the derivative table's tested range " +
+        "(true / false); null for models without a table (thin plate, quasi-steady). Absent in results stored before engine 1.1.0",
+    ),
 });
 
 export const sweepStepSchema = z.object({
@@ -46,6 +54,21 @@ export const sweepWarningSchema = z.object({
   code: z.enum(WARNING_CODES),
   message: z.string(),
   speeds: z.array(z.number()).optional().describe("Speeds concerned, m/s (a [from, to] range for extrapolation)"),
+  branch: z
+    .string()
+    .optional()
+    .describe("extrapolated-derivatives: the structural mode id of the branch that left the tested range"),
+  branches: z
+    .array(z.string())
+    .optional()
+    .describe("static-instability: the structural mode id of the branch of each crossing in `speeds`, in the same order"),
+  reducedVelocities: z
+    .tuple([z.number(), z.number()])
+    .optional()
+    .describe(
+      "extrapolated-derivatives: the branch's lowest and highest oscillating Ur = U/(fB) over the range, dimensionless " +
+        "(a branch that has become a static pole has no Ur there)",
+    ),
   speedCount: z
     .number()
     .int()
@@ -75,7 +98,16 @@ export const sweepResultSchema = z.object({
   flutter: flutterSchema.nullable().describe("Lowest flutter point over every branch; null when all stay damped"),
   divergence: z
     .object({ speed: z.number().describe("Torsional divergence speed (closed form), m/s") })
-    .nullable(),
+    .nullable()
+    .describe("Closed-form torsional divergence when it lies inside [from, to]; null when outside (see divergenceOutsideSweep) or impossible"),
+  divergenceOutsideSweep: z
+    .object({ speed: z.number().describe("Torsional divergence speed (closed form), m/s") })
+    .nullable()
+    .optional()
+    .describe(
+      "The same closed form when it lies outside the swept range [from, to], so a reader can still be told it; null when it " +
+        "lies inside (see divergence) or divergence is impossible. Absent in results stored before engine 1.1.0",
+    ),
   selberg: z.number().nullable().describe("Selberg's flutter estimate, m/s; null unless f_torsion > f_heave"),
   modes: z.array(z.object({ id: z.string(), steps: z.array(sweepStepSchema) })),
   warnings: z.array(sweepWarningSchema),

@@ -6,9 +6,9 @@
 import { z } from "zod";
 import { userText } from "./input-rules";
 import type { SweepSampling } from "./result";
-import type { ComparisonMargin } from "./comparison";
+import type { StoredAssessmentDto } from "./assessment";
 import type { Phenomenon } from "./criteria";
-import type { SummaryPayload } from "./summary";
+import type { SignedSummaryPayload, SummaryPayload } from "./summary";
 
 export const REVIEW_REQUEST_STATES = ["in-review", "returned", "signed"] as const;
 export const REVIEW_STATES = ["draft", ...REVIEW_REQUEST_STATES] as const;
@@ -127,12 +127,8 @@ export interface ReviewQueueItemDto {
   note: string;
   submittedAt: string;
   changeNote: string;
-  flutterSpeedMps: number | null;
-  divergenceSpeedMps: number | null;
-  /** Flutter and divergence against the project's required speeds; null while the project has no criteria. */
-  margins: { flutter: ComparisonMargin; divergence: ComparisonMargin } | null;
-  /** Number of the stored result's warnings, as the study page lists them (a kind may occur once per branch). */
-  warningCount: number;
+  /** The revision's current assessment: the flutter and divergence figures, margins and warning count the study shows. */
+  assessment: StoredAssessmentDto;
   engineVersion: string;
   documentSha256: string;
 }
@@ -168,7 +164,8 @@ export interface SummaryDto {
   revisionId: string;
   studyId: string;
   projectId: string;
-  payload: SummaryPayload;
+  /** The payload exactly as signed: format 2, or format 1 for summaries signed before it. */
+  payload: SignedSummaryPayload;
   jws: string;
   kid: string;
   payloadSha256: string;
@@ -184,7 +181,10 @@ export interface SummaryDto {
   branches: SummaryBranchDto[];
   /** How many of the solved steps `branches` carries (the stored result's `sampling`; null for older results). */
   branchSampling: SweepSampling | null;
+  /** Absolute address of the published keys (JWKS). */
   jwksUrl: string;
+  /** Absolute address of the public page that verifies this summary by its code (printed on the PDF). */
+  verificationUrl: string;
 }
 
 /**

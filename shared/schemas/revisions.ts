@@ -1,12 +1,14 @@
 /**
  * Contract of study revisions (`/api/studies/:id/revisions`, `/api/revisions/:id`, diff, re-run, export and
  * import). A revision is numbered 1, 2, … per study, never changed or deleted, and holds the full study
- * document (`stillspan.study/1`), its SHA-256 over RFC 8785 canonical JSON, the engine version and the result.
+ * document (`stillspan.study/1`), its SHA-256 over RFC 8785 canonical JSON, the engine version and the result;
+ * each revision DTO carries its current assessment (critical speeds with their basis, margins, warnings).
  * It is `superseded` when a newer revision of the same study exists.
  */
 import { z } from "zod";
 import { userText } from "./input-rules";
-import { flutterKindSchema, sweepResultSchema } from "./result";
+import { storedAssessmentSchema } from "./assessment";
+import { sweepResultSchema } from "./result";
 import { studyDocumentSchema } from "./study";
 
 export const CHANGE_NOTE_MAX = 2000;
@@ -50,29 +52,6 @@ export const rerunRevisionSchema = z.strictObject({
 
 export const personSchema = z.object({ id: z.string(), name: z.string() });
 
-/** The critical speeds of a stored result, for lists, comparisons and trends. */
-export const criticalSpeedsSchema = z.object({
-  flutter: z
-    .object({
-      speedMps: z.number().describe("Flutter speed, m/s"),
-      frequencyHz: z.number().describe("Frequency at flutter, Hz"),
-      kind: flutterKindSchema,
-      mode: z.string(),
-      reducedVelocity: z.number().describe("U/(fB) at flutter, dimensionless"),
-    })
-    .nullable()
-    .describe("null: no flutter up to sweepToMps"),
-  divergenceSpeedMps: z
-    .number()
-    .nullable()
-    .describe("Torsional divergence speed from its closed form, m/s (also beyond the sweep); null: cannot occur"),
-  divergenceNote: z.string().nullable().describe("Why divergence cannot occur, when divergenceSpeedMps is null"),
-  selbergSpeedMps: z.number().nullable().describe("Selberg's estimate, m/s"),
-  sweepToMps: z.number().describe("Last speed of the sweep, m/s"),
-  warningCodes: z.array(z.string()),
-});
-export type CriticalSpeeds = z.infer<typeof criticalSpeedsSchema>;
-
 export const revisionSummarySchema = z.object({
   id: z.string(),
   studyId: z.string(),
@@ -84,7 +63,8 @@ export const revisionSummarySchema = z.object({
   engineVersion: z.string(),
   createdAt: z.string(),
   superseded: z.boolean(),
-  critical: criticalSpeedsSchema,
+  /** What a reader is told about the revision's result: its current stored assessment (shared/schemas/assessment.ts). */
+  assessment: storedAssessmentSchema,
 });
 export type RevisionSummaryDto = z.infer<typeof revisionSummarySchema>;
 

@@ -47,6 +47,12 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import("@/app/routes/reset-password")).ResetPasswordRoute }),
     },
     {
+      path: paths.auth.verify.path,
+      ErrorBoundary: RouteErrorBoundary,
+      HydrateFallback: () => <LoadingBlock label="Loading…" className="min-h-dvh" />,
+      lazy: async () => ({ Component: (await import("@/app/routes/verify")).VerifyRoute }),
+    },
+    {
       path: paths.home.path,
       ErrorBoundary: RouteErrorBoundary,
       HydrateFallback: PageFallback,

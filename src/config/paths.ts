@@ -16,6 +16,11 @@ export const paths = {
       path: "/reset-password",
       getHref: (token?: string) => (token ? `/reset-password?token=${encodeURIComponent(token)}` : "/reset-password"),
     },
+    /** The public page that checks a signed summary by the verification code printed on its PDF. */
+    verify: {
+      path: "/verify/:code?",
+      getHref: (code?: string) => (code ? `/verify/${encodeURIComponent(code)}` : "/verify"),
+    },
     signIn: {
       path: "/sign-in",
       getHref: (redirectTo?: string | null) =>
@@ -143,6 +148,9 @@ export const apiPaths = {
     pdf: (summaryId: string) => `/api/summaries/${encodeURIComponent(summaryId)}/pdf`,
   },
   jwks: "/.well-known/jwks.json",
+  signatures: {
+    byCode: (code: string) => `/api/signatures/by-code/${encodeURIComponent(code)}`,
+  },
   invitations: {
     /** Creating one is per project: `projects.invitations(projectId)`. */
     accept: "/api/invitations/accept",

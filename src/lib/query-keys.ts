@@ -28,11 +28,15 @@ export const queryKeys = {
     list: (projectId: string) => ["alternatives", "list", projectId] as const,
   },
   studies: {
+    /** Prefix of every study and its revision list (each revision carries its assessment). */
+    all: () => ["studies"] as const,
     list: (alternativeId: string) => ["studies", "list", alternativeId] as const,
     detail: (studyId: string) => ["studies", "detail", studyId] as const,
     revisions: (studyId: string) => ["studies", "revisions", studyId] as const,
   },
   revisions: {
+    /** Prefix of every revision (each carries its assessment against the project's current criteria). */
+    all: () => ["revisions"] as const,
     detail: (revisionId: string) => ["revisions", "detail", revisionId] as const,
     diff: (fromId: string, toId: string) => ["revisions", "diff", fromId, toId] as const,
   },
@@ -57,6 +61,8 @@ export const queryKeys = {
   signatures: {
     jwks: () => ["signatures", "jwks"] as const,
     verify: (summaryId: string, jws: string) => ["signatures", "verify", summaryId, jws] as const,
+    /** The public check of a summary by the verification code on its PDF. */
+    byCode: (code: string) => ["signatures", "by-code", code] as const,
   },
   devMailbox: {
     list: (filter: { to: string | null; limit: number }) => ["dev-mailbox", "list", filter] as const,

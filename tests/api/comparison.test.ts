@@ -31,15 +31,18 @@ describe("GET /api/projects/:id/comparison on the demo crossing", () => {
       "B — single streamlined box with wind screens (invented)",
     ]);
     for (const row of rows) {
-      const flutter = row.latest.critical.flutter;
+      const a = row.latest.assessment.assessment;
+      const flutter = a.flutter;
       expect(flutter.speedMps).toBeGreaterThan(0);
       expect(["coupled", "torsional", "heave"]).toContain(flutter.kind);
       // The margin is the stored flutter speed over the project's required speed.
-      expect(row.margins.flutter.margin).toBeCloseTo(flutter.speedMps / criteria.requiredFlutterSpeedMps, 12);
-      expect(row.margins.flutter.status).toBe(flutter.speedMps >= criteria.requiredFlutterSpeedMps ? "pass" : "fail");
-      expect(row.margins.divergence.requiredSpeedMps).toBe(criteria.requiredDivergenceSpeedMps);
-      // The row shows exactly what the stored revision's result says.
+      expect(a.margins.flutter.margin).toBeCloseTo(flutter.speedMps / criteria.requiredFlutterSpeedMps, 12);
+      expect(a.margins.flutter.status).toBe(flutter.speedMps >= criteria.requiredFlutterSpeedMps ? "pass" : "fail");
+      expect(a.margins.divergence.requiredSpeedMps).toBe(criteria.requiredDivergenceSpeedMps);
+      expect(a.computedFrom.criteriaVersion).toBe(criteria.version);
+      // The row shows exactly what the stored revision's result says, through the same stored assessment.
       const revision = await api(base(), `/api/revisions/${row.latest.revisionId}`, { cookie: reviewer });
+      expect(revision.body.assessment).toEqual(row.latest.assessment);
       expect(revision.body.result.flutter.speed).toBe(flutter.speedMps);
       expect(revision.body.result.flutter.frequency).toBe(flutter.frequencyHz);
       expect(row.latest.deck).toEqual({ widthM: revision.body.study.deck.width, depthM: revision.body.study.deck.depth });
@@ -75,9 +78,11 @@ describe("GET /api/projects/:id/comparison without criteria", () => {
     expect(res.status).toBe(200);
     expect(res.body.criteria).toBeNull();
     const [empty, withRevision] = res.body.rows;
-    expect(empty).toMatchObject({ studyName: "Empty study", latest: null, margins: null });
-    expect(withRevision).toMatchObject({ studyName: "Test study", margins: null, latest: { number: 1 } });
-    expect(withRevision.latest.critical.divergenceSpeedMps).toBeGreaterThan(0);
+    expect(empty).toMatchObject({ studyName: "Empty study", latest: null });
+    expect(withRevision).toMatchObject({ studyName: "Test study", latest: { number: 1 } });
+    const a = withRevision.latest.assessment.assessment;
+    expect(a).toMatchObject({ margins: null, verdict: "no-criteria", computedFrom: { criteriaVersion: null } });
+    expect(a.divergence.governingSpeedMps).toBeGreaterThan(0);
     expect(res.body.trends.map((t: { points: unknown[] }) => t.points.length)).toEqual([0, 1]);
   });
 });

@@ -97,7 +97,10 @@ describe("submit → return → submit again → sign", () => {
     const queue = await api(base(), "/api/review-queue", { cookie: cookies.reviewer });
     const item = queue.body.find((q: { revisionId: string }) => q.revisionId === arranged.revisionId);
     expect(item).toMatchObject({ studyName, revisionNumber: 1, requestedBy: { name: "Tomas Reedwell" } });
-    expect(item.flutterSpeedMps).toBeGreaterThan(0);
+    // The card states the revision's assessment, the same the study shows.
+    const revision = await api(base(), `/api/revisions/${arranged.revisionId}`, { cookie: cookies.reviewer });
+    expect(item.assessment).toEqual(revision.body.assessment);
+    expect(item.assessment.assessment.flutter.speedMps).toBeGreaterThan(0);
 
     const [mail] = await waitForMail(base(), cookies.admin, "reviewer@stillspan.test", `Review requested: ${studyName}, revision 1`);
     expect(mail, "review-requested message at the fake SMTP server").toBeDefined();

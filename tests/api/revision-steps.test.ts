@@ -48,7 +48,7 @@ describe("a stored revision of a long sweep", () => {
     expect(sampling.solvedSteps).toBeGreaterThan(20_000);
     expect(sampling.shownSteps).toBeLessThanOrEqual(2000);
     for (const m of modes) expect(m.steps).toHaveLength(sampling.shownSteps);
-    expect(long.body.critical.sweepToMps).toBe(500);
+    expect(long.body.assessment.assessment.sweep.lastSolvedMps).toBe(500);
   });
 
   it("keeps the full table apart, compressed, and append-only like the revision", async () => {

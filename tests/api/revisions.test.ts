@@ -48,7 +48,7 @@ describe("POST /api/studies/:id/revisions", () => {
     expect(res.body.study).toEqual(study);
     expect(res.body.result.engine).toBe(ENGINE_VERSION);
     expect(res.body.result.flutter.speed).toBeGreaterThan(0);
-    expect(res.body.critical.flutter.speedMps).toBe(res.body.result.flutter.speed);
+    expect(res.body.assessment.assessment.flutter.speedMps).toBe(res.body.result.flutter.speed);
     const study2 = await api(base(), `/api/studies/${studyId}`, { cookie: reviewer });
     expect(study2.body).toMatchObject({ revisionCount: 2, latestRevision: { number: 2 } });
     const first = await api(base(), `/api/revisions/${revision1Id}`, { cookie: reviewer });

@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { compactVerify, createLocalJWKSet } from "jose";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { inventedSummary } from "../../shared/schemas/__tests__/fixtures/invented-summary.js";
+import { inventedSummary } from "../../shared/schemas/__tests__/fixtures/invented-summary-v2.js";
 import { canonicalJson } from "../../shared/canonical-json.js";
 import { loadConfig } from "../../server/config.js";
 import { signStabilitySummary } from "../../server/services/signing.js";
@@ -56,7 +56,8 @@ describe("POST /api/signatures/verify", () => {
 
   it("answers valid: false with a reason when one payload field was changed", async () => {
     const [header, , signature] = jws.split(".");
-    const changed = { ...inventedSummary(), flutter: { ...inventedSummary().flutter!, speedMps: 88.4 } };
+    const changed = inventedSummary();
+    if (changed.assessment.flutter.found) changed.assessment.flutter.speedMps = 88.4;
     const forged = `${header}.${Buffer.from(canonicalJson(changed)).toString("base64url")}.${signature}`;
     const res = await api(base(), "/api/signatures/verify", { body: { jws: forged } });
     expect(res.status).toBe(200);

@@ -69,41 +69,52 @@ describe("GET /api/summaries/:id", () => {
     const { payload } = res.body;
     const revision = await api(base(), `/api/revisions/${arranged.revisionId}`, { cookie: cookies.analyst });
     expect(payload.revision).toMatchObject({ id: arranged.revisionId, number: 1, contentHash: revision.body.documentSha256 });
-    expect(payload.flutter.speedMps).toBe(revision.body.result.flutter.speed);
-    expect(payload.flutter.frequencyHz).toBe(revision.body.result.flutter.frequency);
+    // The summary states the revision's stored assessment as it was signed, and names it.
+    expect(payload.format).toBe("stillspan.summary/2");
+    expect(payload.assessment).toEqual(revision.body.assessment.assessment);
+    expect(payload.assessmentId).toBe(revision.body.assessment.id);
+    const a = payload.assessment;
+    expect(a.flutter.speedMps).toBe(revision.body.result.flutter.speed);
+    expect(a.flutter.frequencyHz).toBe(revision.body.result.flutter.frequency);
     expect(payload.engineVersion).toBe(revision.body.engineVersion);
-    expect(payload.model).toEqual({ kind: "section-model", degreesOfFreedom: 2, aerodynamics: "tabulated" });
-    // The table was copied from the uploaded data set: its file hash and delivered convention are named.
+    // The table was copied from the uploaded data set: its file hash, delivered convention and provenance are named.
     const dataset = await api(base(), `/api/datasets/${arranged.datasetId}`, { cookie: cookies.analyst });
-    expect(payload.aerodynamicData).toMatchObject({
+    expect(payload.inputs.aerodynamics).toMatchObject({ model: "tabulated", testedReducedVelocity: [2, 12] });
+    expect(payload.inputs.aerodynamics.dataset).toMatchObject({
       name: "Twin box, smooth flow, 0° (invented)",
-      origin: "measured",
-      sha256: dataset.body.file.sha256,
+      fileSha256: dataset.body.file.sha256,
       deliveredConvention: { abscissa: "U/(fB)", normalisation: "½ρU²B, ½ρU²B²", signConvention: "h and L downward" },
-      testedReducedVelocity: [2, 12],
+      facility: "Invented boundary-layer tunnel",
+      modelScale: 60,
+      flow: "smooth",
+      meanAngleDeg: 0,
     });
     // Required speed = 1.2 × v_m (default flutter factor); v_m by EN 1991-1-4 Expr. (4.3)–(4.5), category 0, 62 m, 28 m/s.
     const vm = 0.19 * Math.pow(0.003 / 0.05, 0.07) * Math.log(62 / 0.003) * 28;
-    expect(payload.designWind.meanSpeedMps).toBeCloseTo(vm, 9);
-    const flutterCriterion = payload.criteria.find((c: { phenomenon: string }) => c.phenomenon === "flutter");
+    expect(a.designWind.meanSpeedMps).toBeCloseTo(vm, 9);
+    const flutterCriterion = a.required.find((c: { phenomenon: string }) => c.phenomenon === "flutter");
     expect(flutterCriterion.requiredSpeedMps).toBeCloseTo(1.2 * vm, 9);
-    const flutterMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "flutter");
-    expect(flutterMargin.margin).toBeCloseTo(payload.flutter.speedMps / (1.2 * vm), 12);
+    expect(a.margins.flutter.margin).toBeCloseTo(a.flutter.speedMps / (1.2 * vm), 12);
     // Vortex shedding: v_crit = D n / St (EN 1991-1-4 E.1.3.1) of a 0.124 Hz heave mode is a few m/s, far below
-    // 1.25 v_m: lock-in must be investigated (E.1.2(2), E.1.5) — signed as "investigate", not as a failure.
-    const vortexMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "vortexOnset");
-    expect(vortexMargin.criticalSpeedMps).toBeLessThan(1.25 * vm);
-    expect(vortexMargin.status).toBe("investigate");
+    // 1.25 v_m: lock-in must be investigated (E.1.2(2), E.1.5) — signed as a screening result, not as a margin.
+    expect(a.vortexShedding.onsetSpeedMps).toBeLessThan(1.25 * vm);
+    expect(a.vortexShedding.status).toBe("investigate");
+    expect(Object.keys(a.margins)).toEqual(["flutter", "divergence", "gallopingOnset"]);
     // B/D = 7.6 is outside the a_G table and the study has no static coefficients: galloping is not evaluated, and the
     // measured H1* of the sweep is said to cover galloping-type loss of heave damping.
-    const gallopingMargin = payload.margins.find((m: { phenomenon: string }) => m.phenomenon === "gallopingOnset");
-    expect(gallopingMargin).toMatchObject({ status: "not-evaluated", criticalSpeedMps: null, margin: null });
-    expect(gallopingMargin.statement).toMatch(/give a_G with its source/);
-    expect(gallopingMargin.statement).toMatch(/covered by the flutter sweep/);
+    expect(a.margins.gallopingOnset).toMatchObject({ status: "not-evaluated", criticalSpeedMps: null, margin: null });
+    expect(a.margins.gallopingOnset.statement).toMatch(/give a_G with its source/);
+    expect(a.margins.gallopingOnset.statement).toMatch(/covered by the flutter sweep/);
+    // Who prepared, checked and approved; no earlier signed revision to compare with.
+    expect(payload.signoff).toMatchObject({ prepared: { name: "Tomas Reedwell", role: "analyst" }, checked: { name: "Mira Holloway", role: "reviewer" } });
+    expect(payload.changes).toMatchObject({ since: null, items: [] });
     expect(payload.signer).toEqual({ name: "Mira Holloway", email: "reviewer@stillspan.test" });
     expect(payload.statement).toBe("Stable with margin (ζ > 0 up to the sweep end, λ tracked).");
     expect(res.body.branches.length).toBe(2);
-    expect(res.body).toMatchObject({ current: true, currentSummary: null, newerUnsigned: false, jwksUrl: "/.well-known/jwks.json" });
+    expect(res.body).toMatchObject({ current: true, currentSummary: null, newerUnsigned: false });
+    // Absolute addresses built from the configured public base URL (STILLSPAN_PUBLIC_URL, here the test app's own).
+    expect(res.body.jwksUrl).toMatch(/^https?:\/\/[^/]+\/\.well-known\/jwks\.json$/);
+    expect(res.body.verificationUrl).toBe(`${new URL(res.body.jwksUrl).origin}/verify/${res.body.verificationCode}`);
   });
 
   it("verifies with an independent jose check that uses only the JWKS document; the payload is its canonical JSON", async () => {
@@ -130,8 +141,8 @@ describe("GET /api/summaries/:id", () => {
         typeof value === "string" ? `${value}x` : value === null ? { speedMps: 1, frequencyHz: 0 } : Array.isArray(value) ? [...value, value[0] ?? "x"] : { ...(value as object), extra: 1 };
       expect(await verifiesWithJwks(tampered(changed), jwks), `payload.${key} changed`).toBe(false);
     }
-    const flutterDown = structuredClone(payload) as { flutter: { speedMps: number } };
-    flutterDown.flutter.speedMps -= 0.001;
+    const flutterDown = structuredClone(payload) as { assessment: { flutter: { speedMps: number } } };
+    flutterDown.assessment.flutter.speedMps -= 0.001;
     expect(await verifiesWithJwks(tampered(flutterDown), jwks), "flutter speed lowered by 1 mm/s").toBe(false);
 
     const bytes = base64url.decode(signature);
@@ -159,6 +170,13 @@ describe("current, superseded and newer unsigned revisions", () => {
     expect(pending.body).toMatchObject({ current: true, newerUnsigned: true, newestRevisionNumber: 2, currentSummary: null });
 
     const secondSummaryId = await submitAndSign(base(), second, "Revision 2 checked.");
+    // Revision 2's summary lists what changed since revision 1 was signed: the torsional damping.
+    const secondSummary = await api(base(), `/api/summaries/${secondSummaryId}`, { cookie: cookies.viewer });
+    expect(secondSummary.body.payload.changes).toMatchObject({
+      since: { summaryId: firstSummaryId, revisionNumber: 1 },
+      items: [{ path: "$.structure.modes[1].damping", label: "Mode 2 damping ratio ζ", kind: "changed", new: 0.0045 }],
+      omitted: 0,
+    });
     const old = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
     expect(old.body).toMatchObject({ current: false, newerUnsigned: false, currentSummary: { id: secondSummaryId, revisionNumber: 2 } });
     const latest = await api(base(), `/api/summaries/${secondSummaryId}`, { cookie: cookies.viewer });
@@ -178,7 +196,7 @@ describe("current, superseded and newer unsigned revisions", () => {
     ]);
     // No failed stability check; vortex shedding to investigate and galloping not evaluated are named.
     const first = mine.find((s: { id: string }) => s.id === firstSummaryId);
-    expect(first.outcome).toBe(old.body.payload.margins.some((m: { status: string }) => m.status === "fail") ? "fail" : "investigate");
+    expect(first.outcome).toBe(old.body.payload.assessment.verdict === "fail" ? "fail" : "investigate");
     expect(first.attention).toEqual(
       expect.arrayContaining([
         { phenomenon: "vortexOnset", status: "investigate" },
@@ -204,7 +222,8 @@ describe("GET /api/summaries/:id/pdf", () => {
     expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="stability-summary-.+\.pdf"$/);
     const { text } = await pdfText(Buffer.from(await res.arrayBuffer()));
     const flat = text.replace(/\s+/g, " ");
-    expect(flat).toContain(`${summary.body.payload.flutter.speedMps.toFixed(1)} m/s`);
+    expect(flat).toContain(`${summary.body.payload.assessment.flutter.speedMps.toFixed(2)} m/s`);
+    expect(flat).toContain(summary.body.verificationUrl);
     expect(flat).toContain(SUMMARY_CAUTIONS[0]);
     expect(flat).toContain("wind-tunnel verification");
     expect(flat).toContain(summary.body.verificationCode);
@@ -242,5 +261,20 @@ describe("key rotation", () => {
     const afterSummary = await api(app.baseUrl, `/api/summaries/${after}`, { cookie: cookies.viewer });
     expect(afterSummary.body.kid).toBe(rotated.kid);
     expect(await verifiesWithJwks(afterSummary.body.jws, jwks)).toBe(true);
+  });
+});
+
+describe("newer work after a superseded summary", () => {
+  it("is not claimed when the unsigned revision lies below the study's newest signed one", async () => {
+    // Revisions 1–4 exist (1, 2, 3 and 4 signed above); 5 stays unsigned, 6 is signed.
+    const fifth = await addRevision(base(), cookies.analyst, arranged.studyId, 4, 0.0046);
+    const sixth = await addRevision(base(), cookies.analyst, arranged.studyId, 5, 0.0047);
+    const unsignedBelow = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    expect(unsignedBelow.body).toMatchObject({ current: false, newerUnsigned: true, newestRevisionNumber: 6 });
+    expect(fifth).not.toBe(sixth);
+    const sixthSummaryId = await submitAndSign(base(), sixth, "Revision 6 checked.");
+    const old = await api(base(), `/api/summaries/${firstSummaryId}`, { cookie: cookies.viewer });
+    // Superseded by revision 6; revision 5 (unsigned, below it) is not "newer work".
+    expect(old.body).toMatchObject({ current: false, newerUnsigned: false, currentSummary: { id: sixthSummaryId, revisionNumber: 6 } });
   });
 });

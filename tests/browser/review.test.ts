@@ -14,6 +14,7 @@ describe("review and signed summary in the browser", () => {
   let problems: string[] = [];
   let signedRevision = 0;
   let summaryPath = "";
+  let queueFigures = { flutter: "", warnings: "" };
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -42,10 +43,15 @@ describe("review and signed summary in the browser", () => {
     await card.waitFor();
     signedRevision = Number((await card.getAttribute("aria-label"))!.match(/revision (\d+)$/)![1]);
     expect(await card.textContent()).not.toContain("already exists"); // it is the study's latest revision
-    // Flutter and divergence each with its margin against the project's required speed, and the warning count.
+    // Flutter and divergence each with its margin against the project's required speed, and the warning count —
+    // the revision's assessment, as the study and the signed summary state it.
     const facts = (await card.locator("dl").first().textContent()) ?? "";
-    expect(facts.match(/margin ≥? ?\d+\.\d{2} against \d+\.\d m\/s · (pass|fail)/g)).toHaveLength(2);
+    expect(facts.match(/margin ≥? ?\d+\.\d{2} against \d+\.\d{2} m\/s · (pass|fail)/g)).toHaveLength(2);
     expect(facts).toMatch(/Warnings(none|\d+ warnings?)/);
+    queueFigures = {
+      flutter: (await card.getByTestId("queue-flutter").textContent()) ?? "",
+      warnings: (await card.getByTestId("queue-warnings").textContent()) ?? "",
+    };
     await browser.screenshot("review-queue");
 
     // No signing from a queue row: the row leads to the summary exactly as it will be signed.
@@ -92,6 +98,9 @@ describe("review and signed summary in the browser", () => {
     const cautions = page.getByRole("note", { name: "Cautions" });
     for (const caution of SUMMARY_CAUTIONS) expect(await cautions.getByText(caution).isVisible()).toBe(true);
     expect(await page.getByRole("figure").count()).toBe(3);
+    // The same flutter speed and warning count as the queue card showed the reviewer.
+    expect(await page.getByTestId("summary-flutter").textContent()).toBe(queueFigures.flutter);
+    expect(await page.getByTestId("summary-verdict").textContent()).toContain(queueFigures.warnings);
     // Let plotly draw before the screenshot.
     await page.locator(".js-plotly-plot").first().waitFor();
     await page.waitForTimeout(500);
@@ -113,6 +122,17 @@ describe("review and signed summary in the browser", () => {
     expect(flat).toContain(`${flutterSpeed} m/s`);
     expect(flat).toContain(SUMMARY_CAUTIONS[0]);
     expect(flat).toContain("wind-tunnel verification");
+
+    // The PDF points to the public page that checks it by its code: it finds the summary and verifies it.
+    const code = /Verification code\s*([0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4})/.exec(flat)?.[1];
+    expect(code, "verification code in the PDF").toBeDefined();
+    expect(flat).toContain(`/verify/${code}`);
+    await page.goto(browser.url(`/verify/${code}`));
+    await page.getByTestId("server-check").waitFor();
+    expect(await page.getByTestId("server-check").textContent()).toMatch(/^On record here, and the server's check of its signature succeeds/);
+    await page.getByText("✓ Verified").waitFor();
+    expect(await page.getByTestId("code-check").textContent()).toContain(`${flutterSpeed} m/s`);
+    await browser.screenshot("summary-checked-by-code");
   });
 
   it("the summary of the earlier signed revision shows it is superseded, with a link to the current one", async () => {

@@ -57,7 +57,7 @@ describe("the analyst's study workspace", () => {
     await page.getByRole("heading", { name: "Deck alternatives" }).waitFor();
     const studies = page.getByRole("table", { name: /^Studies of / });
     await studies.first().waitFor();
-    expect(await studies.first().textContent()).toMatch(/\d+\.\d m\/s/);
+    expect(await studies.first().textContent()).toMatch(/\d+\.\d\d m\/s/);
     expect(await page.getByTestId("margins-basis").textContent()).toMatch(/Margins against flutter \d+\.\d m\/s/);
     // A delivered file with a bad value is refused with its line and column; nothing is stored.
     await page.getByRole("button", { name: "Upload a data set…" }).first().click();

@@ -72,9 +72,11 @@ describe("the app's database role", () => {
     expect(refused).toEqual(Object.fromEntries(Object.keys(refused).map((k) => [k, INSUFFICIENT_PRIVILEGE])));
   });
 
-  it("cannot update or delete revisions, review history, comments or signatures (the triggers refuse)", async () => {
+  it("cannot update or delete revisions, review history, comments, signatures or assessments (the triggers refuse)", async () => {
     const { rows } = await app.query<{ n: number }>("SELECT count(*)::int AS n FROM signatures");
     expect(rows[0].n, "the demo seed stores a signed summary").toBeGreaterThan(0);
+    const assessed = await app.query<{ n: number }>("SELECT count(*)::int AS n FROM revision_assessments");
+    expect(assessed.rows[0].n, "every seeded revision is assessed when it is saved").toBeGreaterThan(0);
     // Rows of the app's own making in the same rolled-back transaction, so every table has one to aim at.
     const withRows = (statement: string) =>
       attempt(statement, [], {
@@ -92,6 +94,8 @@ describe("the app's database role", () => {
       "DELETE review_comments": await withRows("DELETE FROM review_comments"),
       "UPDATE signatures": await attempt("UPDATE signatures SET kid = 'changed'"),
       "DELETE signatures": await attempt("DELETE FROM signatures"),
+      "UPDATE revision_assessments": await attempt("UPDATE revision_assessments SET assessor = 'changed'"),
+      "DELETE revision_assessments": await attempt("DELETE FROM revision_assessments"),
     };
     expect(refused).toEqual(Object.fromEntries(Object.keys(refused).map((k) => [k, APPEND_ONLY])));
   });

@@ -29,6 +29,11 @@ describe("npm run sweep (server/cli/sweep.ts)", () => {
     const result = sweepResultSchema.parse(JSON.parse(run.stdout));
     expect(result.modes[0].steps.map((s) => s.speed)).toEqual(Array.from({ length: 16 }, (_, i) => 60 + 2 * i));
     expect(Math.abs(result.flutter!.speed - 77.24) / 77.24).toBeLessThan(1e-3); // docs/conventions.md §Benchmark deck, computed
+    // Thin-plate theory has no table: the flutter point says so (null), it is not left out of the JSON.
+    expect(JSON.parse(run.stdout).flutter.insideTestedRange).toBeNull();
+    // The closed-form divergence 90.47 m/s (docs/conventions.md §Benchmark deck) lies beyond this 60–90 m/s sweep.
+    expect(result.divergence).toBeNull();
+    expect(Math.abs(result.divergenceOutsideSweep!.speed - 90.47) / 90.47).toBeLessThan(1e-3);
   });
 
   it("rejects a bad file with one stderr line per field (JSON path and rule), exit code 2 and empty stdout", () => {

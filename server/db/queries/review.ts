@@ -157,9 +157,6 @@ export async function listReviewQueue(db: DbOrTx, reviewerId: number) {
       note: reviewRequests.note,
       submittedAt: reviewRequests.submittedAt,
       changeNote: studyRevisions.changeNote,
-      critical: studyRevisions.critical,
-      // The stored result's own list of warnings, which the study page lists one by one.
-      warningCount: sql<number>`jsonb_array_length(${studyRevisions.result}->'warnings')`,
       engineVersion: studyRevisions.engineVersion,
       documentSha256: studyRevisions.documentSha256,
     })

@@ -7,10 +7,11 @@ import { alternatives, studies, studyRevisions, users, type NewStudyRevision } f
 // would bind to r2 and give the maximum over every study.
 const latestNumber = sql<number>`(select max(r2.number)::int from ${studyRevisions} r2 where r2.study_id = "study_revisions"."study_id")`;
 
-/** A revision without its document and result. */
+/** A revision without its document and result, with its project (whose criteria its assessment uses). */
 const summaryColumns = {
   id: studyRevisions.id,
   studyId: studyRevisions.studyId,
+  projectId: alternatives.projectId,
   number: studyRevisions.number,
   parentNumber: studyRevisions.parentNumber,
   authorId: studyRevisions.authorId,
@@ -18,20 +19,24 @@ const summaryColumns = {
   changeNote: studyRevisions.changeNote,
   documentSha256: studyRevisions.documentSha256,
   engineVersion: studyRevisions.engineVersion,
-  critical: studyRevisions.critical,
   createdAt: studyRevisions.createdAt,
   latestNumber,
 };
 
-export type RevisionSummaryRow = Awaited<ReturnType<typeof listRevisions>>[number];
-
-export async function listRevisions(db: DbOrTx, studyId: number) {
+/** Revisions with their study, alternative (for the project) and author. */
+function selectSummaries(db: DbOrTx) {
   return db
     .select(summaryColumns)
     .from(studyRevisions)
-    .leftJoin(users, eq(users.id, studyRevisions.authorId))
-    .where(eq(studyRevisions.studyId, studyId))
-    .orderBy(asc(studyRevisions.number));
+    .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
+    .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))
+    .leftJoin(users, eq(users.id, studyRevisions.authorId));
+}
+
+export type RevisionSummaryRow = Awaited<ReturnType<typeof listRevisions>>[number];
+
+export async function listRevisions(db: DbOrTx, studyId: number) {
+  return selectSummaries(db).where(eq(studyRevisions.studyId, studyId)).orderBy(asc(studyRevisions.number));
 }
 
 /** The newest revision of each of the studies (none for a study without revisions). */
@@ -40,6 +45,8 @@ export async function latestRevisionsOf(db: DbOrTx, studyIds: number[]): Promise
   const rows = await db
     .selectDistinctOn([studyRevisions.studyId], summaryColumns)
     .from(studyRevisions)
+    .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
+    .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))
     .leftJoin(users, eq(users.id, studyRevisions.authorId))
     .where(inArray(studyRevisions.studyId, studyIds))
     .orderBy(studyRevisions.studyId, desc(studyRevisions.number));
@@ -47,13 +54,7 @@ export async function latestRevisionsOf(db: DbOrTx, studyIds: number[]): Promise
 }
 
 export async function findLatestRevision(db: DbOrTx, studyId: number) {
-  const [row] = await db
-    .select(summaryColumns)
-    .from(studyRevisions)
-    .leftJoin(users, eq(users.id, studyRevisions.authorId))
-    .where(eq(studyRevisions.studyId, studyId))
-    .orderBy(desc(studyRevisions.number))
-    .limit(1);
+  const [row] = await selectSummaries(db).where(eq(studyRevisions.studyId, studyId)).orderBy(desc(studyRevisions.number)).limit(1);
   return row;
 }
 
@@ -66,7 +67,6 @@ export async function findRevision(db: DbOrTx, id: number) {
       result: studyRevisions.result,
       studyName: studies.name,
       alternativeId: studies.alternativeId,
-      projectId: alternatives.projectId,
     })
     .from(studyRevisions)
     .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
@@ -82,7 +82,7 @@ export type RevisionRow = NonNullable<Awaited<ReturnType<typeof findRevision>>>;
 /** A revision's summary with its project, to check access before reading more (diff). */
 export async function findRevisionSummary(db: DbOrTx, id: number) {
   const [row] = await db
-    .select({ ...summaryColumns, projectId: alternatives.projectId, document: studyRevisions.document })
+    .select({ ...summaryColumns, document: studyRevisions.document })
     .from(studyRevisions)
     .innerJoin(studies, eq(studies.id, studyRevisions.studyId))
     .innerJoin(alternatives, eq(alternatives.id, studies.alternativeId))

@@ -1,4 +1,4 @@
-import { desc, eq, inArray, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, lt, sql } from "drizzle-orm";
 import type { DbOrTx } from "../client.js";
 import { alternatives, projects, signatures, studies, studyRevisions, users, type Signature } from "../schema/index.js";
 
@@ -8,10 +8,15 @@ export async function insertSignature(db: DbOrTx, values: Omit<Signature, "id">)
   return row.id;
 }
 
+/**
+ * Revisions newer than the study's newest signed one exist (work after the current summary). An unsigned revision
+ * between this summary and a later signed one is not "newer work": the later signature covers the study.
+ */
 const newerUnsigned = sql<boolean>`exists (
   select 1 from ${studyRevisions} r2
-  where r2.study_id = ${studyRevisions.studyId} and r2.number > ${studyRevisions.number}
-    and not exists (select 1 from ${signatures} s2 where s2.revision_id = r2.id))`;
+  where r2.study_id = ${studyRevisions.studyId}
+    and r2.number > (select max(r3.number) from ${studyRevisions} r3 join ${signatures} s3 on s3.revision_id = r3.id
+                     where r3.study_id = ${studyRevisions.studyId}))`;
 
 /** The newest signed revision's signature id of the row's study. */
 const currentSignatureId = sql<number>`(
@@ -28,6 +33,7 @@ const columns = {
   payload: signatures.payload,
   payloadSha256: signatures.payloadSha256,
   signedAt: signatures.signedAt,
+  assessmentId: signatures.assessmentId,
   revisionNumber: studyRevisions.number,
   studyId: studyRevisions.studyId,
   studyName: studies.name,
@@ -59,6 +65,27 @@ export async function findSignature(db: DbOrTx, id: number) {
 
 export async function findSignatureOfRevision(db: DbOrTx, revisionId: number) {
   const [row] = await selectSignatures(db).where(eq(signatures.revisionId, revisionId)).limit(1);
+  return row;
+}
+
+/** The signature of the study's newest signed revision numbered below `number` (what changed since it). */
+export async function findPreviousSignature(db: DbOrTx, studyId: number, number: number) {
+  const [row] = await selectSignatures(db)
+    .where(and(eq(studyRevisions.studyId, studyId), lt(studyRevisions.number, number)))
+    .orderBy(desc(studyRevisions.number))
+    .limit(1);
+  return row;
+}
+
+/**
+ * The signature whose verification code (the first 12 hex digits of SHA-256 over the JWS text) is `hex12`. Codes are
+ * not stored: PostgreSQL hashes each JWS (signatures are few: one per signed revision).
+ */
+export async function findSignatureByCode(db: DbOrTx, hex12: string) {
+  const [row] = await selectSignatures(db)
+    .where(sql`substr(encode(sha256(convert_to(${signatures.jws}, 'UTF8')), 'hex'), 1, 12) = ${hex12}`)
+    .orderBy(signatures.id)
+    .limit(1);
   return row;
 }
 

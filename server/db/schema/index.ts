@@ -10,6 +10,7 @@ export * from "./aero-datasets.js";
 export * from "./studies.js";
 export * from "./study-revisions.js";
 export * from "./study-revision-tables.js";
+export * from "./assessments.js";
 export * from "./mail.js";
 export * from "./review.js";
 export * from "./one-time-tokens.js";

@@ -2,6 +2,7 @@ import { sql } from "drizzle-orm";
 import { bigserial, check, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp, unique } from "drizzle-orm/pg-core";
 import type { SummaryPayload } from "../../../shared/schemas/summary.js";
 import { REVIEW_EVENT_KINDS, REVIEW_REQUEST_STATES } from "../../../shared/schemas/review.js";
+import { revisionAssessments } from "./assessments.js";
 import { studyRevisions } from "./study-revisions.js";
 import { users } from "./users.js";
 
@@ -85,7 +86,8 @@ export const reviewComments = pgTable(
 
 /**
  * Signed stability summaries: the compact JWS, the key id that signed it, the payload as signed and the SHA-256
- * of its canonical JSON. A revision is signed at most once (unique revision_id). The summary's id is this row's.
+ * of its canonical JSON, and the stored assessment it states. A revision is signed at most once (unique
+ * revision_id). The summary's id is this row's.
  * Append-only (trigger in drizzle/0006).
  */
 export const signatures = pgTable(
@@ -103,6 +105,8 @@ export const signatures = pgTable(
     payload: jsonb("payload").$type<SummaryPayload>().notNull(),
     payloadSha256: text("payload_sha256").notNull(),
     signedAt: timestamp("signed_at", { withTimezone: true }).notNull(),
+    /** The assessment the summary states (summary format 2 on); null for summaries signed before assessments were stored. */
+    assessmentId: integer("assessment_id").references(() => revisionAssessments.id),
   },
   (t) => [
     unique("signatures_revision_key").on(t.revisionId),

@@ -1,6 +1,5 @@
 import { sql } from "drizzle-orm";
 import { check, doublePrecision, integer, jsonb, pgTable, serial, text, timestamp, unique } from "drizzle-orm/pg-core";
-import type { CriticalSpeeds } from "../../../shared/schemas/revisions.js";
 import type { SweepResult } from "../../../shared/schemas/result.js";
 import type { StudyDocument } from "../../../shared/schemas/study.js";
 import { studies } from "./studies.js";
@@ -10,7 +9,8 @@ import { users } from "./users.js";
  * Every saved state of a study: numbered 1, 2, … per study without gaps, with the full document, its SHA-256
  * over RFC 8785 canonical JSON, the engine version and the stored result. Append-only: a trigger (migration
  * 0003) raises on UPDATE, DELETE and TRUNCATE, so a signed summary that names a revision always names exactly
- * what was computed. Review state and comments live in their own tables. Users and studies that have
+ * what was computed. Review state and comments live in their own tables; what a reader is told about the result
+ * (critical speeds with their basis, margins, warnings) in its assessments (revision_assessments). Users and studies that have
  * revisions cannot be deleted (no ON DELETE action: it would have to update or delete revisions).
  */
 export const studyRevisions = pgTable(
@@ -28,8 +28,6 @@ export const studyRevisions = pgTable(
     documentSha256: text("document_sha256").notNull(),
     engineVersion: text("engine_version").notNull(),
     result: jsonb("result").$type<SweepResult>().notNull(),
-    /** The critical speeds of `result`, kept beside it so lists and comparisons need not read whole results. */
-    critical: jsonb("critical").$type<CriticalSpeeds>().notNull(),
     flutterSpeedMps: doublePrecision("flutter_speed_mps"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },

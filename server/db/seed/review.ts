@@ -4,9 +4,8 @@ import { recordComment, recordSubmission } from "../../services/review.js";
 import { saveRevision } from "../../services/revisions.js";
 import { runSweepInProcess } from "../../services/sweep-compute.js";
 import { recordSignature } from "../../services/summaries.js";
-import { buildSummaryPayload } from "../../services/summary-payload.js";
-import type { SummaryPayload } from "../../../shared/schemas/summary.js";
-import { findAlternative } from "../queries/alternatives.js";
+import { currentAssessment } from "../../services/assessments.js";
+import type { Assessment, StabilityCheck, StabilityMargin } from "../../../shared/schemas/assessment.js";
 import { findCurrentCriteria } from "../queries/criteria.js";
 import { findReviewRequest } from "../queries/review.js";
 import { findRevision, listRevisions } from "../queries/revisions.js";
@@ -19,41 +18,41 @@ import { ref, type SeedStep } from "./types.js";
 const REVIEW_SCOPE =
   "Reviewed for the invented Harrowmere demo: the flutter derivatives' conversion to the study convention, the " +
   "structural properties against the deck model, the speed sweep and the margins against the project's criteria.";
-type SummaryMargin = SummaryPayload["margins"][number];
-
-const LABEL: Record<SummaryMargin["phenomenon"], string> = {
+const LABEL: Record<StabilityCheck, string> = {
   flutter: "flutter",
   divergence: "torsional divergence",
-  vortexOnset: "vortex-shedding onset",
   gallopingOnset: "galloping onset",
 };
 
-const ratio = (m: SummaryMargin) => `${m.marginIsLowerBound ? "at least " : ""}${m.margin!.toFixed(2)}`;
+const ratio = (m: StabilityMargin) => `${m.marginIsLowerBound ? "at least " : ""}${m.margin!.toFixed(2)}`;
 
 /**
- * The demo reviewer's statement, written from the signed revision's own margins so that it never contradicts
- * them: adequate stability margins are named as such; a failed one is named with its number and accepted for
- * the concept stage only, with the next revision's remedy; vortex shedding to investigate is carried forward.
+ * The demo reviewer's statement, written from the signed revision's own assessment so that it never contradicts
+ * it: adequate stability margins are named as such; a failed one is named with its number and accepted for the
+ * concept stage only, with the next revision's remedy; vortex shedding to investigate is carried forward.
  */
-export function demoReviewerStatement(margins: readonly SummaryMargin[]): string {
-  const stability = margins.filter((m) => m.phenomenon === "flutter" || m.phenomenon === "divergence");
-  const adequate = stability.filter((m) => m.status === "pass" && m.margin !== null);
-  const failed = margins.filter((m) => m.status === "fail");
-  const open = margins.filter((m) => m.status === "investigate" || m.status === "undetermined");
+export function demoReviewerStatement(assessment: Pick<Assessment, "margins" | "vortexShedding">): string {
+  const margins = Object.entries(assessment.margins ?? {}) as [StabilityCheck, StabilityMargin][];
+  const adequate = margins.filter(([check, m]) => check !== "gallopingOnset" && m.status === "pass" && m.margin !== null);
+  const failed = margins.filter(([, m]) => m.status === "fail");
+  const open = [
+    ...margins.filter(([, m]) => m.status === "undetermined").map(([check]) => LABEL[check]),
+    ...(assessment.vortexShedding.status === "investigate" ? ["vortex-shedding onset"] : []),
+  ];
   const parts = [REVIEW_SCOPE];
   if (adequate.length > 0) {
-    const met = adequate.map((m) => `${LABEL[m.phenomenon]} (margin ${ratio(m)})`).join(" and ");
+    const met = adequate.map(([check, m]) => `${LABEL[check]} (margin ${ratio(m)})`).join(" and ");
     parts.push(`Required speed met for ${met}.`);
   }
-  for (const m of failed) {
+  for (const [check, m] of failed) {
     const value = m.margin !== null ? ` is ${ratio(m)}` : " is not met";
     parts.push(
-      `The ${LABEL[m.phenomenon]} margin${value}, below the required speed of ${m.requiredSpeedMps.toFixed(1)} m/s: ` +
+      `The ${LABEL[check]} margin${value}, below the required speed of ${m.requiredSpeedMps.toFixed(2)} m/s: ` +
         "accepted for the concept stage only; the next revision must raise the deck's torsional stiffness and mass " +
         "moment of inertia before this alternative can go forward.",
     );
   }
-  if (open.length > 0) parts.push(`Still open: ${open.map((m) => LABEL[m.phenomenon]).join(", ")}.`);
+  if (open.length > 0) parts.push(`Still open: ${open.join(", ")}.`);
   parts.push(
     failed.length > 0
       ? "Not acceptable for the design stage as it stands; section-model tests are pending."
@@ -115,10 +114,8 @@ export const demoReview: SeedStep = {
     const inReview = revisions[revisions.length - 1];
     // One after the other: a transaction is one connection, which runs one query at a time.
     const criteria = await findCurrentCriteria(tx, toSign.projectId);
-    const alternative = await findAlternative(tx, toSign.alternativeId);
     const reviewer = await findUserById(tx, reviewerId);
-    if (!criteria || !alternative || !reviewer) throw new Error("seed: demo review needs the criteria, the alternative and the reviewer");
-    const [{ name: projectName }] = await tx.select({ name: projects.name }).from(projects).where(eq(projects.id, toSign.projectId));
+    if (!criteria || !reviewer) throw new Error("seed: demo review needs the criteria and the reviewer");
 
     const signedAt = new Date();
     const submittedAt = new Date(signedAt.getTime() - 26 * 3600_000);
@@ -130,25 +127,14 @@ export const demoReview: SeedStep = {
       body: "Derivatives are within the tested range up to flutter; the extrapolation warning above it does not affect the critical speed.",
     });
     const request = (await findReviewRequest(tx, toSign.id))!;
-    // The statement is written against the margins the summary will carry (the same computation as the signing).
-    const { margins } = await buildSummaryPayload(tx, {
-      revision: toSign,
-      projectName,
-      alternativeName: alternative.name,
-      criteria: criteria.criteria,
-      signer: { name: reviewer.name, email: reviewer.email },
-      signedAt,
-      statement: "",
-    });
+    // The statement is written against the assessment the summary will carry (the stored one the signing uses).
+    const { assessment } = await currentAssessment(tx, toSign, reviewer.id);
     const summaryId = await recordSignature(tx, config, {
       revision: toSign,
-      requestId: request.id,
-      projectName,
-      alternativeName: alternative.name,
-      criteria,
+      request,
       signer: reviewer,
       signedAt,
-      statement: demoReviewerStatement(margins),
+      statement: demoReviewerStatement(assessment),
     });
     ctx.refs.set("summary:demo", summaryId);
 

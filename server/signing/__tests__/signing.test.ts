@@ -4,7 +4,8 @@ import path from "node:path";
 import { CompactSign, compactVerify, createLocalJWKSet, exportJWK, exportPKCS8, generateKeyPair } from "jose";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { canonicalJson } from "@shared/canonical-json";
-import { inventedSummary } from "@shared/schemas/__tests__/fixtures/invented-summary";
+import { inventedSummaryV1 } from "@shared/schemas/__tests__/fixtures/invented-summary-v1";
+import { inventedSummary } from "@shared/schemas/__tests__/fixtures/invented-summary-v2";
 import { KeyStore, KeyStoreError } from "../key-store";
 import { SUMMARY_JWS_TYP, signSummary } from "../sign-summary";
 import { verifySummary } from "../verify-summary";
@@ -224,13 +225,23 @@ describe("signSummary / verifySummary", () => {
     });
     expect(await verifySummary(await sign('{"format":"other"}'), jwks)).toMatchObject({
       valid: false,
-      reason: expect.stringMatching(/stillspan.summary\/1/),
+      reason: expect.stringMatching(/stillspan\.summary\/2 \(or stillspan\.summary\/1\)/),
     });
     expect(await verifySummary(await sign(canonicalJson(inventedSummary()), "JWT"), jwks)).toMatchObject({
       valid: false,
       reason: expect.stringMatching(/typ/),
     });
     expect(await verifySummary("not-a-jws", jwks)).toMatchObject({ valid: false, kid: null });
+  });
+
+  it("still verifies a summary signed in format 1, and gives it back as signed", async () => {
+    const store = await KeyStore.open({ dir });
+    const key = await store.signingKey();
+    const old = inventedSummaryV1();
+    const jws = await new CompactSign(new TextEncoder().encode(canonicalJson(old)))
+      .setProtectedHeader({ alg: "EdDSA", kid: key.kid, typ: SUMMARY_JWS_TYP })
+      .sign(key.privateKey);
+    expect(await verifySummary(jws, await store.jwks())).toEqual({ valid: true, kid: key.kid, summary: old });
   });
 
   it("refuses to sign a summary that does not match the schema", async () => {

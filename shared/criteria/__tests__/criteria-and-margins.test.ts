@@ -62,7 +62,7 @@ describe("margins = critical / required", () => {
     expect(margins.flutter.margin).toBeCloseTo(1.25, 12);
     expect(margins.divergence.status).toBe("fail");
     expect(margins.divergence.margin).toBeCloseTo(0.875, 12);
-    expect(margins.divergence.statement).toMatch(/70\.0 m\/s < required 80\.0 m\/s/);
+    expect(margins.divergence.statement).toMatch(/70\.00 m\/s < required 80\.00 m\/s/);
     expect(margins.vortexOnset.status).toBe("not-evaluated");
   });
 
@@ -80,7 +80,7 @@ describe("margins = critical / required", () => {
     const margins = computeMargins({ vortexOnset: { kind: "speed", speedMps: 3.5 } }, required);
     expect(margins.vortexOnset).toMatchObject({ status: "investigate", criticalSpeedMps: 3.5 });
     expect(margins.vortexOnset.margin).toBeCloseTo(3.5 / 50, 12);
-    expect(margins.vortexOnset.statement).toMatch(/3\.5 m\/s < required 50\.0 m\/s/);
+    expect(margins.vortexOnset.statement).toMatch(/3\.50 m\/s < required 50\.00 m\/s/);
     expect(margins.vortexOnset.statement).toMatch(/E\.1\.5/);
     expect(margins.vortexOnset.statement).toMatch(/accelerations/);
     expect(margins.vortexOnset.statement).toMatch(/not a stability limit/i);

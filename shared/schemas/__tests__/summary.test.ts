@@ -1,58 +1,32 @@
 import { describe, expect, it } from "vitest";
-import { SUMMARY_FORMAT, summaryPayloadSchema } from "../summary";
-import { inventedSummary } from "./fixtures/invented-summary";
+import { SUMMARY_FORMAT, signedSummaryPayloadSchema, summaryPayloadSchema } from "../summary";
+import { inventedSummaryV1 } from "./fixtures/invented-summary-v1";
+import { inventedSummary } from "./fixtures/invented-summary-v2";
 
-describe("summaryPayloadSchema", () => {
-  it("accepts a complete summary and keeps every field", () => {
+describe("summaryPayloadSchema (stillspan.summary/2)", () => {
+  it("accepts a complete summary with its inputs, assessment, changes and sign-off, and keeps every field", () => {
     const summary = inventedSummary();
+    expect(SUMMARY_FORMAT).toBe("stillspan.summary/2");
     expect(summaryPayloadSchema.parse(summary)).toEqual(summary);
   });
 
-  it("accepts 'not reached' critical speeds as null with a lower-bound margin", () => {
-    const summary = { ...inventedSummary(), flutter: null, divergence: null };
-    summary.margins = summary.margins.map((m) => ({ ...m, criticalSpeedMps: null, marginIsLowerBound: true }));
-    expect(summaryPayloadSchema.safeParse(summary).success).toBe(true);
+  it("rejects unknown fields anywhere, so nothing unsigned can ride along", () => {
+    const summary = inventedSummary() as Record<string, any>;
+    summary.inputs.structure.note = "extra";
+    summary.assessment.flutter.extra = 1;
+    const issues = summaryPayloadSchema.safeParse(summary).error?.issues ?? [];
+    expect(issues.map((i) => i.code)).toEqual(["unrecognized_keys", "unrecognized_keys"]);
   });
 
-  it("rejects a phenomenon or a margin status the criteria do not know", () => {
-    const summary = inventedSummary();
-    summary.margins[0] = { ...summary.margins[0], status: "ok" as never };
-    summary.criteria[1] = { ...summary.criteria[1], phenomenon: "buffeting" as never };
-    const paths = summaryPayloadSchema.safeParse(summary).error?.issues.map((i) => i.path.join("."));
-    expect(paths).toEqual(["criteria.1.phenomenon", "margins.0.status"]);
+  it("rejects a summary without its inputs or its sign-off block, naming them", () => {
+    const { inputs: _i, signoff: _s, ...rest } = inventedSummary();
+    const paths = summaryPayloadSchema.safeParse(rest).error?.issues.map((i) => i.path.join("."));
+    expect(paths).toEqual(expect.arrayContaining(["inputs", "signoff"]));
   });
 
-  it("rejects another format tag", () => {
-    const result = summaryPayloadSchema.safeParse({ ...inventedSummary(), format: "stillspan.summary/2" });
-    expect(result.success).toBe(false);
-    expect(SUMMARY_FORMAT).toBe("stillspan.summary/1");
-  });
-
-  it("rejects unknown fields, so nothing unsigned can ride along", () => {
-    const result = summaryPayloadSchema.safeParse({ ...inventedSummary(), note: "extra" });
-    expect(result.success).toBe(false);
-    expect(result.error?.issues[0].code).toBe("unrecognized_keys");
-  });
-
-  it("rejects a content hash that is not 64 lower-case hex digits, naming the field", () => {
-    const summary = inventedSummary();
-    summary.revision.contentHash = summary.revision.contentHash.toUpperCase();
-    const result = summaryPayloadSchema.safeParse(summary);
-    expect(result.success).toBe(false);
-    expect(result.error?.issues[0].path).toEqual(["revision", "contentHash"]);
-  });
-
-  it("rejects a negative speed, a blank statement and a bad signer e-mail", () => {
-    const summary = inventedSummary();
-    summary.flutter = { ...summary.flutter!, speedMps: -1 };
-    summary.statement = "   ";
-    summary.signer.email = "not-an-address";
-    const paths = summaryPayloadSchema.safeParse(summary).error?.issues.map((i) => i.path.join("."));
-    expect(paths).toEqual(expect.arrayContaining(["flutter.speedMps", "statement", "signer.email"]));
-  });
-
-  it("rejects a signing time that is not ISO 8601", () => {
-    const result = summaryPayloadSchema.safeParse({ ...inventedSummary(), signedAt: "yesterday" });
-    expect(result.error?.issues[0].path).toEqual(["signedAt"]);
+  it("reads both formats as signed summaries, by their format tag", () => {
+    expect(signedSummaryPayloadSchema.parse(inventedSummaryV1()).format).toBe("stillspan.summary/1");
+    expect(signedSummaryPayloadSchema.parse(inventedSummary()).format).toBe("stillspan.summary/2");
+    expect(signedSummaryPayloadSchema.safeParse({ ...inventedSummary(), format: "stillspan.summary/3" }).success).toBe(false);
   });
 });

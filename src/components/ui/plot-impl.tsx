@@ -29,5 +29,9 @@ export default function PlotImpl({ data, layout }: PlotFigure) {
   // react-plotly redraws when data, layout or config change identity: keep them stable between renders of the
   // parent (a keystroke elsewhere on the page must not redraw every plot).
   const fullLayout = useMemo(() => ({ autosize: true, ...layout }), [layout]);
-  return <PlotlyComponent data={data} layout={fullLayout} config={CONFIG} useResizeHandler style={STYLE} />;
+  // No `useResizeHandler`: plotly's own `responsive` handler already follows the window. react-plotly's handler calls
+  // Plots.resize on its element ref, which React clears at unmount before the effect that removes the handler runs —
+  // a resize in between (a layout that moves a plot, e.g. across the two-column breakpoint) threw "DOM element
+  // provided is null or undefined". plotly's handler skips a detached plot.
+  return <PlotlyComponent data={data} layout={fullLayout} config={CONFIG} style={STYLE} />;
 }

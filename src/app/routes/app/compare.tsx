@@ -1,7 +1,6 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { canUseWorkspace } from "@/lib/authorization";
-import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { getComparisonQueryOptions } from "@/features/studies/api/get-comparison";
 import { CompareView } from "@/features/studies/components/compare-view";
 import { requireAccess } from "@/app/routes/guards";
@@ -16,6 +15,5 @@ export const clientLoader =
 
 export function CompareRoute() {
   const { projectId = "" } = useParams();
-  const criteria = useCriteria(projectId);
-  return <CompareView key={projectId} projectId={projectId} required={criteria.data?.evaluated?.required ?? null} />;
+  return <CompareView key={projectId} projectId={projectId} />;
 }

@@ -34,7 +34,7 @@ export function StudyRoute() {
       studyId={studyId}
       readOnly={role !== "analyst"}
       criteria={criteria}
-      renderChecks={(study, result) => <StudyChecks projectId={projectId} study={study} result={result} />}
+      renderChecks={(study, assessment) => <StudyChecks projectId={projectId} study={study} assessment={assessment} />}
       renderRevisionState={(revision) => <RevisionReviewState studyId={studyId} revisionId={revision.id} />}
       // The review of the revision being viewed, across both columns (beside the long result column it left a
       // hole): analysts submit it, its reviewer returns or signs it.

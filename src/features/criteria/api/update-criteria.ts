@@ -25,7 +25,8 @@ export function updateCriteria(projectId: string, input: UpdateCriteriaInput): P
 
 /**
  * On success the answer becomes the cached current version; the history, the screenings (they read the
- * required speeds), the project's comparison (its margins) and the summary previews are refetched.
+ * required speeds), the project's comparison, the revisions, the review queue (their assessments) and the summary
+ * previews are refetched.
  */
 export function useUpdateCriteria(projectId: string, options: { onSuccess?: (saved: ProjectCriteriaDto) => void } = {}) {
   const queryClient = useQueryClient();
@@ -38,7 +39,11 @@ export function useUpdateCriteria(projectId: string, options: { onSuccess?: (sav
         queryClient.invalidateQueries({ queryKey: queryKeys.criteria.screenings() }),
         // The project's comparison carries margins computed against the criteria (studies feature's key).
         queryClient.invalidateQueries({ queryKey: queryKeys.comparison(projectId) }),
-        // A summary preview states the criteria and whether their bases stand confirmed (review feature's keys).
+        // So do the revisions, the studies' latest revisions, the review queue and the summary previews: each carries
+        // the assessment against the current criteria (a new criteria version gives a new one), and a preview states
+        // whether the criteria's bases stand confirmed.
+        queryClient.invalidateQueries({ queryKey: queryKeys.revisions.all() }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.studies.all() }),
         queryClient.invalidateQueries({ queryKey: queryKeys.reviews.all() }),
       ]);
       options.onSuccess?.(saved);

@@ -59,10 +59,9 @@ export function ScreeningOptionsForm({ value, onApply, disabled }: ScreeningOpti
           <Field label="Source of a_G" error={errors.gallopingFactorBasis?.message} {...register("gallopingFactorBasis")} />
         </div>
         <fieldset className="grid gap-3 sm:grid-cols-3">
-          <legend className="mb-1 text-ink-700">Static coefficients at the mean angle, on ½ρU²B (and B² for the moment)</legend>
+          <legend className="mb-1 text-ink-700">Static lift and drag coefficients at the mean angle, on ½ρU²B</legend>
           <Field label="dC_L/dα" unit="/rad" error={errors.liftSlope?.message} {...numberInput} {...register("liftSlope")} />
           <Field label="C_D" error={errors.dragCoefficient?.message} {...numberInput} {...register("dragCoefficient")} />
-          <Field label="dC_M/dα" unit="/rad" error={errors.momentSlope?.message} {...numberInput} {...register("momentSlope")} />
         </fieldset>
         <div className="flex flex-wrap gap-2">
           <Button type="submit" size="sm" disabled={disabled || !isDirty}>

@@ -1,23 +1,16 @@
 import type { ScreeningResult } from "@shared/criteria/screen-study";
 import type { ReactNode } from "react";
-import type { SweepWarning } from "@shared/schemas/result";
+import type { AssessedDivergence } from "@shared/schemas/assessment";
 import { cn } from "@/lib/cn";
 import { SourceList } from "@/features/criteria/components/source-badge";
 import { StatusBadge } from "@/features/criteria/components/status-badge";
 import { VortexSheddingTable } from "@/features/criteria/components/vortex-shedding-table";
 import { fixed, sig } from "@/features/criteria/utils/format";
 
-/** What the sweep said about divergence, shown beside the closed form. */
-export interface EngineDivergence {
-  /** The engine's divergence speed, m/s; null when the sweep reports none. */
-  speedMps: number | null;
-  /** Warnings of the sweep; `static-instability` ones are shown here. */
-  warnings: readonly SweepWarning[];
-}
-
 interface ScreeningTableProps {
   screening: ScreeningResult;
-  engine?: EngineDivergence | null;
+  /** The result's divergence figures from its assessment (the screening computes none of its own). */
+  divergence?: AssessedDivergence | null;
   className?: string;
 }
 
@@ -104,50 +97,36 @@ function Galloping({ galloping }: { galloping: ScreeningResult["galloping"] }) {
   );
 }
 
-function Divergence({ divergence, engine }: { divergence: ScreeningResult["divergence"]; engine?: EngineDivergence | null }) {
-  const staticWarnings = engine?.warnings.filter((warning) => warning.code === "static-instability") ?? [];
+function Divergence({ divergence }: { divergence: AssessedDivergence }) {
+  const { closedForm, staticInstability } = divergence;
   return (
     <div className="space-y-2">
       <dl className="grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
-        <dt className="text-ink-600">Closed form v_div = [2 k_Θ / (ρ B² dC_M/dα)]^½</dt>
+        <dt className="text-ink-600">Closed form v_div = [2 k_Θ / (ρ B² dC_M/dα)]^½ · EN 1991-1-4 E.4.3, Expr. (E.24)</dt>
         <dd>
           <span className="num font-semibold" data-testid="divergence-closed-form">
-            {divergence.speedMps !== null
-              ? `${fixed(divergence.speedMps, 2)} m/s`
-              : divergence.critical?.kind === "none"
-                ? "none (dC_M/dα ≤ 0)"
-                : "not evaluated"}
+            {closedForm.speedMps !== null ? `${fixed(closedForm.speedMps, 2)} m/s` : "none"}
           </span>{" "}
-          · EN 1991-1-4 E.4.3, Expr. (E.24)
+          <span className="text-ink-700">{closedForm.speedMps !== null && !closedForm.withinSweep ? "(beyond the sweep) " : ""}{closedForm.slopeSource}</span>
         </dd>
-        {engine !== undefined && engine !== null ? (
-          <>
-            <dt className="text-ink-600">Engine (sweep)</dt>
-            <dd className="num font-semibold" data-testid="divergence-engine">
-              {engine.speedMps !== null ? `${fixed(engine.speedMps, 2)} m/s` : "none within the sweep"}
-            </dd>
-          </>
-        ) : null}
-        <dt className="text-ink-600">Moment slope, stiffness</dt>
-        <dd className="num">
-          {divergence.momentSlope ? `dC_M/dα = ${fixed(divergence.momentSlope.value, 4)} /rad` : "no slope"} · k_Θ ={" "}
-          {divergence.torsionalStiffnessNmPerM.toExponential(3)} N·m/rad per m
+        <dt className="text-ink-600">Static instability of the sweep (real pole crossing zero)</dt>
+        <dd>
+          <span className="num font-semibold" data-testid="divergence-static">
+            {staticInstability.speedMps !== null ? `${fixed(staticInstability.speedMps, 2)} m/s` : `none up to ${fixed(staticInstability.upToMps, 2)} m/s`}
+          </span>
+          {staticInstability.branch ? <span className="text-ink-700"> on branch {staticInstability.branch}</span> : null}
         </dd>
       </dl>
-      {staticWarnings.map((warning) => (
-        <p key={warning.message} role="note" className="rounded-md border-l-4 border-l-signal-600 bg-signal-50 px-3 py-1.5 text-sm text-signal-700">
-          <span className="font-semibold">Static instability in the sweep:</span> {warning.message}
-        </p>
-      ))}
+      <p className="text-sm text-ink-800" data-testid="divergence-basis">{divergence.marginBasis}</p>
     </div>
   );
 }
 
 /**
- * The screening of one study: vortex shedding per mode, galloping (standard and Den Hartog), divergence by the
- * closed form beside the engine's value, each check's assumptions and sources, and the cautions.
+ * The screening of one study: vortex shedding per mode, galloping (standard and Den Hartog), each check's assumptions
+ * and sources, and the cautions; beside them the result's two divergence figures as its assessment names them.
  */
-export function ScreeningTable({ screening, engine, className }: ScreeningTableProps) {
+export function ScreeningTable({ screening, divergence, className }: ScreeningTableProps) {
   return (
     <div className={cn("space-y-5", className)} data-testid="screening">
       <Section title="Vortex shedding">
@@ -158,10 +137,11 @@ export function ScreeningTable({ screening, engine, className }: ScreeningTableP
         <Galloping galloping={screening.galloping} />
         <Assumptions title="Assumptions and sources: galloping" items={screening.galloping.assumptions} sources={screening.galloping.sources} />
       </Section>
-      <Section title="Torsional divergence">
-        <Divergence divergence={screening.divergence} engine={engine} />
-        <Assumptions title="Assumptions and sources: divergence" items={screening.divergence.assumptions} sources={screening.divergence.sources} />
-      </Section>
+      {divergence ? (
+        <Section title="Torsional divergence">
+          <Divergence divergence={divergence} />
+        </Section>
+      ) : null}
       <ul className="space-y-0.5 border-t border-ink-100 pt-2 text-xs leading-snug text-ink-600" aria-label="Cautions">
         {screening.cautions.map((caution) => (
           <li key={caution}>{caution}</li>

@@ -1,4 +1,3 @@
-import type { MarginStatus } from "@shared/criteria/margins";
 import type { LockIn } from "@shared/criteria/screen-study";
 import { cn } from "@/lib/cn";
 
@@ -18,19 +17,6 @@ export function StatusBadge({ tone, children, className }: { tone: Tone; childre
       {children}
     </span>
   );
-}
-
-const MARGIN: Record<MarginStatus, { tone: Tone; label: string }> = {
-  pass: { tone: "good", label: "pass" },
-  fail: { tone: "bad", label: "fail" },
-  undetermined: { tone: "doubt", label: "undetermined" },
-  investigate: { tone: "doubt", label: "investigate" },
-  clear: { tone: "good", label: "clear" },
-  "not-evaluated": { tone: "none", label: "not evaluated" },
-};
-
-export function MarginStatusBadge({ status }: { status: MarginStatus }) {
-  return <StatusBadge tone={MARGIN[status].tone}>{MARGIN[status].label}</StatusBadge>;
 }
 
 const LOCK_IN: Record<LockIn, { tone: Tone; label: string }> = {

@@ -1,14 +1,13 @@
 import { useState } from "react";
-import type { SweepResult } from "@shared/schemas/result";
+import type { Assessment } from "@shared/schemas/assessment";
 import type { ScreeningOptions, ScreeningStudy } from "@shared/schemas/criteria";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { ApiError } from "@/lib/api-client";
 import { cn } from "@/lib/cn";
-import { useCriteria } from "@/features/criteria/api/get-criteria";
 import { useScreening } from "@/features/criteria/api/run-screening";
-import { MarginsBlock } from "@/features/criteria/components/margins-block";
+import { MarginsTable } from "@/features/criteria/components/margins-block";
 import { ScreeningOptionsForm } from "@/features/criteria/components/screening-options-form";
 import { ScreeningTable } from "@/features/criteria/components/screening-table";
 
@@ -16,45 +15,38 @@ interface StudyChecksProps {
   projectId: string;
   /** The study document being viewed; null while it is not valid (nothing is screened). */
   study: ScreeningStudy | null;
-  /** Its sweep result, for the margins of flutter and divergence and the engine's divergence beside the closed form. */
-  result?: Pick<SweepResult, "flutter" | "divergence" | "modes" | "warnings"> | null;
+  /** The shown result's assessment: its margins, its divergence figures, its vortex-shedding screening. */
+  assessment?: Assessment | null;
   /** Measured values to start from (St, a_G, static coefficients); the user can change them in the panel. */
   options?: ScreeningOptions;
   className?: string;
 }
 
 /**
- * The criteria side of a study for the workspace: margins per phenomenon (from `sweepMargins`, when a result is
- * there) and the screening table, fed by POST /api/screening with the study and the project.
+ * The criteria side of a study for the workspace: the assessment's margins (stability checks, and the vortex-shedding
+ * onset as a screening result) and the screening table, fed by POST /api/screening with the study and the project —
+ * with measured values the user may try there; the stored assessment uses the study's own data.
  */
-export function StudyChecks({ projectId, study, result, options: initialOptions, className }: StudyChecksProps) {
+export function StudyChecks({ projectId, study, assessment, options: initialOptions, className }: StudyChecksProps) {
   const [options, setOptions] = useState<ScreeningOptions>(initialOptions ?? {});
-  const criteria = useCriteria(projectId);
   const screening = useScreening(study ? { study, projectId, options: Object.keys(options).length ? options : undefined } : null);
-  const required = criteria.data?.evaluated?.required ?? null;
+  const tried = Object.keys(options).length > 0;
 
   return (
     <div className={cn("space-y-4", className)}>
-      {result ? (
-        <Card title="Margins" aria-label="Margins" subtitle="Critical / required speed: stability limits pass when ≥ 1; a vortex-shedding onset below it is to investigate">
-          {criteria.isPending || (screening.isPending && study !== null) ? (
-            <LoadingBlock label="Loading the required speeds…" className="min-h-16" />
-          ) : criteria.isError ? (
-            <ErrorPanel
-              title="The project's criteria could not be loaded"
-              message={criteria.error.message}
-              onRetry={() => void criteria.refetch()}
-              isRetrying={criteria.isFetching}
-            />
-          ) : (
-            <MarginsBlock result={result} required={required} screening={screening.data ?? null} />
-          )}
+      {assessment ? (
+        <Card title="Margins" aria-label="Margins" subtitle="Critical ÷ required speed from the result's assessment: stability limits pass when ≥ 1">
+          <MarginsTable assessment={assessment} />
         </Card>
       ) : null}
       <Card
         title="Screening: vortex shedding, galloping, divergence"
         aria-label="Screening"
-        subtitle="EN 1991-1-4 Annex E and Den Hartog; simplified single-mode checks"
+        subtitle={
+          tried
+            ? "With the measured values below — a trial: the margins above are the assessment's, from the study's own data"
+            : "EN 1991-1-4 Annex E and Den Hartog; simplified single-mode checks"
+        }
         aria-busy={screening.isFetching || undefined}
       >
         <div className="space-y-3">
@@ -72,10 +64,7 @@ export function StudyChecks({ projectId, study, result, options: initialOptions,
               isRetrying={screening.isFetching}
             />
           ) : (
-            <ScreeningTable
-              screening={screening.data}
-              engine={result ? { speedMps: result.divergence?.speed ?? null, warnings: result.warnings } : null}
-            />
+            <ScreeningTable screening={screening.data} divergence={assessment?.divergence ?? null} />
           )}
         </div>
       </Card>

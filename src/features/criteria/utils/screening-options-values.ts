@@ -13,10 +13,9 @@ export interface ScreeningOptionsValues {
   gallopingFactorBasis: string;
   liftSlope: string;
   dragCoefficient: string;
-  momentSlope: string;
 }
 
-const NUMERIC = ["strouhalNumber", "gallopingFactor", "liftSlope", "dragCoefficient", "momentSlope"] as const;
+const NUMERIC = ["strouhalNumber", "gallopingFactor", "liftSlope", "dragCoefficient"] as const;
 
 export function toOptionsValues(options: ScreeningOptions = {}): ScreeningOptionsValues {
   const text = (value: number | undefined) => (value === undefined ? "" : String(value));
@@ -27,7 +26,6 @@ export function toOptionsValues(options: ScreeningOptions = {}): ScreeningOption
     gallopingFactorBasis: options.gallopingFactorBasis ?? "",
     liftSlope: text(options.liftSlope),
     dragCoefficient: text(options.dragCoefficient),
-    momentSlope: text(options.momentSlope),
   };
 }
 

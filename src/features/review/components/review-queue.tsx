@@ -1,39 +1,33 @@
 import { Link } from "react-router-dom";
-import type { ComparisonMargin } from "@shared/schemas/comparison";
+import type { StabilityMargin } from "@shared/schemas/assessment";
 import type { ReviewQueueItemDto } from "@shared/schemas/review";
 import { Card } from "@/components/ui/card";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
+import { cn } from "@/lib/cn";
 import { formatDateTime } from "@/lib/format";
+import { divergenceFigure, flutterFigure, flutterTone, VERDICT_TEXT_TONE, VERDICT_WORD, warningCountText } from "@/lib/verdict";
 import { useReviewQueue } from "@/features/review/api/get-review-queue";
 
-const mps = (v: number | null) => (v === null ? "none found" : `${v.toFixed(1)} m/s`);
-
-const STATUS_TEXT: Record<ComparisonMargin["status"], { label: string; className: string }> = {
-  pass: { label: "pass", className: "text-steady-700" },
-  fail: { label: "fail", className: "text-signal-700" },
-  undetermined: { label: "undetermined", className: "text-caution-700" },
-  "not-evaluated": { label: "not evaluated", className: "text-ink-600" },
-};
-
-/** "margin 1.61 against 65.0 m/s · pass"; a lower bound is written "≥". */
-function MarginLine({ margin }: { margin: ComparisonMargin | undefined }) {
+/** "margin 1.05 against 52.09 m/s · pass"; a lower bound is written "≥". */
+function MarginLine({ margin }: { margin: StabilityMargin | undefined }) {
   if (!margin) return <span className="text-ink-600">no criteria yet</span>;
-  const status = STATUS_TEXT[margin.status];
   const ratio = margin.margin === null ? "—" : `${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}`;
   return (
     <span className="text-sm">
       margin <span className="num font-semibold">{ratio}</span> against{" "}
-      <span className="num">{margin.requiredSpeedMps.toFixed(1)} m/s</span> ·{" "}
-      <span className={`font-semibold ${status.className}`}>{status.label}</span>
+      <span className="num">{margin.requiredSpeedMps.toFixed(2)} m/s</span> ·{" "}
+      <span className={cn("font-semibold", VERDICT_TEXT_TONE[margin.status])}>{VERDICT_WORD[margin.status]}</span>
     </span>
   );
 }
 
 function QueueItem({ item }: { item: ReviewQueueItemDto }) {
   const newer = item.latestNumber > item.revisionNumber;
+  // Everything stated here is the revision's assessment: the figures, margins and warning count the study shows.
+  const a = item.assessment.assessment;
   return (
     <Card
       title={
@@ -55,22 +49,24 @@ function QueueItem({ item }: { item: ReviewQueueItemDto }) {
       <dl className="mb-3 grid grid-cols-1 gap-x-6 gap-y-2 text-[0.95rem] sm:grid-cols-3">
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Flutter</dt>
-          <dd className="num font-semibold">{mps(item.flutterSpeedMps)}</dd>
+          <dd className={cn("num font-semibold", flutterTone(a))} data-testid="queue-flutter">{flutterFigure(a)}</dd>
+          {a.flutter.found ? <dd className="text-sm text-ink-700">{a.flutter.testedRange.statement.split(" (")[0]}</dd> : null}
           <dd>
-            <MarginLine margin={item.margins?.flutter} />
+            <MarginLine margin={a.margins?.flutter} />
           </dd>
         </div>
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Divergence</dt>
-          <dd className="num font-semibold">{item.divergenceSpeedMps === null ? "not possible" : `${item.divergenceSpeedMps.toFixed(1)} m/s`}</dd>
+          <dd className="num font-semibold" data-testid="queue-divergence">{divergenceFigure(a)}</dd>
+          <dd className="text-xs text-ink-600">{a.divergence.marginBasis}</dd>
           <dd>
-            <MarginLine margin={item.margins?.divergence} />
+            <MarginLine margin={a.margins?.divergence} />
           </dd>
         </div>
         <div>
           <dt className="text-xs tracking-wide text-ink-600 uppercase">Warnings</dt>
-          <dd className={item.warningCount > 0 ? "font-semibold text-caution-700" : "text-ink-700"}>
-            {item.warningCount === 0 ? "none" : `${item.warningCount} ${item.warningCount === 1 ? "warning" : "warnings"}`}
+          <dd className={a.warningCount > 0 ? "font-semibold text-caution-700" : "text-ink-700"} data-testid="queue-warnings">
+            {a.warningCount === 0 ? "none" : warningCountText(a)}
           </dd>
         </div>
         <div>

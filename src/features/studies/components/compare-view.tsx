@@ -2,21 +2,19 @@ import { useMemo } from "react";
 import { Link, useSearchParams } from "react-router-dom";
 import type { ComparisonDto } from "@shared/schemas/comparison";
 import type { RevisionDto } from "@shared/schemas/revisions";
+import type { StabilityMargin } from "@shared/schemas/assessment";
 import type { StudyAerodynamics } from "@shared/schemas/study";
-import { computeMargins } from "@shared/criteria/margins";
-import type { RequiredSpeeds } from "@shared/criteria/required-speeds";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
 import { cn } from "@/lib/cn";
+import { divergenceFigure, flutterTone, VERDICT_TEXT_TONE, VERDICT_WORD } from "@/lib/verdict";
 import { useComparison } from "@/features/studies/api/get-comparison";
 import { useRevisionList } from "@/features/studies/api/get-revision";
 import { ResultPlots } from "@/features/studies/components/result-plots";
-import { closedFormDivergence, criticalSpeedsOf } from "@/features/studies/components/result-summary";
 import { queryErrorPanel } from "@/features/studies/components/study-workspace";
 import { seriesColour } from "@/components/ui/plot-theme";
-import { WARNING_TITLES } from "@/features/studies/utils/warning-text";
 
 const MAX = 4;
 
@@ -49,13 +47,10 @@ function legendNames(revisions: readonly RevisionDto[], comparison: ComparisonDt
 
 /**
  * Two to four revisions — of one study or of different deck alternatives — side by side: damping and pole
- * paths overlaid (colour per revision, dash per branch) and a table of critical speeds and margins.
+ * paths overlaid (colour per revision, dash per branch) and a table of critical speeds and margins, every figure
+ * read from the revisions' assessments.
  */
-export function CompareView({ projectId, required }: {
-  projectId: string;
-  /** The project's required speeds for the margins, null without criteria (src/app reads them from the criteria feature). */
-  required: RequiredSpeeds | null;
-}) {
+export function CompareView({ projectId }: { projectId: string }) {
   const [search, setSearch] = useSearchParams();
   const selected = (search.get("revisions") ?? "").split(",").filter(Boolean).slice(0, MAX);
   const comparison = useComparison(projectId);
@@ -65,7 +60,7 @@ export function CompareView({ projectId, required }: {
     () => {
       if (!loaded) return [];
       const names = legendNames(revisions.map((q) => q.data!), comparison.data);
-      return revisions.map((q, i) => ({ name: names[i], result: q.data!.result }));
+      return revisions.map((q, i) => ({ name: names[i], result: q.data!.result, assessment: q.data!.assessment.assessment }));
     },
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [loaded, selected.join(","), comparison.data],
@@ -111,7 +106,7 @@ export function CompareView({ projectId, required }: {
                               aria-label={`${trend.alternativeName} ${trend.studyName} revision ${point.number}`} className="accent-tide-600" />
                             <span className="num whitespace-nowrap">
                               <span className="font-semibold" style={index >= 0 ? { color: seriesColour(index) } : undefined}>r{point.number}</span>{" "}
-                              <span className="text-ink-700">{point.flutterSpeedMps !== null ? `${point.flutterSpeedMps.toFixed(1)} m/s` : "no flutter"}</span>
+                              <span className="text-ink-700">{point.flutterSpeedMps !== null ? `${point.flutterSpeedMps.toFixed(2)} m/s` : "no flutter"}</span>
                             </span>
                             {point.changeNote ? (
                               <span className="col-start-2 truncate text-xs text-ink-600" title={point.changeNote}>{point.changeNote}</span>
@@ -138,7 +133,7 @@ export function CompareView({ projectId, required }: {
             <LoadingBlock label="Loading the revisions…" className="min-h-96" />
           ) : (
             <>
-              <ComparisonTable revisions={revisions.map((q) => q.data!)} comparison={comparison.data} required={required} />
+              <ComparisonTable revisions={revisions.map((q) => q.data!)} comparison={comparison.data} />
               <ResultPlots runs={runs} />
             </>
           )}
@@ -148,28 +143,47 @@ export function CompareView({ projectId, required }: {
   );
 }
 
-function ComparisonTable({ revisions, comparison, required }: {
-  revisions: RevisionDto[];
-  comparison: ComparisonDto | undefined;
-  required: RequiredSpeeds | null;
-}) {
+function ComparisonTable({ revisions, comparison }: { revisions: RevisionDto[]; comparison: ComparisonDto | undefined }) {
   const legend = legendNames(revisions, comparison);
-  const columns = revisions.map((revision) => {
-    const margins = required ? computeMargins(criticalSpeedsOf(revision.result, revision.study), required) : null;
-    return { revision, margins };
-  });
+  const columns = revisions.map((revision) => ({ revision, a: revision.assessment.assessment }));
   const rows: Array<{ label: string; cell: (c: (typeof columns)[number]) => React.ReactNode }> = [
-    { label: "Flutter speed", cell: ({ revision: r }) => r.result.flutter ? <b className="text-signal-700">{r.result.flutter.speed.toFixed(2)} m/s</b> : `none up to ${r.study.sweep.to} m/s` },
-    { label: "Flutter frequency", cell: ({ revision: r }) => r.result.flutter ? `${r.result.flutter.frequency.toFixed(4)} Hz` : "—" },
-    { label: "Reduced velocity", cell: ({ revision: r }) => r.result.flutter ? r.result.flutter.reducedVelocity.toFixed(2) : "—" },
-    { label: "Kind", cell: ({ revision: r }) => r.result.flutter?.kind ?? "—" },
-    { label: "Divergence", cell: ({ revision: r }) => { const u = r.result.divergence?.speed ?? closedFormDivergence(r.study); return u !== null ? `${u.toFixed(1)} m/s${r.result.divergence ? "" : " (beyond sweep)"}` : "not possible"; } },
-    { label: "Selberg estimate", cell: ({ revision: r }) => r.result.selberg !== null ? `${r.result.selberg.toFixed(1)} m/s` : "n/a" },
-    { label: "Flutter margin", cell: ({ margins }) => <MarginCell margin={margins?.flutter ?? null} /> },
-    { label: "Divergence margin", cell: ({ margins }) => <MarginCell margin={margins?.divergence ?? null} /> },
+    {
+      label: "Flutter speed",
+      cell: ({ a }) => (a.flutter.found ? <b className={flutterTone(a)}>{a.flutter.speedMps.toFixed(2)} m/s</b> : `none up to ${a.flutter.upToMps.toFixed(2)} m/s`),
+    },
+    { label: "Flutter frequency", cell: ({ a }) => (a.flutter.found ? `${a.flutter.frequencyHz.toFixed(4)} Hz` : "—") },
+    { label: "Reduced velocity", cell: ({ a }) => (a.flutter.found ? a.flutter.reducedVelocity.toFixed(2) : "—") },
+    { label: "Tested range", cell: ({ a }) => (a.flutter.found ? a.flutter.testedRange.statement.split(" (")[0] : "—") },
+    { label: "Kind", cell: ({ a }) => (a.flutter.found ? a.flutter.kind : "—") },
+    {
+      label: "Divergence, closed form",
+      cell: ({ a }) => {
+        const c = a.divergence.closedForm;
+        return c.speedMps !== null ? `${c.speedMps.toFixed(2)} m/s${c.withinSweep ? "" : " (beyond sweep)"}` : "none";
+      },
+    },
+    {
+      label: "Divergence, static instability",
+      cell: ({ a }) => {
+        const st = a.divergence.staticInstability;
+        return st.speedMps !== null ? `${st.speedMps.toFixed(2)} m/s${st.branch ? ` (${st.branch})` : ""}` : "none";
+      },
+    },
+    {
+      label: "Divergence margin uses",
+      cell: ({ a }) => (
+        <>
+          {divergenceFigure(a)}
+          <span className="block max-w-64 text-xs font-normal whitespace-normal text-ink-600">{a.divergence.marginBasis}</span>
+        </>
+      ),
+    },
+    { label: "Selberg estimate", cell: ({ a }) => (a.selberg.speedMps !== null ? `${a.selberg.speedMps.toFixed(2)} m/s` : "n/a") },
+    { label: "Flutter margin", cell: ({ a }) => <MarginCell margin={a.margins?.flutter ?? null} /> },
+    { label: "Divergence margin", cell: ({ a }) => <MarginCell margin={a.margins?.divergence ?? null} /> },
     { label: "f_h / f_α", cell: ({ revision: r }) => r.study.structure.modes.map((m) => `${m.frequency}`).join(" / ") + " Hz" },
     { label: "Aerodynamics", cell: ({ revision: r }) => aerodynamicsText(r.study.aerodynamics) },
-    { label: "Warnings", cell: ({ revision: r }) => r.result.warnings.length ? [...new Set(r.result.warnings.map((w) => WARNING_TITLES[w.code]))].join("; ") : "none" },
+    { label: "Warnings", cell: ({ a }) => (a.warningCount ? `${a.warningCount}: ${[...new Set(a.warnings.map((w) => w.title))].join("; ")}` : "none") },
   ];
   return (
     <Card title="Critical speeds and margins" flush>
@@ -200,12 +214,11 @@ function ComparisonTable({ revisions, comparison, required }: {
   );
 }
 
-function MarginCell({ margin }: { margin: ReturnType<typeof computeMargins>["flutter"] | null }) {
+function MarginCell({ margin }: { margin: StabilityMargin | null }) {
   if (!margin) return <span className="text-ink-600">no criteria</span>;
-  const tone = margin.status === "pass" ? "text-steady-700" : margin.status === "fail" ? "text-signal-700" : "text-caution-700";
   return (
-    <span className={cn("font-semibold", tone)}>
-      {margin.status === "pass" ? "pass" : margin.status === "fail" ? "fail" : margin.status === "undetermined" ? "extend sweep" : "—"}
+    <span className={cn("font-semibold", VERDICT_TEXT_TONE[margin.status])}>
+      {VERDICT_WORD[margin.status]}
       {margin.margin !== null ? ` ${margin.marginIsLowerBound ? "≥" : ""}${margin.margin.toFixed(2)}` : ""}
     </span>
   );

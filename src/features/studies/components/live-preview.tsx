@@ -12,7 +12,7 @@ export function LivePreview({ state, blockedReason }: { state: PreviewState; blo
   const result = state.status === "done" ? state.result : state.status === "computing" ? state.previous : null;
   const figure = useMemo(() => {
     if (!result) return null;
-    const f = dampingFigure([{ name: "Preview", result }]);
+    const f = dampingFigure([{ name: "Preview", result, assessment: null }]);
     // The legend names the branches (which curve is heave, which torsion); it sits above the plot area.
     return { ...f, layout: { ...f.layout, margin: { l: 44, r: 8, t: 24, b: 34 }, showlegend: true } };
   }, [result]);

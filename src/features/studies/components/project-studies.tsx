@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
 import type { AlternativeDto } from "@shared/schemas/alternatives";
+import type { StabilityMargin } from "@shared/schemas/assessment";
 import type { ComparisonDto, ComparisonRow } from "@shared/schemas/comparison";
 import { Card } from "@/components/ui/card";
 import { LoadingBlock } from "@/components/ui/spinner";
@@ -8,6 +9,7 @@ import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { cn } from "@/lib/cn";
 import { formatDate } from "@/lib/format";
+import { divergenceFigure, flutterFigure, flutterTone, VERDICT_TEXT_TONE } from "@/lib/verdict";
 import { useAlternatives } from "@/features/studies/api/get-alternatives";
 import { useComparison } from "@/features/studies/api/get-comparison";
 import { useDatasets } from "@/features/studies/api/get-datasets";
@@ -70,13 +72,11 @@ function RequiredLine({ comparison }: { comparison: ComparisonDto | undefined })
   );
 }
 
-const STATUS_TONE = { pass: "text-steady-700", fail: "text-signal-700", undetermined: "text-caution-700", "not-evaluated": "text-ink-600" } as const;
-
-function MarginText({ margin }: { margin: NonNullable<ComparisonRow["margins"]>["flutter"] | undefined }) {
+function MarginText({ margin }: { margin: StabilityMargin | undefined }) {
   if (!margin) return <span className="text-ink-600">—</span>;
   const word = margin.status === "undetermined" ? "extend" : margin.status === "not-evaluated" ? "—" : margin.status;
   return (
-    <span className={cn("font-semibold", STATUS_TONE[margin.status])}>
+    <span className={cn("font-semibold", VERDICT_TEXT_TONE[margin.status])}>
       {word}
       {margin.margin !== null ? <span className="font-normal"> {margin.marginIsLowerBound ? "≥" : ""}{margin.margin.toFixed(2)}</span> : null}
     </span>
@@ -117,7 +117,7 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
             </thead>
             <tbody>
               {rows.map((row) => {
-                const critical = row.latest?.critical;
+                const a = row.latest?.assessment.assessment;
                 return (
                   <tr key={row.studyId} className="border-b border-ink-100 last:border-b-0 hover:bg-tide-50/60">
                     <th scope="row" className="px-4 py-1.5 font-semibold">
@@ -127,13 +127,13 @@ function AlternativeCard({ projectId, alternative, canEdit, rows, comparisonErro
                       {row.latest ? <>r{row.latest.number} · {formatDate(row.latest.createdAt)}</> : "no revision"}
                     </td>
                     <td className="num px-2 py-1.5 text-right whitespace-nowrap">
-                      {critical ? (critical.flutter ? <span className="font-semibold">{critical.flutter.speedMps.toFixed(1)} m/s</span> : <span className="text-ink-700">&gt; {critical.sweepToMps.toFixed(0)} m/s</span>) : "—"}
+                      {a ? <span className={cn("font-semibold", flutterTone(a))}>{flutterFigure(a)}</span> : "—"}
                     </td>
                     <td className="num px-2 py-1.5 text-right whitespace-nowrap">
-                      {critical ? (critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : <span className="text-ink-700" title={critical.divergenceNote ?? undefined}>not possible</span>) : "—"}
+                      {a ? <span title={a.divergence.marginBasis}>{divergenceFigure(a)}</span> : "—"}
                     </td>
-                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.flutter} /></td>
-                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={row.margins?.divergence} /></td>
+                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={a?.margins?.flutter} /></td>
+                    <td className="num px-2 py-1.5 whitespace-nowrap"><MarginText margin={a?.margins?.divergence} /></td>
                     {renderReviewState ? <td className="px-2 py-1.5">{renderReviewState(row.studyId)}</td> : null}
                   </tr>
                 );

@@ -1,156 +1,129 @@
-import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
-import type { SweepResult } from "@shared/schemas/result";
-import type { StudyDocument } from "@shared/schemas/study";
-import { createAeroModel } from "@shared/engine/aero/create-aero-model";
-import { divergenceSpeed } from "@shared/engine/divergence-speed";
-import { computeMargins, type CriticalSpeed, type Margin } from "@shared/criteria/margins";
+import type { Assessment, StabilityMargin } from "@shared/schemas/assessment";
+import { VerdictBadge } from "@/components/ui/verdict-badge";
 import { cn } from "@/lib/cn";
-import { explainWarning, WARNING_TITLES, warningSpeeds } from "@/features/studies/utils/warning-text";
+import { flutterTone, warningCountText } from "@/lib/verdict";
 
 interface ResultSummaryProps {
-  result: SweepResult;
-  /** The document the result was computed from. */
-  document: StudyDocument;
-  criteria: ProjectCriteriaDto | null;
+  /** The result's assessment: stored with the revision, or computed for an unsaved run by the same function. */
+  assessment: Assessment;
   showKmh: boolean;
 }
 
 const KIND_LABEL = { coupled: "coupled (heave and torsion)", torsional: "torsional", heave: "heave" } as const;
 
-export function Speed({ mps, showKmh, digits = 1 }: { mps: number; showKmh: boolean; digits?: number }) {
+function Speed({ mps, showKmh }: { mps: number; showKmh: boolean }) {
   return (
     <span className="num">
-      {mps.toFixed(digits)} m/s
+      {mps.toFixed(2)} m/s
       {showKmh ? <span className="ml-1 text-ink-600">({(mps * 3.6).toFixed(0)} km/h)</span> : null}
     </span>
   );
 }
 
-/**
- * Torsional divergence from its closed form for the document (also beyond the sweep, which the result leaves
- * out), or null when the static moment slope gives none.
- */
-export function closedFormDivergence(document: StudyDocument): number | null {
-  try {
-    const torsion = document.structure.modes.find((m) => m.dof === "torsion");
-    const slope = createAeroModel(document.aerodynamics).staticMomentSlope;
-    if (!torsion || slope === null) return null;
-    return divergenceSpeed(document.structure.inertia, torsion.frequency, document.air.density, document.deck.width, slope);
-  } catch {
-    return null;
-  }
+function Label({ children }: { children: string }) {
+  return <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">{children}</dt>;
 }
 
 /**
- * Critical speeds as the margin bookkeeping reads them: flutter found, or none up to the sweep's end;
- * divergence from its closed form (or impossible).
+ * The result in words and numbers, all read from its assessment: flutter with the data behind it (inside or beyond
+ * the tested range), both divergence figures named by their basis and which one the margin uses, Selberg's estimate,
+ * the margins, the vortex-shedding screening in its own words, and every warning.
  */
-export function criticalSpeedsOf(result: SweepResult, document: StudyDocument): { flutter: CriticalSpeed; divergence: CriticalSpeed } {
-  const divergence = result.divergence?.speed ?? closedFormDivergence(document);
-  return {
-    flutter: result.flutter ? { kind: "speed", speedMps: result.flutter.speed } : { kind: "above", speedMps: document.sweep.to },
-    divergence:
-      divergence !== null
-        ? { kind: "speed", speedMps: divergence }
-        : { kind: "none", reason: "the static moment slope dC_M/dα is not positive." },
-  };
-}
-
-/**
- * The result in words and numbers: flutter (speed, frequency, reduced velocity, kind), divergence, Selberg's
- * estimate, margins against the project's required speeds, and every warning explained with its speeds.
- */
-export function ResultSummary({ result, document, criteria, showKmh }: ResultSummaryProps) {
-  const { flutter, divergence, selberg, warnings } = result;
-  const sweepToMps = document.sweep.to;
-  const required = criteria?.evaluated?.required ?? null;
-  const margins = required ? computeMargins(criticalSpeedsOf(result, document), required) : null;
-  const closedForm = divergence ? null : closedFormDivergence(document);
+export function ResultSummary({ assessment: a, showKmh }: ResultSummaryProps) {
+  const f = a.flutter;
+  const d = a.divergence;
   return (
-    <div className="space-y-3">
+    <div className="space-y-3" data-testid="result-summary">
       <p role="status" className="sr-only">
-        {flutter ? `Flutter at ${flutter.speed.toFixed(2)} metres per second.` : `No flutter up to ${sweepToMps} metres per second.`}
-        {warnings.length > 0 ? ` ${warnings.length} warning${warnings.length > 1 ? "s" : ""}.` : ""}
+        {f.found ? `Flutter at ${f.speedMps.toFixed(2)} metres per second.` : `No flutter up to ${f.upToMps.toFixed(2)} metres per second.`}{" "}
+        {warningCountText(a)}.
       </p>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-4">
         <div className="col-span-2 rounded-md border border-ink-200 bg-white px-3 py-2">
-          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Flutter</dt>
-          <dd data-testid="flutter-speed" className={cn("text-2xl font-semibold", flutter ? "text-signal-700" : "text-steady-700")}>
-            {flutter ? <Speed mps={flutter.speed} showKmh={showKmh} digits={2} /> : <>None up to <Speed mps={sweepToMps} showKmh={showKmh} /></>}
+          <Label>Flutter</Label>
+          <dd data-testid="flutter-speed" className={cn("text-2xl font-semibold", flutterTone(a))}>
+            {f.found ? <Speed mps={f.speedMps} showKmh={showKmh} /> : <>None up to <Speed mps={f.upToMps} showKmh={showKmh} /></>}
           </dd>
-          {flutter ? (
-            <dd className="num text-sm text-ink-700">
-              {flutter.frequency.toFixed(4)} Hz · Ur {flutter.reducedVelocity.toFixed(2)} · {KIND_LABEL[flutter.kind]} · branch {flutter.mode}
-            </dd>
+          {f.found ? (
+            <>
+              <dd className="num text-sm text-ink-700">
+                {f.frequencyHz.toFixed(4)} Hz · Ur {f.reducedVelocity.toFixed(2)} · {KIND_LABEL[f.kind]} · branch {f.branch}
+              </dd>
+              <dd data-testid="flutter-tested-range" className={cn("text-sm", f.testedRange.status === "beyond" ? "font-semibold text-caution-700" : "text-ink-700")}>
+                {f.testedRange.statement.charAt(0).toUpperCase() + f.testedRange.statement.slice(1)}.
+              </dd>
+            </>
           ) : (
             <dd className="text-sm text-ink-700">Every branch stays damped over the sweep.</dd>
           )}
         </div>
-        <div>
-          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Divergence</dt>
-          <dd className="text-lg font-semibold">
-            {divergence ? <Speed mps={divergence.speed} showKmh={showKmh} /> : <span className="text-base text-ink-700">none in the sweep</span>}
+        <div className="col-span-2 sm:col-span-1">
+          <Label>Divergence</Label>
+          <dd className="text-sm" data-testid="divergence-closed-form">
+            <span className="text-ink-600">Closed form (E.24): </span>
+            <span className="font-semibold">{d.closedForm.speedMps !== null ? <Speed mps={d.closedForm.speedMps} showKmh={showKmh} /> : "none"}</span>
+            {d.closedForm.speedMps !== null && !d.closedForm.withinSweep ? <span className="text-ink-600"> (beyond the sweep)</span> : null}
           </dd>
-          {!divergence ? (
-            <dd className="text-xs text-ink-600">
-              {closedForm !== null ? <>closed form <Speed mps={closedForm} showKmh={showKmh} /></> : "not possible (dC_M/dα ≤ 0)"}
-            </dd>
-          ) : null}
+          <dd className="text-sm" data-testid="divergence-static">
+            <span className="text-ink-600">Static instability (sweep{d.staticInstability.branch ? `, ${d.staticInstability.branch}` : ""}): </span>
+            <span className="font-semibold">{d.staticInstability.speedMps !== null ? <Speed mps={d.staticInstability.speedMps} showKmh={showKmh} /> : "none"}</span>
+          </dd>
         </div>
-        <div>
-          <dt className="text-xs font-semibold tracking-wide text-ink-600 uppercase">Selberg estimate</dt>
+        <div className="col-span-2 sm:col-span-1">
+          <Label>Selberg estimate</Label>
           <dd className="text-lg font-semibold">
-            {selberg !== null ? <Speed mps={selberg} showKmh={showKmh} /> : <span className="text-base text-ink-700">n/a (f<sub>α</sub> ≤ f<sub>h</sub>)</span>}
+            {a.selberg.speedMps !== null ? <Speed mps={a.selberg.speedMps} showKmh={showKmh} /> : <span className="text-base text-ink-700">n/a (f<sub>α</sub> ≤ f<sub>h</sub>)</span>}
           </dd>
-          <dd className="text-xs text-ink-600">thin plate, no damping</dd>
+          <dd className="text-xs text-ink-600">thin plate, no damping; no margin uses it</dd>
         </div>
       </dl>
+      <p className="text-sm text-ink-700" data-testid="divergence-basis">{d.marginBasis}</p>
 
-      {margins ? (
+      {a.margins ? (
         <div className="grid gap-2 sm:grid-cols-2" aria-label="Margins against the required speeds">
-          <MarginLine label="Flutter" margin={margins.flutter} />
-          <MarginLine label="Divergence" margin={margins.divergence} />
+          <MarginLine label="Flutter" margin={a.margins.flutter} />
+          <MarginLine label={`Divergence (${d.governing === "static-instability" ? "static instability" : "closed form"})`} margin={a.margins.divergence} />
         </div>
       ) : (
-        <p className="text-sm text-ink-600">No design wind saved for this project yet: margins appear once its criteria are set.</p>
+        <p className="text-sm text-ink-600">{a.criteriaNote ?? "No criteria: no margins."}</p>
       )}
+      <p className="flex items-start gap-2 text-sm" data-testid="vortex-screening">
+        <VerdictBadge status={a.vortexShedding.status} className="mt-0.5" />
+        <span>
+          <span className="font-semibold">Vortex shedding (screening):</span> {a.vortexShedding.statement}
+        </span>
+      </p>
 
-      {warnings.length > 0 ? (
-        <ul className="space-y-1.5" aria-label="Warnings">
-          {warnings.map((warning, i) => (
-            <li key={i} className="rounded-md border-l-4 border-l-caution-400 bg-caution-100 px-3 py-1.5 text-sm text-ink-900">
-              <span className="font-semibold text-caution-700">{WARNING_TITLES[warning.code]}</span>
-              {warningSpeeds(warning) ? <span className="num ml-1 text-caution-700">({warningSpeeds(warning)})</span> : null}
-              {": "}
-              {explainWarning(warning.code)}
-            </li>
-          ))}
-        </ul>
+      {a.warnings.length > 0 ? (
+        <div>
+          <p className="text-sm font-semibold text-caution-700" data-testid="warning-count">{warningCountText(a)}</p>
+          <ul className="mt-1 space-y-1.5" aria-label="Warnings">
+            {a.warnings.map((warning, i) => (
+              <li key={i} className="rounded-md border-l-4 border-l-caution-400 bg-caution-100 px-3 py-1.5 text-sm text-ink-900">
+                <span className="font-semibold text-caution-700">{warning.title}</span>
+                {warning.speeds ? <span className="num ml-1 text-caution-700">({warning.speeds})</span> : null}
+                {": "}
+                {warning.message}
+                {warning.explanation ? <span className="block text-xs text-ink-700">{warning.explanation}</span> : null}
+              </li>
+            ))}
+          </ul>
+        </div>
       ) : (
-        <p className="text-sm text-ink-600">No warnings from the engine.</p>
+        <p className="text-sm text-ink-600" data-testid="warning-count">No warnings from the engine.</p>
       )}
     </div>
   );
 }
 
-const STATUS = {
-  pass: { text: "Pass", tone: "bg-steady-100 text-steady-700" },
-  fail: { text: "Fail", tone: "bg-signal-600 text-white" },
-  undetermined: { text: "Extend sweep", tone: "bg-caution-100 text-caution-700" },
-  investigate: { text: "Investigate", tone: "bg-caution-100 text-caution-700" },
-  clear: { text: "Clear", tone: "bg-steady-100 text-steady-700" },
-  "not-evaluated": { text: "Not evaluated", tone: "bg-ink-100 text-ink-700" },
-} as const;
-
-function MarginLine({ label, margin }: { label: string; margin: Margin }) {
-  const status = STATUS[margin.status];
+function MarginLine({ label, margin }: { label: string; margin: StabilityMargin }) {
   return (
     <div className="flex items-start gap-2 rounded-md border border-ink-200 bg-white px-3 py-1.5 text-sm">
-      <span className={cn("mt-0.5 shrink-0 rounded-sm px-1.5 text-xs leading-5 font-semibold", status.tone)}>{status.text}</span>
+      <VerdictBadge status={margin.status} className="mt-0.5" />
       <span>
         <span className="font-semibold">{label}</span>{" "}
         <span className="num text-ink-700">
-          required {margin.requiredSpeedMps.toFixed(1)} m/s
+          required {margin.requiredSpeedMps.toFixed(2)} m/s
           {margin.margin !== null ? ` · margin ${margin.marginIsLowerBound ? "≥ " : ""}${margin.margin.toFixed(2)}` : ""}
         </span>
       </span>

@@ -4,8 +4,7 @@ import type { RevisionSummaryDto } from "@shared/schemas/revisions";
 import { paths } from "@/config/paths";
 import { cn } from "@/lib/cn";
 import { formatDateTime } from "@/lib/format";
-import { WARNING_TITLES } from "@/features/studies/utils/warning-text";
-import type { SweepWarningCode } from "@shared/schemas/result";
+import { divergenceFigure, flutterFigure, flutterTone, warningCountText } from "@/lib/verdict";
 
 interface RevisionTimelineProps {
   projectId: string;
@@ -23,7 +22,7 @@ export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, 
   return (
     <ol aria-label="Revisions, newest first" className="divide-y divide-ink-100">
       {revisions.map((revision) => {
-        const { critical } = revision;
+        const a = revision.assessment.assessment;
         return (
           <li key={revision.id} className={cn("grid grid-cols-[3.5rem_minmax(0,1fr)_auto] gap-3 px-4 py-2.5", (revision.id === fromId || revision.id === toId) && "bg-tide-50")}>
             <div className="text-center">
@@ -39,15 +38,13 @@ export function RevisionTimeline({ projectId, studyId, revisions, fromId, toId, 
               {renderReviewState ? <div>{renderReviewState(revision)}</div> : null}
               <p className="text-[0.95rem] text-ink-950">{revision.changeNote || <span className="text-ink-600 italic">No change note (first revision)</span>}</p>
               <p className="num text-sm">
-                <span className={critical.flutter ? "font-semibold text-signal-700" : "font-semibold text-steady-700"}>
-                  {critical.flutter ? `Flutter ${critical.flutter.speedMps.toFixed(2)} m/s` : `No flutter up to ${critical.sweepToMps.toFixed(0)} m/s`}
-                </span>
-                {critical.flutter ? <span className="text-ink-700"> · {critical.flutter.frequencyHz.toFixed(3)} Hz · {critical.flutter.kind}</span> : null}
-                <span className="text-ink-700" title={critical.divergenceNote ?? undefined}> · divergence {critical.divergenceSpeedMps !== null ? `${critical.divergenceSpeedMps.toFixed(1)} m/s` : "not possible"}</span>
+                <span className={cn("font-semibold", flutterTone(a))}>Flutter {flutterFigure(a)}</span>
+                {a.flutter.found ? <span className="text-ink-700"> · {a.flutter.frequencyHz.toFixed(4)} Hz · {a.flutter.kind}</span> : null}
+                <span className="text-ink-700" title={a.divergence.marginBasis}> · divergence {divergenceFigure(a)}</span>
               </p>
-              {critical.warningCodes.length > 0 ? (
-                <p className="text-xs text-caution-700">
-                  {[...new Set(critical.warningCodes)].map((code) => WARNING_TITLES[code as SweepWarningCode] ?? code).join(" · ")}
+              {a.warningCount > 0 ? (
+                <p className="text-xs text-caution-700" title={[...new Set(a.warnings.map((w) => w.title))].join(" · ")}>
+                  {warningCountText(a)}: {[...new Set(a.warnings.map((w) => w.title))].join(" · ")}
                 </p>
               ) : null}
             </div>

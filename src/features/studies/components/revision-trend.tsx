@@ -3,7 +3,7 @@ import type { RevisionSummaryDto } from "@shared/schemas/revisions";
 import { Plot } from "@/components/ui/plot";
 import { axis, baseLayout, seriesColour, token } from "@/components/ui/plot-theme";
 
-/** Critical speeds by revision number: flutter (or the sweep's end when none was found) and divergence. */
+/** Critical speeds by revision number, from each revision's assessment: flutter (or the sweep's end when none was found) and divergence. */
 export function RevisionTrend({ revisions }: { revisions: readonly RevisionSummaryDto[] }) {
   const figure = useMemo(() => {
     const ordered = [...revisions].sort((a, b) => a.number - b.number);
@@ -13,19 +13,19 @@ export function RevisionTrend({ revisions }: { revisions: readonly RevisionSumma
       data: [
         {
           type: "scatter", mode: "lines+markers", name: "Flutter", x,
-          y: ordered.map((r) => r.critical.flutter?.speedMps ?? null),
-          customdata: notes, line: { color: token("--color-signal-600"), width: 2 }, marker: { size: 8 },
+          y: ordered.map((r) => { const f = r.assessment.assessment.flutter; return f.found ? f.speedMps : null; }),
+          customdata: notes, line: { color: token("--color-ink-900"), width: 2 }, marker: { size: 8 },
           hovertemplate: "r%{x}: %{y:.2f} m/s<br>%{customdata}<extra>flutter</extra>",
         },
         {
           type: "scatter", mode: "markers", name: "No flutter up to", x,
-          y: ordered.map((r) => (r.critical.flutter ? null : r.critical.sweepToMps)),
+          y: ordered.map((r) => { const f = r.assessment.assessment.flutter; return f.found ? null : f.upToMps; }),
           marker: { symbol: "triangle-up-open", size: 10, color: token("--color-ink-600") },
           hovertemplate: "r%{x}: none up to %{y:.0f} m/s<extra></extra>",
         },
         {
-          type: "scatter", mode: "lines+markers", name: "Divergence", x,
-          y: ordered.map((r) => r.critical.divergenceSpeedMps), customdata: notes,
+          type: "scatter", mode: "lines+markers", name: "Divergence (the figure the margin uses)", x,
+          y: ordered.map((r) => r.assessment.assessment.divergence.governingSpeedMps), customdata: notes,
           line: { color: seriesColour(1), width: 1.5, dash: "dash" }, marker: { size: 6 },
           hovertemplate: "r%{x}: %{y:.1f} m/s<br>%{customdata}<extra>divergence</extra>",
         },

@@ -1,7 +1,7 @@
 import { useWatch, type Control, type FieldErrors, type UseFormRegister } from "react-hook-form";
 import type { StudyDocument } from "@shared/schemas/study";
 import { dampingWarning } from "@/features/studies/utils/damping-warning";
-import { derivedQuantities, type DeepPartial } from "@/features/studies/utils/derived-quantities";
+import { derivedQuantities, type DeepPartial } from "@shared/study-derived-quantities";
 import { QuantityField } from "@/features/studies/components/quantity-field";
 
 interface StructureFieldsProps {

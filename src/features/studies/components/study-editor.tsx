@@ -1,6 +1,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo, useState, type ReactNode } from "react";
 import { useForm, useWatch } from "react-hook-form";
+import { assessRevision } from "@shared/assessment/assess-revision";
+import type { Assessment } from "@shared/schemas/assessment";
 import type { ProjectCriteriaDto } from "@shared/schemas/criteria";
 import type { DatasetDto } from "@shared/schemas/datasets";
 import type { SweepResult } from "@shared/schemas/result";
@@ -40,8 +42,8 @@ export interface StudyEditorProps {
   /** Why the alternative's data sets could not be loaded, if they could not. */
   datasetsError: string | null;
   onRebased: (draft: RebasedDraft) => void;
-  /** Further panels under the result (screening, all margins, the revision's review), composed in by the route. */
-  renderChecks?: (document: StudyDocument, result: SweepResult, revision: RevisionDto) => ReactNode;
+  /** Further panels under the result (screening, all margins), composed in by the route, from the shown result's assessment. */
+  renderChecks?: (document: StudyDocument, assessment: Assessment, revision: RevisionDto) => ReactNode;
   /** A panel across the full width under both columns (the revision's review), composed in by the route. */
   renderFullWidth?: (revision: RevisionDto) => ReactNode;
 }
@@ -50,6 +52,8 @@ interface ShownResult {
   result: SweepResult;
   /** The document it was computed from (to tell when the inputs have moved on). */
   document: StudyDocument;
+  /** What a reader is told about it: the revision's stored assessment, or, for an unsaved run, the same assessment computed here. */
+  assessment: Assessment;
   source: string;
   /** Where its full step table comes from. */
   steps: StepsSource;
@@ -76,12 +80,13 @@ export function StudyEditor(props: StudyEditorProps) {
   const [shown, setShown] = useState<ShownResult>(() => ({
     result: revision.result,
     document: revision.study,
+    assessment: revision.assessment.assessment,
     source: `Stored with revision ${revision.number}`,
     steps: { revisionId: revision.id },
   }));
   const runSweep = useRunSweep();
   // Stable while typing, so the plots redraw only when a new result arrives.
-  const resultRuns = useMemo(() => [{ name: "Result", result: shown.result }], [shown.result]);
+  const resultRuns = useMemo(() => [{ name: "Result", result: shown.result, assessment: shown.assessment }], [shown.result, shown.assessment]);
 
   const valuesKey = keyOf(values);
   const parsed = useMemo(() => studyDocumentSchema.safeParse(values), [valuesKey]); // eslint-disable-line react-hooks/exhaustive-deps
@@ -113,6 +118,12 @@ export function StudyEditor(props: StudyEditorProps) {
         setShown({
           result,
           document,
+          // Not stored: the same assessment function the server stores for a revision, against the current criteria.
+          assessment: assessRevision({
+            document,
+            result,
+            criteria: criteria?.version != null && criteria.criteria ? { version: criteria.version, criteria: criteria.criteria } : null,
+          }),
           source: `Server run at ${formatDateTime(new Date().toISOString())} — not saved`,
           steps: { document },
         }),
@@ -222,11 +233,11 @@ export function StudyEditor(props: StudyEditorProps) {
                 {resultIsStale ? "The inputs have changed since this result. Run the sweep to update it." : "This result belongs to the inputs as they are now."}
               </p>
             ) : null}
-            <ResultSummary result={shown.result} document={shown.document} criteria={criteria} showKmh={showKmh} />
+            <ResultSummary assessment={shown.assessment} showKmh={showKmh} />
             <p className="mt-2 font-mono text-xs text-ink-600">engine {shown.result.engine}</p>
           </Card>
           <ResultPlots runs={resultRuns} dimmed={runSweep.isPending} />
-          {renderChecks?.(shown.document, shown.result, revision)}
+          {renderChecks?.(shown.document, shown.assessment, revision)}
         </div>
       </div>
       {renderFullWidth?.(revision)}

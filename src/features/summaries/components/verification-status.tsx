@@ -3,7 +3,13 @@ import { Spinner } from "@/components/ui/spinner";
 import { cn } from "@/lib/cn";
 
 /** The outcome of the in-browser signature check, worded for the owner's representative. */
-export function VerificationStatus({ verification, code, jwksUrl }: { verification: Verification; code: string; jwksUrl: string }) {
+export function VerificationStatus({ verification, code, jwksUrl, verificationUrl }: {
+  verification: Verification;
+  code: string;
+  jwksUrl: string;
+  /** The public page that checks this summary by its code (printed on the PDF). */
+  verificationUrl?: string;
+}) {
   const tone =
     verification.status === "verified"
       ? "border-steady-600 bg-steady-100 text-steady-700"
@@ -25,6 +31,12 @@ export function VerificationStatus({ verification, code, jwksUrl }: { verificati
             Checked in your browser: the signature matches every number on this page, under the server's published key{" "}
             <span className="num break-all">{verification.kid}</span> (<a className="underline" href={jwksUrl}>{jwksUrl}</a>).
             Verification code <span className="num font-semibold">{code}</span> — the same code is printed on the PDF.
+            {verificationUrl ? (
+              <>
+                {" "}Anyone holding the PDF can check it without an account at{" "}
+                <a className="break-all underline" href={verificationUrl}>{verificationUrl}</a>.
+              </>
+            ) : null}
           </p>
         </>
       ) : (

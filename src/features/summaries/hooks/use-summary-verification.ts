@@ -1,6 +1,6 @@
 import { useQuery } from "@tanstack/react-query";
 import { canonicalJson } from "@shared/canonical-json";
-import type { SummaryPayload } from "@shared/schemas/summary";
+import type { SignedSummaryPayload } from "@shared/schemas/summary";
 import { verifySummary } from "@shared/verify-summary";
 import { queryKeys } from "@/lib/query-keys";
 import { getJwksQueryOptions } from "@/features/summaries/api/get-jwks";
@@ -15,7 +15,7 @@ export type Verification =
  * names), its payload in RFC 8785 canonical form and matching the summary schema — the same routine the server's
  * POST /api/signatures/verify runs — and that what the page shows is exactly the signed content.
  */
-export function useSummaryVerification(summaryId: string, jws: string, shown: SummaryPayload): Verification {
+export function useSummaryVerification(summaryId: string, jws: string, shown: SignedSummaryPayload): Verification {
   const jwks = useQuery(getJwksQueryOptions());
   const check = useQuery({
     queryKey: queryKeys.signatures.verify(summaryId, jws),

@@ -32,7 +32,7 @@ describe("screening options as typed", () => {
   });
 
   it("text that is not a number is named at its field", async () => {
-    const { errors } = await resolve({ ...toOptionsValues(), momentSlope: "1,2" });
-    expect(errors.momentSlope?.message).toBe("must be a number");
+    const { errors } = await resolve({ ...toOptionsValues(), dragCoefficient: "1,2" });
+    expect(errors.dragCoefficient?.message).toBe("must be a number");
   });
 });

@@ -4,7 +4,8 @@ import { benchmarkDeck } from "@shared/engine/__tests__/support/benchmark-deck";
 import { aeroFigure } from "@/features/studies/utils/aero-figure";
 import { stepRows } from "@/features/studies/utils/step-rows";
 import { dampingFigure, polePathFigure } from "@/features/studies/utils/result-figures";
-import { dampingAxisRange } from "@/lib/damping-frame";
+import { assessRevision } from "@shared/assessment/assess-revision";
+import { dampingAxisRange } from "@shared/figures/figure-data";
 
 /** The IABSE TG 3.1 benchmark deck on a short coarse sweep (the engine tests' one definition); only the plot and table plumbing is checked. */
 const study = benchmarkDeck({ from: 60, to: 90, step: 2 });
@@ -23,32 +24,29 @@ describe("step rows of the steps table", () => {
 });
 
 describe("result figures", () => {
-  it("mark the flutter point on the imaginary axis at 2π f_F, and the zero-damping line", () => {
+  it("draw the shared figure data: the flutter point on the imaginary axis, the zero-damping line, the flutter speed", () => {
     expect(result.flutter).not.toBeNull();
-    const poles = polePathFigure([{ name: "r1", result }]);
+    const assessment = assessRevision({ document: study, result, criteria: null });
+    const poles = polePathFigure([{ name: "r1", result, assessment }]);
     const marker = poles.data.find((t) => t.name === "Flutter point")!;
     expect(marker.x).toEqual([0]);
     expect((marker.y as number[])[0]).toBeCloseTo(2 * Math.PI * result.flutter!.frequency, 12);
-    const damping = dampingFigure([{ name: "r1", result }]);
+    const damping = dampingFigure([{ name: "r1", result, assessment }]);
     const shapes = damping.layout.shapes as Array<Record<string, unknown>>;
     expect(shapes.some((s) => s.yref === "y" && s.y0 === 0 && s.y1 === 0)).toBe(true);
     expect(shapes.some((s) => s.x0 === result.flutter!.speed && s.x1 === result.flutter!.speed)).toBe(true);
+    expect((damping.layout.yaxis as { range: [number, number] }).range).toEqual(dampingAxisRange(result.modes.flatMap((m) => m.steps)));
   });
-});
 
-describe("damping plot of a branch that turns into a real pole", () => {
-  it("leaves a gap where the pole does not oscillate instead of a wall from +100 % to -100 %", () => {
-    const step = (speed: number, frequency: number, damping: number) =>
-      ({ speed, frequency, damping, re: 0, im: 0, participation: { h: 1 }, mac: 1, confidence: 1 });
-    const real = {
-      ...result,
-      modes: [{ ...result.modes[0], steps: [step(10, 0.1, 0.02), step(20, 0, 1), step(30, 0, -1), step(40, 0.1, 0.03)] }],
-    } as typeof result;
-    const figure = dampingFigure([{ name: "r1", result: real }]);
-    expect((figure.data[0] as { y: Array<number | null> }).y).toEqual([2, null, null, 3]);
-    const range = (figure.layout.yaxis as { range: [number, number] }).range;
-    expect(range[1]).toBeLessThan(50);
-    expect(range).toEqual(dampingAxisRange(real.modes[0].steps)); // the framing shared with the signed summary
+  it("colour the flutter speed by its verdict, not by being a flutter speed", () => {
+    const passing = assessRevision({ document: study, result, criteria: null });
+    const line = (a: typeof passing) =>
+      (dampingFigure([{ name: "r1", result, assessment: a }]).layout.shapes as Array<{ x0: number; line: { color: string } }>).find(
+        (s) => s.x0 === result.flutter!.speed,
+      )!.line.color;
+    const failing = structuredClone(passing);
+    failing.margins = { flutter: { status: "fail" } } as typeof failing.margins;
+    expect(line(failing)).not.toBe(line(passing));
   });
 });
 

@@ -7,7 +7,8 @@ import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vite
 import { canonicalJsonBytes } from "@shared/canonical-json";
 import type { SummaryDto } from "@shared/schemas/review";
 import { SUMMARY_JWS_TYP } from "@shared/schemas/summary";
-import { inventedSummary } from "@shared/schemas/__tests__/fixtures/invented-summary";
+import { inventedSummaryV1 } from "@shared/schemas/__tests__/fixtures/invented-summary-v1";
+import { inventedSummary } from "@shared/schemas/__tests__/fixtures/invented-summary-v2";
 import { createQueryClient } from "@/lib/query-client";
 import { SummaryView } from "@/features/summaries/components/summary-view";
 
@@ -16,6 +17,7 @@ vi.mock("@/components/ui/plot", () => ({ Plot: ({ label }: { label: string }) =>
 
 let jwks: { keys: JWK[] };
 let jws: string;
+let jwsV1: string;
 
 beforeAll(async () => {
   const { privateKey, publicKey } = await generateKeyPair("EdDSA", { crv: "Ed25519", extractable: true });
@@ -23,9 +25,10 @@ beforeAll(async () => {
   const kid = await calculateJwkThumbprint(publicJwk);
   jwks = { keys: [{ ...publicJwk, kid, alg: "EdDSA", use: "sig" }] };
   // Copied into this realm's Uint8Array: jsdom's TextEncoder returns another realm's, which jose refuses.
-  jws = await new CompactSign(Uint8Array.from(canonicalJsonBytes(inventedSummary())))
-    .setProtectedHeader({ alg: "EdDSA", kid, typ: SUMMARY_JWS_TYP })
-    .sign(privateKey);
+  const sign = (payload: unknown) =>
+    new CompactSign(Uint8Array.from(canonicalJsonBytes(payload))).setProtectedHeader({ alg: "EdDSA", kid, typ: SUMMARY_JWS_TYP }).sign(privateKey);
+  jws = await sign(inventedSummary());
+  jwsV1 = await sign(inventedSummaryV1());
 });
 
 function dto(overrides: Partial<SummaryDto> = {}): SummaryDto {
@@ -46,6 +49,7 @@ function dto(overrides: Partial<SummaryDto> = {}): SummaryDto {
     branches: [],
     branchSampling: null,
     jwksUrl: "/.well-known/jwks.json",
+    verificationUrl: "https://stillspan.example.org/verify/1c64-d3c2-72e2",
     ...overrides,
   };
 }
@@ -78,12 +82,23 @@ describe("SummaryView: the signature is checked in the browser against the JWKS"
     expect(String(fetchMock.mock.calls[0][0])).toBe("/.well-known/jwks.json");
     expect(screen.getByRole("region", { name: "Signature" })).toHaveTextContent(jwks.keys[0].kid!);
     expect(screen.getByRole("region", { name: "Signature" })).toHaveTextContent("1c64-d3c2-72e2");
+    expect(screen.getByRole("region", { name: "Signature" })).toHaveTextContent("https://stillspan.example.org/verify/1c64-d3c2-72e2");
+    const a = inventedSummary().assessment;
+    if (!a.flutter.found) throw new Error("the fixture has flutter");
+    expect(screen.getByTestId("summary-flutter")).toHaveTextContent(`${a.flutter.speedMps.toFixed(2)} m/s`);
+    expect(screen.getByTestId("summary-tested-range")).toHaveTextContent("within the tested range");
+  });
+
+  it("still verifies and shows a summary signed in format 1, as signed", async () => {
+    renderView(dto({ payload: inventedSummaryV1(), jws: jwsV1 }));
+    expect(await screen.findByText("✓ Verified", {}, { timeout: 5000 })).toBeInTheDocument();
     expect(screen.getByText("78.4 m/s", { selector: "p" })).toBeInTheDocument();
+    expect(screen.getByText(/Signed in summary format 1/)).toBeInTheDocument();
   });
 
   it("shows Not verified when the numbers on the page differ from the signed ones", async () => {
     const shown = inventedSummary();
-    shown.flutter!.speedMps = 88.412;
+    if (shown.assessment.flutter.found) shown.assessment.flutter.speedMps = 88.412;
     renderView(dto({ payload: shown }));
     expect(await screen.findByText("✗ Not verified", {}, { timeout: 5000 })).toBeInTheDocument();
     expect(screen.getByRole("region", { name: "Signature" })).toHaveTextContent("differ from the signed content");
@@ -104,15 +119,23 @@ describe("SummaryView: the signature is checked in the browser against the JWKS"
     expect(screen.getByRole("link", { name: "Open the current summary (revision 4)" })).toHaveAttribute("href", "/summaries/8");
   });
 
-  it("shows vortex shedding to investigate in the caution colour and galloping not evaluated in neutral, never as Fail", () => {
+  it("colours the flutter speed by its verdict and shows vortex shedding as a screening result, never as Fail", () => {
     renderView(dto());
-    const margins = screen.getByRole("region", { name: "Margins against the required speeds" });
-    const row = (name: string) => within(margins).getByRole("rowheader", { name: new RegExp(name) }).closest("tr") as HTMLElement;
-    const vortex = within(row("Vortex-shedding onset")).getByText("Investigate");
+    expect(screen.getByTestId("summary-flutter").className).toMatch(/steady/);
+    const vortex = within(screen.getByTestId("summary-vortex")).getByText("investigate");
     expect(vortex.className).toMatch(/caution/);
     expect(vortex.className).not.toMatch(/signal/);
-    const galloping = within(row("Galloping onset")).getByText("Not evaluated");
+    const margins = screen.getByRole("region", { name: "Margins against the required speeds" });
+    expect(within(margins).queryByRole("rowheader", { name: /Vortex/ })).toBeNull();
+    const galloping = within(within(margins).getByRole("rowheader", { name: /Galloping onset/ }).closest("tr") as HTMLElement).getByText("not evaluated");
     expect(galloping.className).not.toMatch(/signal|caution/);
-    expect(within(margins).queryByText("Fail")).toBeNull();
+    expect(within(margins).queryByText("fail")).toBeNull();
+  });
+
+  it("writes a failing flutter speed in the failure colour", () => {
+    const failing = inventedSummary();
+    failing.assessment.margins!.flutter.status = "fail";
+    renderView(dto({ payload: failing }));
+    expect(screen.getByTestId("summary-flutter").className).toMatch(/signal/);
   });
 });

@@ -1,4 +1,4 @@
-import type { StudyDocument } from "@shared/schemas/study";
+import type { StudyDocument } from "./schemas/study";
 
 export interface DerivedQuantities {
   /** f_torsion / f_heave, dimensionless; null until both frequencies are valid. */
@@ -9,15 +9,17 @@ export interface DerivedQuantities {
   radiusOverWidth: number | null;
   /** Mass ratio μ = m/(ρB²), dimensionless; null with still air. */
   massRatio: number | null;
+  /** Inertia ratio I/(ρB⁴), dimensionless; null with still air. */
+  inertiaRatio: number | null;
 }
 
 const positive = (value: unknown): value is number => typeof value === "number" && Number.isFinite(value) && value > 0;
 
 /**
  * The quantities an aerodynamicist checks while typing the structure: frequency ratio f_α/f_h (flutter is
- * coupled and Selberg's estimate applies only above 1), radius of gyration √(I/m) and the mass ratio m/(ρB²).
- * Reads a partly filled form, so every input may be missing or invalid: each quantity is null until its inputs
- * are valid.
+ * coupled and Selberg's estimate applies only above 1), radius of gyration √(I/m), the mass ratio m/(ρB²) and the
+ * inertia ratio I/(ρB⁴). Reads a partly filled form (the study form), or a whole document (the signed summary's
+ * inputs), so every input may be missing or invalid: each quantity is null until its inputs are valid.
  */
 export function derivedQuantities(values: DeepPartial<StudyDocument>): DerivedQuantities {
   const modes = values.structure?.modes ?? [];
@@ -33,6 +35,7 @@ export function derivedQuantities(values: DeepPartial<StudyDocument>): DerivedQu
     radiusOfGyrationM: radius,
     radiusOverWidth: radius !== null && positive(width) ? radius / width : null,
     massRatio: positive(mass) && positive(width) && positive(density) ? mass / (density * width * width) : null,
+    inertiaRatio: positive(inertia) && positive(width) && positive(density) ? inertia / (density * width ** 4) : null,
   };
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { StudyAerodynamics } from "../../../shared/schemas/study.js";
-import { matchingDataset } from "../summary-payload.js";
+import { matchingDataset } from "../summary-inputs.js";
 
 type Dataset = Parameters<typeof matchingDataset>[0][number];
 
