@@ -72,16 +72,24 @@ describe("criteria a signer can stand behind", () => {
     expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(200);
     const after = await preview(revisionIds[1]);
     expect(after.body).toMatchObject({ unconfirmedBases: [], signBlocker: null, criteriaVersion: 2 });
-    // Confirming changes no word of the summary: the preview read before still is what gets signed.
-    expect(after.body.previewSha256).toBe(before.body.previewSha256);
-    const signed = await sign(revisionIds[1], before.body.previewSha256, "Signed against confirmed criteria.");
+    // Confirming saves a new criteria version, so the summary states a new assessment (against version 2): the
+    // preview read before is outdated, and the one read after is what gets signed.
+    expect(after.body.payload.assessment.computedFrom.criteriaVersion).toBe(2);
+    expect(after.body.previewSha256).not.toBe(before.body.previewSha256);
+    expect((await sign(revisionIds[1], before.body.previewSha256, "Signed against confirmed criteria.")).body.error.code).toBe("preview_outdated");
+    const signed = await sign(revisionIds[1], after.body.previewSha256, "Signed against confirmed criteria.");
     expect(signed.status, JSON.stringify(signed.body)).toBe(201);
 
-    // What was signed is the preview, with only the statement and the time of signing added.
+    // What was signed is the preview, with only the statement and the time of signing added (the signing time is
+    // also the sign-off block's time of checking and approval).
     const summary = await api(base(), `/api/summaries/${signed.body.summaryId}`, { cookie: cookies.viewer });
-    const { signedAt: _a, statement, ...signedContent } = summary.body.payload;
-    const { signedAt: _b, statement: _s, ...previewContent } = after.body.payload;
-    expect(signedContent).toEqual(previewContent);
+    const withoutSigningTime = ({ signedAt, statement: _s, ...rest }: Record<string, any>) => {
+      expect(rest.signoff.checked.at).toBe(signedAt);
+      expect(rest.signoff.approved.at).toBe(signedAt);
+      return { ...rest, signoff: { ...rest.signoff, checked: { ...rest.signoff.checked, at: null }, approved: { ...rest.signoff.approved, at: null } } };
+    };
+    const statement = summary.body.payload.statement;
+    expect(withoutSigningTime(summary.body.payload)).toEqual(withoutSigningTime(after.body.payload));
     expect(statement).toBe("Signed against confirmed criteria.");
   });
 
@@ -104,7 +112,7 @@ describe("criteria a signer can stand behind", () => {
 
     const reread = await preview(revisionIds[2]);
     expect(reread.body.previewSha256).not.toBe(read.body.previewSha256);
-    const flutter = reread.body.payload.criteria.find((c: { phenomenon: string }) => c.phenomenon === "flutter");
+    const flutter = reread.body.payload.assessment.required.find((c: { phenomenon: string }) => c.phenomenon === "flutter");
     expect(flutter.basis).toContain("Owner's specification, clause 4.1 (invented for the test)");
     const signed = await sign(revisionIds[2], reread.body.previewSha256);
     expect(signed.status, JSON.stringify(signed.body)).toBe(201);
@@ -166,7 +174,10 @@ describe("review states and resubmission", () => {
     const codes: string[] = revision.body.result.warnings.map((w: { code: string }) => w.code);
     // The fixture's table is left by both branches: the same kind twice, which a count of kinds would halve.
     expect(new Set(codes).size).toBeLessThan(codes.length);
-    expect(item.warningCount).toBe(codes.length);
+    // The queue and the study read one stored assessment.
+    expect(item.assessment.id).toBe(revision.body.assessment.id);
+    expect(item.assessment.assessment.warningCount).toBe(codes.length);
+    expect(revision.body.assessment.assessment.warningCount).toBe(codes.length);
   });
 });
 
@@ -180,7 +191,9 @@ describe("the seeded demo", () => {
       const { payload } = (await api(base(), `/api/summaries/${id}`, { cookie: cookies.viewer })).body;
       const text = JSON.stringify(payload);
       for (const basis of defaults) expect(text, `summary ${id}`).not.toContain(basis);
-      for (const criterion of payload.criteria) {
+      const criteria = payload.format === "stillspan.summary/1" ? payload.criteria : payload.assessment.required;
+      expect(criteria.length).toBeGreaterThan(0);
+      for (const criterion of criteria) {
         expect(criterion.basis[0], `${id} ${criterion.phenomenon}`).toMatch(/^Harrowmere Crossing design basis, invented for the demo, clause 7\.\d\.\d/);
       }
     }
